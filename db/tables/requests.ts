@@ -1,0 +1,192 @@
+// A rider's setup request and everything that hangs off it: recommendation versions, messages,
+// uploads, sag reports, audit events and outbound e-mails.
+import { sql } from "drizzle-orm";
+import {
+  bigserial,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+import { user } from "./auth";
+import { bikeModels } from "./shop";
+
+export const REQUEST_STATUSES = [
+  "submitted",
+  "in_review",
+  "waiting_for_rider",
+  "approved",
+  "declined",
+] as const;
+export type RequestStatus = (typeof REQUEST_STATUSES)[number];
+
+export const setupRequests = pgTable(
+  "setup_requests",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    // Short number for people ("request 1042"); ids stay unguessable.
+    number: bigserial("number", { mode: "number" }).notNull(),
+    status: text("status").$type<RequestStatus>().notNull().default("submitted"),
+    riderName: text("rider_name").notNull(),
+    // Stored lower-cased: "my requests" and the magic-link sign-in match on it.
+    riderEmail: text("rider_email").notNull(),
+    riderPhone: text("rider_phone"),
+    riderUserId: text("rider_user_id").references(() => user.id, { onDelete: "set null" }),
+    discipline: text("discipline").notNull(),
+    skill: text("skill").notNull(),
+    bikeModelId: uuid("bike_model_id").references(() => bikeModels.id, { onDelete: "restrict" }),
+    bikeClass: text("bike_class"),
+    // Human label for lists and search: catalog name, or what the rider typed when not listed.
+    bikeLabel: text("bike_label").notNull(),
+    bikeYear: integer("bike_year"),
+    riderMassKg: doublePrecision("rider_mass_kg").notNull(),
+    // Everything the rider answered, exactly as given (original units included).
+    answers: jsonb("answers").notNull(),
+    // SHA-256 of the private status-link token; the token itself is never stored.
+    statusTokenHash: text("status_token_hash").notNull(),
+    assignedTunerId: text("assigned_tuner_id").references(() => user.id, { onDelete: "set null" }),
+    declineReason: text("decline_reason"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("setup_requests_number_idx").on(t.number),
+    uniqueIndex("setup_requests_token_idx").on(t.statusTokenHash),
+    // Queue: filter by status, newest first; and the plain newest-first listing.
+    index("setup_requests_status_created_idx").on(t.status, t.createdAt),
+    index("setup_requests_created_idx").on(t.createdAt),
+    index("setup_requests_email_idx").on(t.riderEmail),
+    index("setup_requests_tuner_idx").on(t.assignedTunerId, t.createdAt),
+    index("setup_requests_discipline_idx").on(t.discipline, t.createdAt),
+    index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt),
+    index("setup_requests_rider_name_idx").on(sql`lower(${t.riderName})`),
+  ],
+);
+
+export const VERSION_STATES = ["draft", "approved", "superseded"] as const;
+export type VersionState = (typeof VERSION_STATES)[number];
+
+export const recommendationVersions = pgTable(
+  "recommendation_versions",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id")
+      .notNull()
+      .references(() => setupRequests.id, { onDelete: "cascade" }),
+    version: integer("version").notNull(),
+    state: text("state").$type<VersionState>().notNull().default("draft"),
+    engineVersion: text("engine_version").notNull(),
+    // The engine's full input (SI) and output, so a version can be reproduced and explained.
+    input: jsonb("input").notNull(),
+    output: jsonb("output").notNull(),
+    // What the tuner changed against the engine's proposal.
+    overrides: jsonb("overrides").notNull().default({}),
+    notesForRider: text("notes_for_rider"),
+    internalNotes: text("internal_notes"),
+    createdById: text("created_by_id").references(() => user.id, { onDelete: "set null" }),
+    approvedById: text("approved_by_id").references(() => user.id, { onDelete: "set null" }),
+    approvedAt: timestamp("approved_at", { withTimezone: true }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("recommendation_versions_request_version_idx").on(t.requestId, t.version)],
+);
+
+export const requestMessages = pgTable(
+  "request_messages",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id")
+      .notNull()
+      .references(() => setupRequests.id, { onDelete: "cascade" }),
+    // "tuner" asks, "rider" answers.
+    author: text("author").notNull(),
+    authorUserId: text("author_user_id").references(() => user.id, { onDelete: "set null" }),
+    body: text("body").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("request_messages_request_idx").on(t.requestId, t.createdAt)],
+);
+
+export const uploads = pgTable(
+  "uploads",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id")
+      .notNull()
+      .references(() => setupRequests.id, { onDelete: "cascade" }),
+    storageKey: text("storage_key").notNull(),
+    sha256: text("sha256").notNull(),
+    // Kept only as text for display; never used to build a path or a content type.
+    originalName: text("original_name").notNull(),
+    contentType: text("content_type").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("uploads_request_idx").on(t.requestId)],
+);
+
+export const sagReports = pgTable(
+  "sag_reports",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id")
+      .notNull()
+      .references(() => setupRequests.id, { onDelete: "cascade" }),
+    versionId: uuid("version_id").references(() => recommendationVersions.id, {
+      onDelete: "set null",
+    }),
+    // Measurements as the rider gave them (values and unit) and in mm.
+    measured: jsonb("measured").notNull(),
+    verdict: jsonb("verdict").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("sag_reports_request_idx").on(t.requestId, t.createdAt)],
+);
+
+export const auditEvents = pgTable(
+  "audit_events",
+  {
+    id: bigserial("id", { mode: "number" }).primaryKey(),
+    requestId: uuid("request_id").references(() => setupRequests.id, { onDelete: "cascade" }),
+    actorUserId: text("actor_user_id").references(() => user.id, { onDelete: "set null" }),
+    // "rider", "system", or the staff member's name at the time.
+    actorLabel: text("actor_label").notNull(),
+    action: text("action").notNull(),
+    detail: jsonb("detail").notNull().default({}),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    index("audit_events_request_idx").on(t.requestId, t.createdAt),
+    index("audit_events_created_idx").on(t.createdAt),
+  ],
+);
+
+export const EMAIL_STATUSES = ["queued", "sent", "failed"] as const;
+export type EmailStatus = (typeof EMAIL_STATUSES)[number];
+
+export const outboundEmails = pgTable(
+  "outbound_emails",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id").references(() => setupRequests.id, { onDelete: "set null" }),
+    template: text("template").notNull(),
+    toAddress: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    status: text("status").$type<EmailStatus>().notNull().default("queued"),
+    providerMessageId: text("provider_message_id"),
+    attempts: integer("attempts").notNull().default(0),
+    lastError: text("last_error"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp("sent_at", { withTimezone: true }),
+  },
+  (t) => [
+    index("outbound_emails_request_idx").on(t.requestId, t.createdAt),
+    index("outbound_emails_status_idx").on(t.status),
+  ],
+);

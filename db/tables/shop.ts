@@ -1,0 +1,112 @@
+// What makes a shop's Sagwise its own: settings, bike catalog, springs on the shelf, setup targets
+// and clicker rules. Engine-shaped data (bike spec, target values) is jsonb validated by the engine's
+// zod schemas; the columns beside it are the ones the pages list, search and sort by.
+import { sql } from "drizzle-orm";
+import {
+  boolean,
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  smallint,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
+
+export const shopSettings = pgTable("shop_settings", {
+  // A single row: one installation serves one shop.
+  id: smallint("id").primaryKey().default(1),
+  name: text("name").notNull(),
+  email: text("email").notNull(),
+  phone: text("phone"),
+  address: text("address"),
+  website: text("website"),
+  // "metric" | "imperial": what forms and sheets show first.
+  units: text("units").notNull().default("metric"),
+  // "A4" | "LETTER"
+  paperSize: text("paper_size").notNull().default("A4"),
+  sheetFooter: text("sheet_footer"),
+  gearMassKg: doublePrecision("gear_mass_kg").notNull().default(8),
+  // Window for front/rear natural-frequency ratio shown on the review screen.
+  frequencyRatioMin: doublePrecision("frequency_ratio_min").notNull().default(0.9),
+  frequencyRatioMax: doublePrecision("frequency_ratio_max").notNull().default(1.1),
+  updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const bikeModels = pgTable(
+  "bike_models",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    slug: text("slug").notNull(),
+    name: text("name").notNull(),
+    // Generic class, e.g. "mx-450-4t"; used by the queue's bike-class filter.
+    bikeClass: text("bike_class").notNull(),
+    yearFrom: integer("year_from"),
+    yearTo: integer("year_to"),
+    // True for the catalog's generic classes shipped with typical (not maker) values.
+    isTypical: boolean("is_typical").notNull().default(false),
+    forkKind: text("fork_kind").notNull(),
+    rearWheelTravelMm: doublePrecision("rear_wheel_travel_mm").notNull(),
+    // The whole engine-facing description (masses, leverage-ratio points, fork data, clickers),
+    // validated by lib/sizing's bikeSpecSchema on every write.
+    spec: jsonb("spec").notNull(),
+    notes: text("notes"),
+    retiredAt: timestamp("retired_at", { withTimezone: true }),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("bike_models_slug_idx").on(t.slug),
+    index("bike_models_name_idx").on(sql`lower(${t.name})`),
+    index("bike_models_class_idx").on(t.bikeClass),
+  ],
+);
+
+export const springStock = pgTable(
+  "spring_stock",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    // "fork" | "shock"
+    end: text("end").notNull(),
+    rateNmm: doublePrecision("rate_n_mm").notNull(),
+    quantity: integer("quantity").notNull().default(0),
+    freeLengthMm: doublePrecision("free_length_mm"),
+    innerDiameterMm: doublePrecision("inner_diameter_mm"),
+    fitNotes: text("fit_notes"),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("spring_stock_end_rate_idx").on(t.end, t.rateNmm)],
+);
+
+export const setupTargets = pgTable(
+  "setup_targets",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    discipline: text("discipline").notNull(),
+    skill: text("skill").notNull(),
+    // Sag targets, rear share, rate and bottoming factors, shaped by lib/sizing's targets schema.
+    values: jsonb("values").notNull(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("setup_targets_discipline_skill_idx").on(t.discipline, t.skill)],
+);
+
+export const clickerRules = pgTable(
+  "clicker_rules",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    // A complaint or terrain value that triggers the rule.
+    trigger: text("trigger").notNull(),
+    // Which adjuster moves, e.g. "forkCompression"; clicks > 0 open (softer), < 0 close.
+    adjuster: text("adjuster").notNull(),
+    clicks: integer("clicks").notNull(),
+    reason: text("reason").notNull(),
+    sortOrder: integer("sort_order").notNull().default(0),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("clicker_rules_trigger_idx").on(t.trigger)],
+);

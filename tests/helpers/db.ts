@@ -1,0 +1,42 @@
+// A fresh, migrated database for one test file, installed as the app's database.
+// PGlite: an in-memory clone of the dump made in global-setup. PostgreSQL (DATABASE_URL set): a new
+// database created from the migrated template.
+import { readFileSync } from "node:fs";
+import { randomBytes } from "node:crypto";
+import { closeDatabase, openPostgres, useDatabaseForTests, type DatabaseHandle } from "@/db/client";
+
+export async function createTestDatabase(): Promise<DatabaseHandle> {
+  const template = process.env.SAGWISE_TEST_PG_TEMPLATE;
+  const url = process.env.DATABASE_URL;
+  let handle: DatabaseHandle;
+  if (url && template) {
+    const pg = (await import("pg")).default;
+    const name = `sagwise_t${randomBytes(4).toString("hex")}_${template.split("_").pop()}`;
+    const admin = new pg.Client({ connectionString: url });
+    await admin.connect();
+    await admin.query(`create database ${name} template ${template}`);
+    await admin.end();
+    const dbUrl = new URL(url);
+    dbUrl.pathname = `/${name}`;
+    handle = await openPostgres(dbUrl.toString());
+  } else {
+    const dumpPath = process.env.SAGWISE_TEST_PGLITE_DUMP;
+    if (!dumpPath) throw new Error("tests/helpers/global-setup.ts did not run");
+    const { PGlite } = await import("@electric-sql/pglite");
+    const { drizzle } = await import("drizzle-orm/pglite");
+    const schema = await import("@/db/schema");
+    const client = new PGlite({ loadDataDir: new Blob([readFileSync(dumpPath)]) });
+    await client.waitReady;
+    handle = {
+      db: drizzle({ client, schema }) as unknown as DatabaseHandle["db"],
+      kind: "pglite",
+      close: () => client.close(),
+    };
+  }
+  useDatabaseForTests(handle);
+  return handle;
+}
+
+export async function closeTestDatabase(): Promise<void> {
+  await closeDatabase();
+}
