@@ -1,0 +1,136 @@
+import { z } from "zod";
+import { sizingInputSchema, type SizingInputParsed } from "./input-schema";
+import { setupOverridesSchema, type SetupOverrides } from "./overrides";
+import type { Recommendation, SizingWarning } from "./output-schema";
+import { SizingInputError, pathOf } from "./errors";
+import { computeLoads } from "./loads";
+import { checkSagTargets, resolveTargets } from "./targets";
+import { evaluateRear } from "./rear";
+import { evaluateFront } from "./front";
+import { applyClickerRules } from "./clickers";
+import { DEFAULT_CLICKER_RULES } from "./defaults";
+import { ENGINE_VERSION } from "./version";
+import type { SagTargetsMm } from "./selection";
+import { fmt } from "./format";
+
+export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, prefix = ""): z.output<S> {
+  const r = schema.safeParse(value);
+  if (r.success) return r.data;
+  throw new SizingInputError(r.error.issues.map((i) => ({ path: prefix + pathOf(i.path), message: i.message })));
+}
+
+function withSagOverrides(t: SagTargetsMm, ov: { raceSagMm?: number; staticSagMinMm?: number; staticSagMaxMm?: number } | undefined, travelMm: number, path: string): SagTargetsMm {
+  if (!ov) return t;
+  const out = {
+    raceSagMm: ov.raceSagMm ?? t.raceSagMm,
+    staticSagMinMm: ov.staticSagMinMm ?? t.staticSagMinMm,
+    staticSagMaxMm: ov.staticSagMaxMm ?? t.staticSagMaxMm,
+  };
+  checkSagTargets(out, travelMm, path);
+  return out;
+}
+
+/** The whole recommendation with a tuner's overrides applied; `recommend` is this with none. */
+export function evaluateSetup(input: unknown, overrides: unknown = {}): Recommendation {
+  const inp = parseOrThrow(sizingInputSchema, input);
+  const ov = parseOrThrow(setupOverridesSchema, overrides ?? {}, "overrides.");
+  return evaluateParsed(inp, ov);
+}
+
+export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Recommendation {
+  const warnings: SizingWarning[] = [];
+  const reasons: string[] = [];
+  const rt = resolveTargets(inp);
+  const bike = inp.bike;
+  const rearT = withSagOverrides(rt.rear, ov.rear, bike.rear.wheelTravelMm, "overrides.rear");
+  const frontT = withSagOverrides(rt.front, ov.front, bike.fork.travelMm, "overrides.front");
+  const loads = computeLoads(bike, rt.riderMassWithGearKg, rt.riderRearShare);
+  const referenceLoads = computeLoads(bike, bike.referenceRiderMassKg, rt.riderRearShare);
+
+  const range = bike.riderMassRangeKg;
+  if (range && (rt.riderMassWithGearKg < range.min || rt.riderMassWithGearKg > range.max))
+    warnings.push({
+      code: "RIDER_OUTSIDE_BIKE_RANGE",
+      severity: "caution",
+      message: `Rider with gear ${fmt(rt.riderMassWithGearKg, 0)} kg is outside the ${range.min}–${range.max} kg this bike is meant for; check every figure by measuring sag.`,
+      field: "rider.massKg",
+    });
+  reasons.push(
+    `Rider ${fmt(rt.riderMassWithGearKg, 1)} kg with gear${inp.rider.gearIncluded ? " (as given)" : ` (${inp.rider.massKg} kg + ${inp.shop.gearMassKg} kg gear)`}, ${fmt(rt.riderRearShare * 100, 0)} % on the rear in the sag stance.`,
+  );
+
+  const rear = evaluateRear(bike, loads, rearT, rt.rateFactor, inp.stock.shockRatesNmm, ov.rear, warnings, reasons);
+  const front = evaluateFront({
+    bike,
+    loads,
+    referenceLoads,
+    targets: frontT,
+    rateFactor: rt.rateFactor,
+    bottomingFactor: rt.bottomingFactor,
+    stockRatesNmm: inp.stock.forkRatesNmm,
+    ov: ov.front,
+    warnings,
+    reasons,
+  });
+
+  const frequencyRatio = front.naturalFrequencyHz / rear.naturalFrequencyHz;
+  const win = inp.shop.frequencyRatioWindow;
+  if (!(frequencyRatio >= win.min && frequencyRatio <= win.max))
+    warnings.push({
+      code: "FREQUENCY_RATIO_OUTSIDE_WINDOW",
+      severity: "caution",
+      message: `Front/rear natural frequency ratio ${fmt(frequencyRatio, 2)} is outside the shop's ${win.min}–${win.max}: the ends are unbalanced.`,
+      field: "frequencyRatio",
+    });
+
+  const rateChange = {
+    rear: rear.chosenRate.nMm / rear.stockRate.nMm - 1,
+    front: front.chosenRate && front.stockRate ? front.chosenRate.nMm / front.stockRate.nMm - 1 : null,
+  };
+  const clickers = applyClickerRules(
+    bike.clickers,
+    inp.clickerRules ?? DEFAULT_CLICKER_RULES,
+    { complaints: inp.complaints, terrain: inp.riding.terrain, rateChange },
+    ov.clickers,
+    warnings,
+  );
+  complaintNotes(inp, rear.predicted.raceSagMm, warnings);
+
+  return {
+    engineVersion: ENGINE_VERSION,
+    input: inp,
+    resolved: {
+      riderMassWithGearKg: rt.riderMassWithGearKg,
+      riderRearShare: rt.riderRearShare,
+      rateFactor: rt.rateFactor,
+      bottomingFactor: rt.bottomingFactor,
+      loads: { rearStaticN: loads.rearStaticN, rearRaceN: loads.rearRaceN, frontStaticN: loads.frontStaticN, frontRaceN: loads.frontRaceN },
+      frequencyRatioWindow: { min: win.min, max: win.max },
+    },
+    rear,
+    front,
+    frequencyRatio,
+    clickers,
+    warnings,
+    reasons,
+  };
+}
+
+function complaintNotes(inp: SizingInputParsed, predictedRaceSagMm: number, warnings: SizingWarning[]): void {
+  const m = inp.measuredSag;
+  if (m?.rearRaceSagMm !== undefined && Math.abs(m.rearRaceSagMm - predictedRaceSagMm) > 5)
+    warnings.push({
+      code: "MEASURED_SAG_DIFFERS",
+      severity: "info",
+      message: `Measured rear race sag now is ${fmt(m.rearRaceSagMm, 0)} mm; the new setup aims at ${fmt(predictedRaceSagMm, 0)} mm.`,
+      field: "measuredSag.rearRaceSagMm",
+    });
+  for (const c of ["rides-low", "rides-high"] as const)
+    if (inp.complaints.includes(c))
+      warnings.push({
+        code: c === "rides-low" ? "COMPLAINT_RIDES_LOW" : "COMPLAINT_RIDES_HIGH",
+        severity: "info",
+        message: `Rider reports the bike ${c === "rides-low" ? "rides low" : "rides high"}: a spring and sag question, answered by the rates and preload above; confirm by measuring sag after fitting.`,
+        field: "complaints",
+      });
+}

@@ -1,0 +1,54 @@
+// Public API of the Sagwise sizing engine (issue 3). Pure functions, SI-style units in the names.
+export { recommend } from "./recommend";
+export { evaluateSetup } from "./evaluate";
+export { ENGINE_VERSION } from "./version";
+export { SizingInputError, type SizingIssue } from "./errors";
+
+export {
+  sizingInputSchema,
+  targetsSchema,
+  sagTargetFractionsSchema,
+  clickerRuleSchema,
+  clickerTriggerSchema,
+  type SizingInput,
+  type SizingInputParsed,
+  type SizingTargets,
+  type SagTargetFractions,
+  type ClickerRule,
+} from "./input-schema";
+export { bikeSpecSchema, leveragePointSchema, clickerRangeSchema, type BikeSpec, type BikeSpecInput } from "./bike-schema";
+export {
+  recommendationSchema,
+  warningSchema,
+  rateTripleSchema,
+  pressureTripleSchema,
+  type Recommendation,
+  type RearResult,
+  type FrontResult,
+  type ClickerSetting,
+  type SizingWarning,
+  type RateSource,
+} from "./output-schema";
+export { setupOverridesSchema, type SetupOverrides } from "./overrides";
+export * from "./vocab";
+
+export { shockTravelAtMm, rearWheelForceN, solveRearSagMm, idealRearSpring, type LeveragePoint } from "./linkage";
+export { forkAirForceN, airForkPressureKpaGauge, polytropicPressure } from "./air";
+export { springRateFromGeometry, wahlFactor, rateFromLoadTest, shearStressMpa, activeCoilsSquaredGround } from "./spring-geometry";
+export {
+  convertRate,
+  rateTriple,
+  pressureTriple,
+  poundsToKg,
+  kgToPounds,
+  STANDARD_GRAVITY,
+  KGF_N,
+  LBF_N,
+  INCH_MM,
+  POUND_KG,
+  PSI_KPA,
+  ATMOSPHERE_KPA,
+} from "./units";
+export { naturalFrequencyHz } from "./frequency";
+export { sagVerdict, measuredSagSchema, type SagVerdict } from "./verdict";
+export * as sizingDefaults from "./defaults";

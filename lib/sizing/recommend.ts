@@ -1,0 +1,7 @@
+import type { Recommendation } from "./output-schema";
+import { evaluateSetup } from "./evaluate";
+
+/** The whole recommendation for one rider on one bike under the shop's targets and stock. */
+export function recommend(input: unknown): Recommendation {
+  return evaluateSetup(input, {});
+}
