@@ -66,7 +66,7 @@ function hasBearerKey(req: IncomingMessage): boolean {
 /** The list omits attachment bodies (size and name stay); GET /emails/:id has everything. */
 const summarize = (m: StoredEmail) => ({
   ...m,
-  attachments: m.attachments.map(({ content: _content, ...rest }) => rest),
+  attachments: m.attachments.map((a) => ({ filename: a.filename, content_type: a.content_type, content_id: a.content_id, path: a.path, size: a.size })),
 });
 
 function safeFilename(name: string): { ascii: string; encoded: string } {
