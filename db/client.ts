@@ -86,6 +86,6 @@ export async function closeDatabase(): Promise<void> {
 }
 
 /** Tests hand the app a database of their own (a migrated clone per test file). */
-export function useDatabaseForTests(handle: DatabaseHandle): void {
+export function installTestDatabase(handle: DatabaseHandle): void {
   holder.__sagwiseDb = Promise.resolve(handle);
 }

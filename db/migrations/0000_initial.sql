@@ -70,10 +70,7 @@ CREATE TABLE "bike_models" (
 --> statement-breakpoint
 CREATE TABLE "clicker_rules" (
 	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
-	"trigger" text NOT NULL,
-	"adjuster" text NOT NULL,
-	"clicks" integer NOT NULL,
-	"reason" text NOT NULL,
+	"rule" jsonb NOT NULL,
 	"sort_order" integer DEFAULT 0 NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
 );
@@ -231,7 +228,7 @@ CREATE INDEX "verification_identifier_idx" ON "verification" USING btree ("ident
 CREATE UNIQUE INDEX "bike_models_slug_idx" ON "bike_models" USING btree ("slug");--> statement-breakpoint
 CREATE INDEX "bike_models_name_idx" ON "bike_models" USING btree (lower("name"));--> statement-breakpoint
 CREATE INDEX "bike_models_class_idx" ON "bike_models" USING btree ("bike_class");--> statement-breakpoint
-CREATE INDEX "clicker_rules_trigger_idx" ON "clicker_rules" USING btree ("trigger");--> statement-breakpoint
+CREATE INDEX "clicker_rules_order_idx" ON "clicker_rules" USING btree ("sort_order");--> statement-breakpoint
 CREATE UNIQUE INDEX "setup_targets_discipline_skill_idx" ON "setup_targets" USING btree ("discipline","skill");--> statement-breakpoint
 CREATE INDEX "spring_stock_end_rate_idx" ON "spring_stock" USING btree ("end","rate_n_mm");--> statement-breakpoint
 CREATE INDEX "audit_events_request_idx" ON "audit_events" USING btree ("request_id","created_at");--> statement-breakpoint

@@ -99,14 +99,11 @@ export const clickerRules = pgTable(
   "clicker_rules",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    // A complaint or terrain value that triggers the rule.
-    trigger: text("trigger").notNull(),
-    // Which adjuster moves, e.g. "forkCompression"; clicks > 0 open (softer), < 0 close.
-    adjuster: text("adjuster").notNull(),
-    clicks: integer("clicks").notNull(),
-    reason: text("reason").notNull(),
+    // Trigger (complaint, terrain or rate change), clicker, change and reason: lib/sizing's
+    // clickerRuleSchema, validated on every write.
+    rule: jsonb("rule").notNull(),
     sortOrder: integer("sort_order").notNull().default(0),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("clicker_rules_trigger_idx").on(t.trigger)],
+  (t) => [index("clicker_rules_order_idx").on(t.sortOrder)],
 );

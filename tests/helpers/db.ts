@@ -3,7 +3,7 @@
 // database created from the migrated template.
 import { readFileSync } from "node:fs";
 import { randomBytes } from "node:crypto";
-import { closeDatabase, openPostgres, useDatabaseForTests, type DatabaseHandle } from "@/db/client";
+import { closeDatabase, openPostgres, installTestDatabase, type DatabaseHandle } from "@/db/client";
 
 export async function createTestDatabase(): Promise<DatabaseHandle> {
   const template = process.env.SAGWISE_TEST_PG_TEMPLATE;
@@ -33,7 +33,7 @@ export async function createTestDatabase(): Promise<DatabaseHandle> {
       close: () => client.close(),
     };
   }
-  useDatabaseForTests(handle);
+  installTestDatabase(handle);
   return handle;
 }
 

@@ -1,0 +1,26 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { Logo } from "@/components/ui/logo";
+
+export default function PublicLayout({ children }: { children: ReactNode }) {
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <header className="bg-pine-900 px-4 text-white">
+        <div className="mx-auto flex max-w-4xl items-center justify-between gap-4 py-2">
+          <Link href="/" className="inline-flex min-h-11 items-center">
+            <Logo />
+          </Link>
+          <nav aria-label="Main" className="flex gap-1 text-sm">
+            <Link href="/my-requests" className="inline-flex min-h-11 items-center rounded-lg px-3 hover:bg-pine-800">
+              My requests
+            </Link>
+            <Link href="/sign-in" className="inline-flex min-h-11 items-center rounded-lg px-3 hover:bg-pine-800">
+              Sign in
+            </Link>
+          </nav>
+        </div>
+      </header>
+      <main className="mx-auto w-full max-w-4xl flex-1 px-4 py-8">{children}</main>
+    </div>
+  );
+}

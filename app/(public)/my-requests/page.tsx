@@ -1,0 +1,43 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { listRequestsForRiderEmail } from "@/db/queries/requests";
+import { requireSession } from "@/lib/auth/guard";
+import { STATUS_NEXT_STEP } from "@/lib/requests/status";
+
+export const metadata: Metadata = { title: "My requests" };
+export const dynamic = "force-dynamic";
+
+export default async function MyRequestsPage() {
+  // Any signed-in person sees only the requests made with their own e-mail address.
+  const user = await requireSession({ page: "/my-requests" });
+  const requests = await listRequestsForRiderEmail(user.email);
+  return (
+    <div className="flex flex-col gap-6">
+      <h1 className="text-2xl font-bold">My requests</h1>
+      <p className="text-stone-700">Signed in as {user.email}.</p>
+      {requests.length === 0 ? (
+        <p className="rounded-xl border border-stone-200 bg-white p-4">
+          No setup requests were made with this e-mail address yet.
+        </p>
+      ) : (
+        <ul className="flex flex-col gap-3">
+          {requests.map((r) => (
+            <li key={r.id} className="rounded-xl border border-stone-200 bg-white p-4">
+              <div className="flex flex-wrap items-center justify-between gap-2">
+                <p className="font-semibold">
+                  Request {r.number} · {r.bikeLabel}
+                </p>
+                <StatusBadge status={r.status} />
+              </div>
+              <p className="mt-1 text-sm text-stone-600">
+                Sent {r.createdAt.toISOString().slice(0, 10)} · {STATUS_NEXT_STEP[r.status]}
+              </p>
+            </li>
+          ))}
+        </ul>
+      )}
+      <Link href="/" className="font-semibold text-pine-700 underline">Back to the start</Link>
+    </div>
+  );
+}

@@ -1,0 +1,19 @@
+import type { Metadata, Viewport } from "next";
+import type { ReactNode } from "react";
+import { inter } from "./fonts";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Sagwise", template: "%s · Sagwise" },
+  description: "Suspension setup requests, spring sizing and setup sheets for off-road riders.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#123f36" };
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={inter.variable}>
+      <body className="min-h-dvh font-sans">{children}</body>
+    </html>
+  );
+}

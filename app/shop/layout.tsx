@@ -1,0 +1,33 @@
+import Link from "next/link";
+import type { ReactNode } from "react";
+import { SignOutButton } from "@/components/auth/sign-out-button";
+import { ShopNav, type NavItem } from "@/components/shop/shop-nav";
+import { Logo } from "@/components/ui/logo";
+import { requireRole } from "@/lib/auth/guard";
+import { STAFF_ROLES } from "@/lib/auth/roles";
+
+// Only pages that exist are linked; admin-only pages are added for admins only.
+const STAFF_NAV: NavItem[] = [{ href: "/shop", label: "Queue" }];
+
+export default async function ShopLayout({ children }: { children: ReactNode }) {
+  const user = await requireRole(STAFF_ROLES, { page: "/shop" });
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <header className="bg-pine-900 text-white">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-4 px-4 py-2">
+          <Link href="/shop" className="inline-flex min-h-11 items-center">
+            <Logo />
+          </Link>
+          <ShopNav items={STAFF_NAV} />
+          <div className="ml-auto flex items-center gap-2 text-sm">
+            <span>
+              {user.name} <span className="text-pine-100">({user.role})</span>
+            </span>
+            <SignOutButton />
+          </div>
+        </div>
+      </header>
+      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">{children}</main>
+    </div>
+  );
+}

@@ -1,0 +1,67 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { authClient } from "@/lib/auth/client";
+import { staffSignInSchema } from "@/lib/validations/auth";
+
+type Input = z.input<typeof staffSignInSchema>;
+type Output = z.output<typeof staffSignInSchema>;
+
+export function StaffSignInForm({ next }: { next: string }) {
+  const router = useRouter();
+  const [failure, setFailure] = useState<string | null>(null);
+  const { register, handleSubmit, formState } = useForm<Input, unknown, Output>({
+    resolver: zodResolver(staffSignInSchema),
+  });
+
+  const onSubmit = handleSubmit(async (values) => {
+    setFailure(null);
+    const { error } = await authClient.signIn.email({ email: values.email, password: values.password });
+    if (error) {
+      setFailure(
+        error.status === 403
+          ? "This account is deactivated. Ask the shop owner."
+          : "That e-mail and password do not match a staff account.",
+      );
+      return;
+    }
+    router.replace(next);
+    router.refresh();
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Staff sign-in">
+      <Field
+        id="staff-email"
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        inputMode="email"
+        error={formState.errors.email?.message}
+        {...register("email")}
+      />
+      <Field
+        id="staff-password"
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={formState.errors.password?.message}
+        {...register("password")}
+      />
+      {failure ? (
+        <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm font-medium text-red-800">
+          {failure}
+        </p>
+      ) : null}
+      <Button type="submit" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Signing in…" : "Sign in"}
+      </Button>
+    </form>
+  );
+}

@@ -1,0 +1,33 @@
+"use client";
+
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+
+export interface NavItem {
+  href: string;
+  label: string;
+}
+
+/** Workspace navigation; the layout passes only pages that exist and that the role may open. */
+export function ShopNav({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Workspace" className="flex flex-wrap gap-1">
+      {items.map((item) => {
+        const active = item.href === "/shop" ? pathname === "/shop" : pathname.startsWith(item.href);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? "page" : undefined}
+            className={`inline-flex min-h-11 items-center rounded-lg px-3 text-sm font-medium ${
+              active ? "bg-white text-pine-900" : "text-pine-50 hover:bg-pine-800"
+            }`}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,12 @@
+import type { NextConfig } from "next";
+
+const nextConfig: NextConfig = {
+  // PGlite loads its WebAssembly and data files next to its own module, and pg has optional native
+  // parts: both stay plain Node modules instead of being bundled.
+  serverExternalPackages: ["@electric-sql/pglite", "pg", "@react-pdf/renderer"],
+  poweredByHeader: false,
+  // forbidden() renders app/forbidden.tsx with a 403 for a signed-in user of the wrong role.
+  experimental: { authInterrupts: true },
+};
+
+export default nextConfig;

@@ -1,0 +1,46 @@
+// Debian's Chromium through playwright-core: no browser download. A fresh profile per context.
+import { mkdtempSync, rmSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import { chromium, type BrowserContext } from "playwright-core";
+
+const FLAGS = [
+  "--no-sandbox",
+  "--disable-gpu",
+  "--disable-quic",
+  "--no-first-run",
+  "--disable-background-networking",
+  "--disable-component-update",
+  "--disable-sync",
+];
+
+export interface Browsing {
+  context: BrowserContext;
+  close(): Promise<void>;
+}
+
+export async function openBrowser(
+  options: { viewport?: { width: number; height: number } } = {},
+): Promise<Browsing> {
+  const profile = mkdtempSync(path.join(os.tmpdir(), "sagwise-chromium-"));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
+    headless: true,
+    args: FLAGS,
+    viewport: options.viewport ?? { width: 1280, height: 800 },
+  });
+  return {
+    context,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+/** Messages the mail fake holds for one address, newest first. */
+export async function mailFor(mailUrl: string, to: string) {
+  const response = await fetch(`${mailUrl}/emails?to=${encodeURIComponent(to)}`);
+  if (!response.ok) throw new Error(`mail fake answered ${response.status}`);
+  return (await response.json()) as { id: string; subject: string; html?: string; text?: string }[];
+}

@@ -1,0 +1,94 @@
+// Starts the mail fake and a seeded production server (`next start`, built beforehand by
+// `npm run build`) on free ports with a temporary DATA_DIR, and hands their URLs to the tests.
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import net from "node:net";
+import os from "node:os";
+import path from "node:path";
+import type { TestProject } from "vitest/node";
+
+declare module "vitest" {
+  export interface ProvidedContext {
+    baseUrl: string;
+    mailUrl: string;
+  }
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.listen(0, "127.0.0.1", () => {
+      const address = server.address();
+      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject()));
+    });
+  });
+}
+
+async function waitFor(url: string, child: ChildProcess, what: string) {
+  const deadline = Date.now() + 90_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`${what} exited with ${child.exitCode}`);
+    try {
+      const response = await fetch(url);
+      if (response.ok) return;
+    } catch {
+      // Not listening yet.
+    }
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  throw new Error(`${what} did not answer at ${url}`);
+}
+
+export default async function setup(project: TestProject) {
+  if (!existsSync(path.join(".next", "BUILD_ID"))) {
+    throw new Error("No production build: run `npm run build` before `npm run test:e2e`.");
+  }
+  const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-e2e-"));
+  const [appPort, mailPort] = await Promise.all([freePort(), freePort()]);
+  const baseUrl = `http://localhost:${appPort}`;
+  const mailUrl = `http://127.0.0.1:${mailPort}`;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    PORT: String(appPort),
+    DATA_DIR: dataDir,
+    BETTER_AUTH_SECRET: "e2e-secret-e2e-secret-e2e-secret-0123456789",
+    BETTER_AUTH_URL: baseUrl,
+    RESEND_BASE_URL: mailUrl,
+    MAIL_FAKE_PORT: String(mailPort),
+    MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
+    // The browser tests run on the embedded database even when the shell points at PostgreSQL.
+    DATABASE_URL: "",
+  };
+
+  const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "inherit" });
+  if (seeded.status !== 0) throw new Error("Seeding the e2e database failed");
+
+  const output = (name: string) => (chunk: Buffer) => {
+    if (process.env.E2E_VERBOSE) process.stdout.write(`[${name}] ${chunk}`);
+  };
+  const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true });
+  const app = spawn("npx", ["next", "start", "-p", String(appPort)], { env, detached: true });
+  for (const [name, child] of [["mail", mail], ["app", app]] as const) {
+    child.stdout?.on("data", output(name));
+    child.stderr?.on("data", (chunk: Buffer) => process.stderr.write(`[${name}] ${chunk}`));
+  }
+  await waitFor(`${mailUrl}/emails`, mail, "mail fake");
+  await waitFor(`${baseUrl}/api/health`, app, "next start");
+
+  project.provide("baseUrl", baseUrl);
+  project.provide("mailUrl", mailUrl);
+
+  return () => {
+    for (const child of [app, mail]) {
+      if (child.pid && child.exitCode === null) {
+        try {
+          process.kill(-child.pid, "SIGTERM");
+        } catch {
+          // Already gone.
+        }
+      }
+    }
+    rmSync(dataDir, { recursive: true, force: true });
+  };
+}
