@@ -1,4 +1,4 @@
-import { legAirForce, type LegAirGeometry } from "./air";
+import { displacementAreaMm2, type LegAirGeometry } from "./air";
 import { ATMOSPHERE_MPA } from "./units";
 import { firstCrossing, type SagSolution } from "./solve";
 
@@ -10,15 +10,28 @@ export interface CoilFork {
   sprungLegs: number;
   travelMm: number;
   air: Omit<LegAirGeometry, "oilLevelMm">;
+  /** Displacement area A_d = π/4·D_d², precomputed: the editor evaluates this on every keystroke. */
+  ad: number;
+}
+
+export function makeCoilFork(sprungLegs: number, travelMm: number, air: Omit<LegAirGeometry, "oilLevelMm">): CoilFork {
+  return { sprungLegs, travelMm, air, ad: displacementAreaMm2(air.displacementDiameterMm) };
+}
+
+/** Same law as air.ts legAirForce, with plain numbers (no allocation): V₀ = A_free·h + V_cap + A_d·T. */
+function legAir(f: CoilFork, oilLevelMm: number, sMm: number, n: number): number {
+  const v0 = f.air.freeAreaMm2 * oilLevelMm + f.air.capVolumeMm3 + f.ad * f.air.forkTravelMm;
+  const r = v0 / (v0 - f.ad * sMm);
+  return ATMOSPHERE_MPA * ((n === 1 ? r : Math.pow(r, n)) - 1) * f.ad;
 }
 
 export function forkForce(f: CoilFork, rateNmm: number, preloadMm: number, oilLevelMm: number, sMm: number, n: number): number {
-  return f.sprungLegs * rateNmm * (preloadMm + sMm) + 2 * legAirForce({ ...f.air, oilLevelMm }, sMm, n);
+  return f.sprungLegs * rateNmm * (preloadMm + sMm) + 2 * legAir(f, oilLevelMm, sMm, n);
 }
 
 /** Preload that puts sag exactly at s: p = (W − 2·F_air(s)) / (n_s·k) − s, isothermal air. */
 export function forkPreloadForSag(f: CoilFork, rateNmm: number, oilLevelMm: number, loadN: number, sMm: number): number {
-  return (loadN - 2 * legAirForce({ ...f.air, oilLevelMm }, sMm, 1)) / (f.sprungLegs * rateNmm) - sMm;
+  return (loadN - 2 * legAir(f, oilLevelMm, sMm, 1)) / (f.sprungLegs * rateNmm) - sMm;
 }
 
 /**
@@ -33,9 +46,8 @@ export function idealForkSpring(
   staticSagMm: number,
   raceSagMm: number,
 ): { rateNmm: number; preloadMm: number } {
-  const g = { ...f.air, oilLevelMm };
-  const netRace = raceLoadN - 2 * legAirForce(g, raceSagMm, 1);
-  const netStatic = staticLoadN - 2 * legAirForce(g, staticSagMm, 1);
+  const netRace = raceLoadN - 2 * legAir(f, oilLevelMm, raceSagMm, 1);
+  const netStatic = staticLoadN - 2 * legAir(f, oilLevelMm, staticSagMm, 1);
   const rateNmm = (netRace - netStatic) / (f.sprungLegs * (raceSagMm - staticSagMm));
   return { rateNmm, preloadMm: netRace / (f.sprungLegs * rateNmm) - raceSagMm };
 }
@@ -46,9 +58,8 @@ export function solveForkSag(f: CoilFork, rateNmm: number, preloadMm: number, oi
 
 /** Axial rate dF/ds = n_s·k + 2·dF_air/ds, with dF_air/ds = n·P·A_d²/(V₀ − A_d·s) (from P·Vⁿ = C). */
 export function forkRate(f: CoilFork, rateNmm: number, oilLevelMm: number, sMm: number, n: number): number {
-  const ad = (Math.PI / 4) * f.air.displacementDiameterMm ** 2;
-  const v0 = f.air.freeAreaMm2 * oilLevelMm + f.air.capVolumeMm3 + ad * f.air.forkTravelMm;
-  const v = v0 - ad * sMm;
+  const v0 = f.air.freeAreaMm2 * oilLevelMm + f.air.capVolumeMm3 + f.ad * f.air.forkTravelMm;
+  const v = v0 - f.ad * sMm;
   const pAbs = ATMOSPHERE_MPA * Math.pow(v0 / v, n);
-  return f.sprungLegs * rateNmm + (2 * n * pAbs * ad * ad) / v;
+  return f.sprungLegs * rateNmm + (2 * n * pAbs * f.ad * f.ad) / v;
 }

@@ -3,7 +3,7 @@ import type { Loads } from "./loads";
 import type { FrontResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { sprungLegsOf } from "./bike-schema";
-import { forkForce, forkPreloadForSag, forkRate, idealForkSpring, solveForkSag, type CoilFork } from "./fork";
+import { forkForce, forkPreloadForSag, forkRate, idealForkSpring, makeCoilFork, solveForkSag, type CoilFork } from "./fork";
 import { evaluateCandidate, selectRate, type EndModel, type SagTargetsMm } from "./selection";
 import { airAbsMpaForSag, airChamberForce } from "./air";
 import { firstCrossing } from "./solve";
@@ -32,11 +32,12 @@ export interface FrontContext {
 
 export function coilForkOf(bike: BikeSpec): CoilFork {
   const f = bike.fork;
-  return {
-    sprungLegs: sprungLegsOf(f.kind),
-    travelMm: f.travelMm,
-    air: { displacementDiameterMm: f.displacementDiameterMm, freeAreaMm2: f.freeAreaMm2, capVolumeMm3: f.capVolumeMm3, forkTravelMm: f.travelMm },
-  };
+  return makeCoilFork(sprungLegsOf(f.kind), f.travelMm, {
+    displacementDiameterMm: f.displacementDiameterMm,
+    freeAreaMm2: f.freeAreaMm2,
+    capVolumeMm3: f.capVolumeMm3,
+    forkTravelMm: f.travelMm,
+  });
 }
 
 /** Allowed oil levels: the stock level ± whole 5 mm steps, inside the catalog's range. */

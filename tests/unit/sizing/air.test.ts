@@ -7,7 +7,7 @@ import {
   polytropicPressure,
   pressureTriple,
 } from "../../../lib/sizing";
-import { forkForce, idealForkSpring, type CoilFork } from "../../../lib/sizing/fork";
+import { forkForce, idealForkSpring, makeCoilFork } from "../../../lib/sizing/fork";
 
 const atmMpa = ATMOSPHERE_KPA / 1000;
 const leg = { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 25_000, oilLevelMm: 110, forkTravelMm: 310 };
@@ -85,13 +85,14 @@ describe("air-spring fork pressure", () => {
 describe("coil fork closed form without air", () => {
   // An enormous cap volume leaves the air force negligible: the fork must reduce to a linear spring
   // (Hooke's law, F = n_s·k·(p + s)), and the ideal rate to k = ΔW/(n_s·Δs) (sizing-model.md, closed forms).
-  const fork: CoilFork = {
-    sprungLegs: 2,
-    travelMm: 300,
-    air: { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 1e15, forkTravelMm: 300 },
-  };
+  const fork = makeCoilFork(2, 300, { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 1e15, forkTravelMm: 300 });
   it("force is n_s·k·(p + s)", () => {
     for (const s of [0, 75, 150, 300]) expect(forkForce(fork, 4.5, 5, 110, s, 1.4)).toBeCloseTo(2 * 4.5 * (5 + s), 4);
+  });
+  it("the fork's fast path and the public forkAirForceN give the same air force", () => {
+    const f = makeCoilFork(2, 310, { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 25_000, forkTravelMm: 310 });
+    for (const s of [0, 100, 310]) for (const n of [1, 1.4])
+      expect(forkForce(f, 0, 0, 110, s, n)).toBeCloseTo(2 * forkAirForceN({ ...leg, travelMm: s, polytropicIndex: n }), 9);
   });
   it("ideal rate is ΔW/(n_s·Δs) and preload W/(n_s·k) − s", () => {
     const { rateNmm, preloadMm } = idealForkSpring(fork, 110, 380, 650, 35, 60);
