@@ -42,5 +42,8 @@ export async function openBrowser(
 export async function mailFor(mailUrl: string, to: string) {
   const response = await fetch(`${mailUrl}/emails?to=${encodeURIComponent(to)}`);
   if (!response.ok) throw new Error(`mail fake answered ${response.status}`);
-  return (await response.json()) as { id: string; subject: string; html?: string; text?: string }[];
+  const list = (await response.json()) as {
+    data: { id: string; subject: string; html?: string; text?: string }[];
+  };
+  return list.data;
 }
