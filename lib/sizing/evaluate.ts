@@ -94,7 +94,20 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
     ov.clickers,
     warnings,
   );
-  complaintNotes(inp, rear.predicted.raceSagMm, warnings);
+  complaintNotes(inp, rear.predicted.raceSagMm, front.predicted.raceSagMm, warnings);
+  const air = bike.fork.kind === "air";
+  const ignored = air
+    ? (["rateNmm", "preloadMm", "oilLevelMm"] as const).filter((k) => ov.front?.[k] !== undefined)
+    : ov.front?.airPressureKpaGauge !== undefined
+      ? (["airPressureKpaGauge"] as const)
+      : [];
+  for (const k of ignored)
+    warnings.push({
+      code: "OVERRIDE_NOT_APPLICABLE",
+      severity: "info",
+      message: `front.${k} does not apply to ${air ? "an air-spring" : "a coil-spring"} fork and was ignored.`,
+      field: `overrides.front.${k}`,
+    });
 
   return {
     engineVersion: ENGINE_VERSION,
@@ -116,15 +129,20 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
   };
 }
 
-function complaintNotes(inp: SizingInputParsed, predictedRaceSagMm: number, warnings: SizingWarning[]): void {
+function complaintNotes(inp: SizingInputParsed, rearRaceSagMm: number, forkRaceSagMm: number, warnings: SizingWarning[]): void {
   const m = inp.measuredSag;
-  if (m?.rearRaceSagMm !== undefined && Math.abs(m.rearRaceSagMm - predictedRaceSagMm) > 5)
-    warnings.push({
-      code: "MEASURED_SAG_DIFFERS",
-      severity: "info",
-      message: `Measured rear race sag now is ${fmt(m.rearRaceSagMm, 0)} mm; the new setup aims at ${fmt(predictedRaceSagMm, 0)} mm.`,
-      field: "measuredSag.rearRaceSagMm",
-    });
+  const ends = [
+    ["rear", m?.rearRaceSagMm, rearRaceSagMm],
+    ["fork", m?.forkRaceSagMm, forkRaceSagMm],
+  ] as const;
+  for (const [end, measured, predicted] of ends)
+    if (measured !== undefined && Math.abs(measured - predicted) > 5)
+      warnings.push({
+        code: "MEASURED_SAG_DIFFERS",
+        severity: "info",
+        message: `Measured ${end} race sag now is ${fmt(measured, 0)} mm; the new setup aims at ${fmt(predicted, 0)} mm.`,
+        field: `measuredSag.${end}RaceSagMm`,
+      });
   for (const c of ["rides-low", "rides-high"] as const)
     if (inp.complaints.includes(c))
       warnings.push({

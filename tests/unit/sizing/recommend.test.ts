@@ -145,6 +145,15 @@ describe("air fork", () => {
     expect(r.front.predicted.raceSagMm).toBeCloseTo(s, 3);
     expect(p.barGauge).toBeCloseTo(p.kpaGauge / 100, 12); // 1 bar = 100 kPa (definition)
   });
+  it("an overridden pressure moves race sag the way Boyle's law says, and coil-only overrides are flagged", () => {
+    const r = evaluateSetup(air(), { front: { airPressureKpaGauge: 400, rateNmm: 4.5 } });
+    expect(r.front.airPressure!.kpaGauge).toBe(400);
+    // At the predicted sag s: (P₀ + P_atm)·V₀ = (W/A + P_atm)·(V₀ − A·s), solved for s.
+    const p0 = 0.4 + 0.101325;
+    const s = (400_000 - (p0 * 400_000) / (r.resolved.loads.frontRaceN / 900 + 0.101325)) / 900;
+    expect(r.front.predicted.raceSagMm).toBeCloseTo(s, 4);
+    expect(r.warnings.find((w) => w.code === "OVERRIDE_NOT_APPLICABLE")?.field).toBe("overrides.front.rateNmm");
+  });
   it("refuses an air fork without chamber data, naming the field", () => {
     const input = air();
     delete input.bike.fork.air;
@@ -231,6 +240,10 @@ describe("refused input names each bad field", () => {
     input.bike.rear.wheelTravelMm = 330;
     input.bike.unsprungFrontKg = 55;
     expect(issuesOf(() => recommend(input)).sort()).toEqual(["bike.rear.leverageCurve", "bike.unsprungFrontKg"]);
+  });
+  it("a measured sag far from the new target is noted", () => {
+    const r = recommend(classInput("mx-450-4t", "medium", { measuredSag: { rearRaceSagMm: 125 } }));
+    expect(r.warnings.find((w) => w.code === "MEASURED_SAG_DIFFERS")?.field).toBe("measuredSag.rearRaceSagMm");
   });
   it("a rider outside the bike's range is a caution, not a silent answer", () => {
     const r = recommend(classInput("youth-85", "medium", { rider: { massKg: 110, gearIncluded: false, skill: "novice", style: "smooth" } }));
