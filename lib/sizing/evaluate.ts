@@ -73,7 +73,8 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
     reasons,
   });
 
-  const frequencyRatio = front.naturalFrequencyHz / rear.naturalFrequencyHz;
+  // A zero rear frequency (no wheel rate at sag) would make the ratio infinite: report 0 and warn below.
+  const frequencyRatio = rear.naturalFrequencyHz > 0 ? front.naturalFrequencyHz / rear.naturalFrequencyHz : 0;
   const win = inp.shop.frequencyRatioWindow;
   if (!(frequencyRatio >= win.min && frequencyRatio <= win.max))
     warnings.push({

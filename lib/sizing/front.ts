@@ -71,9 +71,21 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const limits = { minMm: f.preloadMinMm, maxMm: f.preloadMaxMm };
   const h0 = f.stockOilLevelMm;
   const mid = (t.staticSagMinMm + t.staticSagMaxMm) / 2;
-  const sagOnly = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm);
-  if (!(sagOnly.rateNmm > 0) || !Number.isFinite(sagOnly.rateNmm))
-    throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone exceeds the sag targets' load difference: no coil spring fits" }]);
+  let sagOnly = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm);
+  if (!(sagOnly.rateNmm > 0) || !Number.isFinite(sagOnly.rateNmm)) {
+    // The rider adds less load than the air spring takes up between the two sags: size on race sag
+    // alone at minimum preload, k = (W_fr − 2F_air(s_r)) / (n_s·(p_min + s_r)), and say so.
+    const netPerLegN = forkPreloadForSag(fk, 1, h0, W.raceN, t.raceSagMm) + t.raceSagMm; // (W − 2F_air)/n_s
+    sagOnly = { rateNmm: netPerLegN / (limits.minMm + t.raceSagMm), preloadMm: limits.minMm };
+    if (!(sagOnly.rateNmm > 0))
+      throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" }]);
+    warnings.push({
+      code: "FRONT_SAG_TARGETS_UNREACHABLE",
+      severity: "caution",
+      message: `No fork spring gives both ${fmt(t.raceSagMm, 0)} mm race sag and ${fmt(mid, 0)} mm static sag for this rider; sized on race sag at minimum preload.`,
+      field: "front.sagTargets",
+    });
+  }
   const idealRateNmm = sagOnly.rateNmm * c.rateFactor;
   const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
   const modelAt = (h: number): EndModel => ({

@@ -2,7 +2,7 @@ import type { BikeSpec } from "./bike-schema";
 import type { Loads } from "./loads";
 import type { RearResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
-import { idealSpringOn, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
+import { idealSpringOn, leverageAt, travelAt, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
 import { evaluateCandidate, selectRate, type EndModel, type SagTargetsMm } from "./selection";
 import { naturalFrequencyOf } from "./frequency";
 import { rateTriple, STANDARD_GRAVITY } from "./units";
@@ -32,7 +32,21 @@ export function evaluateRear(
   const m = rearModel(L, r.wheelTravelMm);
   const W = { staticN: loads.rearStaticN, raceN: loads.rearRaceN };
   const mid = (targets.staticSagMinMm + targets.staticSagMaxMm) / 2;
-  const sagOnly = idealSpringOn(L, W.staticN, W.raceN, mid, targets.raceSagMm, "bike.rear.leverageCurve");
+  let sagOnly: { rateNmm: number; preloadMm: number };
+  try {
+    sagOnly = idealSpringOn(L, W.staticN, W.raceN, mid, targets.raceSagMm, "bike.rear.leverageCurve");
+  } catch {
+    // Both sag targets cannot be met (a very light rider's load barely differs from the bike's own):
+    // size on race sag alone at the collar's minimum preload, and say so.
+    const rateNmm = (W.raceN * leverageAt(L, targets.raceSagMm)) / (r.preloadMinMm + travelAt(L, targets.raceSagMm));
+    sagOnly = { rateNmm, preloadMm: r.preloadMinMm };
+    warnings.push({
+      code: "REAR_SAG_TARGETS_UNREACHABLE",
+      severity: "caution",
+      message: `No spring gives both ${fmt(targets.raceSagMm, 0)} mm race sag and ${fmt(mid, 0)} mm static sag for this rider; sized on race sag at minimum preload.`,
+      field: "rear.sagTargets",
+    });
+  }
   const idealRateNmm = sagOnly.rateNmm * rateFactor;
   const idealPreloadMm = preloadForSag(L, idealRateNmm, W.raceN, targets.raceSagMm);
   // With a rate factor of 1 this is the window's middle; otherwise where the factored ideal puts it.

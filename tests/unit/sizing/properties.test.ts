@@ -8,6 +8,7 @@ import {
   SKILL_LEVELS,
   SizingInputError,
   TERRAINS,
+  evaluateSetup,
   idealRearSpring,
   recommend,
   recommendationSchema,
@@ -177,6 +178,28 @@ describe("robustness", () => {
         expect(recommendationSchema.safeParse(r).success).toBe(true);
       }),
       RUNS,
+    );
+  });
+
+  it("stays finite at the edges of the valid range, with random tuner overrides", () => {
+    const opt = (min: number, max: number) => fc.option(fc.double({ min, max, noNaN: true }), { nil: undefined });
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...classIds),
+        fc.double({ min: 15, max: 250, noNaN: true }),
+        fc.double({ min: 0.3, max: 0.95, noNaN: true }),
+        fc.record({ rateNmm: opt(1, 400), preloadMm: opt(-20, 80) }),
+        fc.record({ rateNmm: opt(0.1, 50), preloadMm: opt(-20, 80), oilLevelMm: opt(1, 400) }),
+        (id, massKg, share, rear, front) => {
+          const input = classInput(id, "medium", {
+            rider: { massKg, gearIncluded: true, skill: "pro", style: "aggressive" },
+            targets: { riderRearShare: share },
+          });
+          const r = evaluateSetup(input, { rear, front });
+          expect(allFinite({ ...r, input: null })).toBe(true);
+        },
+      ),
+      { numRuns: 150 },
     );
   });
 

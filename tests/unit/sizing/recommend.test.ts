@@ -85,6 +85,24 @@ describe("loads", () => {
     expect(r.resolved.loads.frontRaceN).toBeCloseTo(647.295, 2);
   });
 
+  it("a single-spring fork needs twice the per-leg rate of a two-spring fork", () => {
+    // Closed form (sizing-model.md): the coil force is n_s·k·(p + s) and the air is the same, so the
+    // ideal per-leg rate scales as 1/n_s.
+    const both = recommend(classInput("mx-450-4t", "medium"));
+    const single = classInput("mx-450-4t", "medium");
+    single.bike.fork.kind = "coil-single";
+    const r = recommend(single);
+    expect(r.front.sprungLegs).toBe(1);
+    expect(r.front.idealRate!.nMm).toBeCloseTo(2 * both.front.idealRate!.nMm, 9);
+  });
+
+  it("when no spring can meet both sag targets it sizes on race sag and says so", () => {
+    const r = recommend(classInput("mx-450-4t", "light", { rider: { massKg: 20, gearIncluded: true, skill: "beginner", style: "smooth" }, targets: { riderRearShare: 0.95 } }));
+    const w = r.warnings.find((x) => x.code === "FRONT_SAG_TARGETS_UNREACHABLE");
+    expect(w?.field).toBe("front.sagTargets");
+    expect(r.front.idealRate!.nMm).toBeGreaterThan(0);
+  });
+
   it("a heavier rider gets a stiffer or equal spring at each end", () => {
     const a = recommend(classInput("mx-250-4t", "light"));
     const b = recommend(classInput("mx-250-4t", "heavy"));
