@@ -21,7 +21,7 @@ export interface DatabaseHandle {
 const holder = globalThis as unknown as { __sagwiseDb?: Promise<DatabaseHandle> };
 
 export async function openPglite(dataDir: string): Promise<DatabaseHandle> {
-  const { PGlite } = await import("@electric-sql/pglite");
+  const { createPglite } = await import("./pglite");
   const { drizzle } = await import("drizzle-orm/pglite");
   const absolute = path.resolve(dataDir);
   // PGlite creates only the last folder of its path.
@@ -29,8 +29,7 @@ export async function openPglite(dataDir: string): Promise<DatabaseHandle> {
   // PGlite has no lock of its own: a second process on the same folder would silently lose writes.
   const release = acquireDataDirLock(absolute);
   try {
-    const client = new PGlite(absolute);
-    await client.waitReady;
+    const client = await createPglite({ dataDir: absolute });
     const db = drizzle({ client, schema }) as unknown as AppDb;
     return {
       db,

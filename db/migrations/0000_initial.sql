@@ -1,3 +1,4 @@
+CREATE EXTENSION IF NOT EXISTS pg_trgm;--> statement-breakpoint
 CREATE TABLE "account" (
 	"id" text PRIMARY KEY NOT NULL,
 	"account_id" text NOT NULL,
@@ -25,6 +26,18 @@ CREATE TABLE "session" (
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL,
 	CONSTRAINT "session_token_unique" UNIQUE("token")
+);
+--> statement-breakpoint
+CREATE TABLE "staff_invites" (
+	"id" text PRIMARY KEY NOT NULL,
+	"email" text NOT NULL,
+	"role" text NOT NULL,
+	"token_hash" text NOT NULL,
+	"invited_by_id" text,
+	"expires_at" timestamp with time zone NOT NULL,
+	"accepted_at" timestamp with time zone,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	CONSTRAINT "staff_invites_token_hash_unique" UNIQUE("token_hash")
 );
 --> statement-breakpoint
 CREATE TABLE "user" (
@@ -190,6 +203,7 @@ CREATE TABLE "setup_requests" (
 	"status_token_hash" text NOT NULL,
 	"assigned_tuner_id" text,
 	"decline_reason" text,
+	"search_text" text GENERATED ALWAYS AS (lower(rider_name || ' ' || rider_email || ' ' || bike_label)) STORED,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
 );
@@ -207,6 +221,7 @@ CREATE TABLE "uploads" (
 --> statement-breakpoint
 ALTER TABLE "account" ADD CONSTRAINT "account_user_id_user_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."user"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "session" ADD CONSTRAINT "session_user_id_user_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."user"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "staff_invites" ADD CONSTRAINT "staff_invites_invited_by_id_user_id_fk" FOREIGN KEY ("invited_by_id") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "audit_events" ADD CONSTRAINT "audit_events_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "audit_events" ADD CONSTRAINT "audit_events_actor_user_id_user_id_fk" FOREIGN KEY ("actor_user_id") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "outbound_emails" ADD CONSTRAINT "outbound_emails_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
@@ -223,6 +238,7 @@ ALTER TABLE "setup_requests" ADD CONSTRAINT "setup_requests_assigned_tuner_id_us
 ALTER TABLE "uploads" ADD CONSTRAINT "uploads_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "account_user_idx" ON "account" USING btree ("user_id");--> statement-breakpoint
 CREATE INDEX "session_user_idx" ON "session" USING btree ("user_id");--> statement-breakpoint
+CREATE INDEX "staff_invites_email_idx" ON "staff_invites" USING btree ("email");--> statement-breakpoint
 CREATE INDEX "user_role_idx" ON "user" USING btree ("role");--> statement-breakpoint
 CREATE INDEX "verification_identifier_idx" ON "verification" USING btree ("identifier");--> statement-breakpoint
 CREATE UNIQUE INDEX "bike_models_slug_idx" ON "bike_models" USING btree ("slug");--> statement-breakpoint
@@ -247,4 +263,5 @@ CREATE INDEX "setup_requests_tuner_idx" ON "setup_requests" USING btree ("assign
 CREATE INDEX "setup_requests_discipline_idx" ON "setup_requests" USING btree ("discipline","created_at");--> statement-breakpoint
 CREATE INDEX "setup_requests_bike_class_idx" ON "setup_requests" USING btree ("bike_class","created_at");--> statement-breakpoint
 CREATE INDEX "setup_requests_rider_name_idx" ON "setup_requests" USING btree (lower("rider_name"));--> statement-breakpoint
+CREATE INDEX "setup_requests_search_idx" ON "setup_requests" USING gin ("search_text" gin_trgm_ops);--> statement-breakpoint
 CREATE INDEX "uploads_request_idx" ON "uploads" USING btree ("request_id");

@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, ilike, or, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, like, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { REQUEST_STATUSES, setupRequests, type RequestStatus } from "@/db/schema";
 import type { QueueQuery } from "@/lib/validations/queue";
@@ -60,14 +60,9 @@ export async function listQueue(query: QueueQuery) {
   const conditions = [];
   if (query.status) conditions.push(eq(setupRequests.status, query.status));
   if (query.q) {
-    const pattern = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-    conditions.push(
-      or(
-        ilike(setupRequests.riderName, pattern),
-        ilike(setupRequests.riderEmail, pattern),
-        ilike(setupRequests.bikeLabel, pattern),
-      ),
-    );
+    // search_text is lower-cased and trigram-indexed; LIKE wildcards typed by the user are literal.
+    const pattern = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    conditions.push(like(setupRequests.searchText, pattern));
   }
   const where = conditions.length ? and(...conditions) : undefined;
   const [items, totals] = await Promise.all([

@@ -51,6 +51,11 @@ export const setupRequests = pgTable(
     statusTokenHash: text("status_token_hash").notNull(),
     assignedTunerId: text("assigned_tuner_id").references(() => user.id, { onDelete: "set null" }),
     declineReason: text("decline_reason"),
+    // Lower-cased rider name, e-mail and bike for the queue's search; a trigram index serves
+    // "contains" searches without scanning the table.
+    searchText: text("search_text").generatedAlwaysAs(
+      sql`lower(rider_name || ' ' || rider_email || ' ' || bike_label)`,
+    ),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
@@ -65,6 +70,7 @@ export const setupRequests = pgTable(
     index("setup_requests_discipline_idx").on(t.discipline, t.createdAt),
     index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt),
     index("setup_requests_rider_name_idx").on(sql`lower(${t.riderName})`),
+    index("setup_requests_search_idx").using("gin", sql`${t.searchText} gin_trgm_ops`),
   ],
 );
 

@@ -22,11 +22,10 @@ export async function createTestDatabase(): Promise<DatabaseHandle> {
   } else {
     const dumpPath = process.env.SAGWISE_TEST_PGLITE_DUMP;
     if (!dumpPath) throw new Error("tests/helpers/global-setup.ts did not run");
-    const { PGlite } = await import("@electric-sql/pglite");
+    const { createPglite } = await import("@/db/pglite");
     const { drizzle } = await import("drizzle-orm/pglite");
     const schema = await import("@/db/schema");
-    const client = new PGlite({ loadDataDir: new Blob([readFileSync(dumpPath)]) });
-    await client.waitReady;
+    const client = await createPglite({ loadDataDir: new Blob([readFileSync(dumpPath)]) });
     handle = {
       db: drizzle({ client, schema }) as unknown as DatabaseHandle["db"],
       kind: "pglite",

@@ -3,11 +3,11 @@
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
-import { PGlite } from "@electric-sql/pglite";
 import { drizzle } from "drizzle-orm/pglite";
 import { migrate } from "drizzle-orm/pglite/migrator";
 import pg from "pg";
 import { MIGRATIONS_FOLDER } from "../../db/migrate";
+import { createPglite } from "../../db/pglite";
 
 export default async function setup() {
   const dir = mkdtempSync(path.join(os.tmpdir(), "sagwise-test-"));
@@ -43,7 +43,7 @@ export default async function setup() {
       rmSync(dir, { recursive: true, force: true });
     };
   }
-  const client = new PGlite();
+  const client = await createPglite();
   await migrate(drizzle({ client }), { migrationsFolder: MIGRATIONS_FOLDER });
   const dump = await client.dumpDataDir("none");
   await client.close();
