@@ -1,3 +1,5 @@
+export {};
+
 // `npm run bench`: every benchmark in turn. Each prints its figures as ratios to a baseline measured
 // in the same run, because these machines are shared and absolute timings drift.
 const benches = ["./sizing"];

@@ -119,11 +119,17 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     if (h < f.oilLevelMinMm || h > f.oilLevelMaxMm)
       warnings.push({ code: "FRONT_OIL_LEVEL_OUTSIDE_RANGE", severity: "critical", message: `Oil level ${fmt(h, 0)} mm is outside the fork's ${f.oilLevelMinMm}–${f.oilLevelMaxMm} mm.`, field: "front.oilLevelMm" });
   } else {
-    let best = Infinity;
+    // Levels where race sag stays reachable within the preload limits come first (the air volume
+    // changes the preload needed); among them the nearest bottoming ratio; ties go to the level nearer stock.
+    const reachable = (g: number) => {
+      const p = forkPreloadForSag(fk, k, g, W.raceN, t.raceSagMm);
+      return ov?.preloadMm !== undefined || (p >= limits.minMm && p <= limits.maxMm);
+    };
+    let best = [Infinity, Infinity, Infinity];
     for (const g of grid) {
-      const d = Math.abs(ratioAt(g) - targetRatio);
-      if (d < best - 1e-12 || (Math.abs(d - best) <= 1e-12 && Math.abs(g - h0) < Math.abs(h - h0))) {
-        best = d;
+      const score = [reachable(g) ? 0 : 1, Math.abs(ratioAt(g) - targetRatio), Math.abs(g - h0)];
+      if (score[0]! < best[0]! || (score[0] === best[0] && (score[1]! < best[1]! - 1e-12 || (Math.abs(score[1]! - best[1]!) <= 1e-12 && score[2]! < best[2]!)))) {
+        best = score;
         h = g;
       }
     }
