@@ -12,7 +12,7 @@ import { ATMOSPHERE_MPA, STANDARD_GRAVITY, pressureTriple, rateTriple } from "./
 import { OIL_LEVEL_STEP_MM } from "./defaults";
 import { CURVE_POINTS, describeSource, sagWarnings } from "./rear";
 import { SizingInputError } from "./errors";
-import { fmt } from "./format";
+import { fmt, rateText } from "./format";
 
 const FAST = 1.4; // γ for air: a fast stroke to the bottom is close to adiabatic (sizing-model.md)
 
@@ -101,8 +101,8 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const k = sel.chosen.rateNmm;
   reasons.push(
     `Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; ` +
-      `${fmt(sagOnly.rateNmm, 2)} N/mm per leg (${fk.sprungLegs} sprung) meets ${fmt(t.raceSagMm, 0)} mm race and ${fmt(mid, 0)} mm static sag` +
-      (c.rateFactor !== 1 ? `, times ${fmt(c.rateFactor, 3)} = ${fmt(idealRateNmm, 2)} N/mm.` : "."),
+      `${rateText(sagOnly.rateNmm, "front")} per leg (${fk.sprungLegs} sprung) meets ${fmt(t.raceSagMm, 0)} mm race and ${fmt(mid, 0)} mm static sag` +
+      (c.rateFactor !== 1 ? `, times ${fmt(c.rateFactor, 3)} = ${rateText(idealRateNmm, "front")}.` : "."),
   );
   describeSource("FRONT", "fork spring", sel.source, k, idealRateNmm, warnings, reasons);
 

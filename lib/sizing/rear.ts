@@ -6,7 +6,7 @@ import { idealSpringOn, leverageAt, travelAt, prepareLinkage, preloadForSag, sol
 import { evaluateCandidate, selectRate, type EndModel, type SagTargetsMm } from "./selection";
 import { naturalFrequencyOf } from "./frequency";
 import { rateTriple, STANDARD_GRAVITY } from "./units";
-import { fmt } from "./format";
+import { fmt, rateText } from "./format";
 
 export const CURVE_POINTS = 31;
 
@@ -60,8 +60,8 @@ export function evaluateRear(
   const k = sel.chosen.rateNmm;
   reasons.push(
     `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone; ` +
-      `${fmt(sagOnly.rateNmm, 1)} N/mm meets ${fmt(targets.raceSagMm, 0)} mm race sag with ${fmt(mid, 0)} mm static sag` +
-      (rateFactor !== 1 ? `, times ${fmt(rateFactor, 3)} for skill and style = ${fmt(idealRateNmm, 1)} N/mm.` : "."),
+      `${rateText(sagOnly.rateNmm, "rear")} meets ${fmt(targets.raceSagMm, 0)} mm race sag with ${fmt(mid, 0)} mm static sag` +
+      (rateFactor !== 1 ? `, times ${fmt(rateFactor, 3)} for skill and style = ${rateText(idealRateNmm, "rear")}.` : "."),
   );
   if (idealPreloadMm < r.preloadMinMm || idealPreloadMm > r.preloadMaxMm)
     warnings.push({
@@ -125,17 +125,18 @@ export function describeSource(
   reasons: string[],
 ): void {
   const end = code === "REAR" ? "Rear" : "Front";
-  if (source === "stock") reasons.push(`${end}: stocked ${what} ${fmt(k, 1)} N/mm meets the preload limits and the static sag window.`);
+  const rate = (v: number) => rateText(v, code === "REAR" ? "rear" : "front");
+  if (source === "stock") reasons.push(`${end}: stocked ${what} ${rate(k)} meets the preload limits and the static sag window.`);
   else if (source === "stock-nearest")
     warnings.push({
       code: `${code}_NO_STOCK_FIT`,
       severity: "caution",
-      message: `No stocked ${what} meets both the preload limits and the static sag window; nearest stocked ${fmt(k, 1)} N/mm shown. Order ${fmt(idealNmm, 1)} N/mm.`,
+      message: `No stocked ${what} meets both the preload limits and the static sag window; nearest stocked ${rate(k)} shown. Order ${rate(idealNmm)}.`,
       field: `${code === "REAR" ? "rear" : "front"}.chosenRate`,
     });
   else if (source === "order")
-    warnings.push({ code: `${code}_TO_ORDER`, severity: "info", message: `No ${what}s in stock: order ${fmt(k, 1)} N/mm.`, field: "stock" });
-  else reasons.push(`${end}: ${what} rate ${fmt(k, 1)} N/mm set by the tuner.`);
+    warnings.push({ code: `${code}_TO_ORDER`, severity: "info", message: `No ${what}s in stock: order ${rate(k)}.`, field: "stock" });
+  else reasons.push(`${end}: ${what} rate ${rate(k)} set by the tuner.`);
 }
 
 export function sagWarnings(
