@@ -20,7 +20,7 @@ import { resolveAuthSecret } from "@/lib/auth/secret";
 import { ensureStaffUser } from "@/lib/auth/staff";
 import { getEnv } from "@/lib/env";
 import { buildSizingInput } from "@/lib/requests/sizing-input";
-import { demoStatusToken, hashStatusToken, statusPath } from "@/lib/requests/token";
+import { demoStatusToken, statusPath } from "@/lib/requests/token";
 import { defaultTargetValues } from "@/lib/shop/targets";
 import {
   DISCIPLINES,
@@ -31,6 +31,7 @@ import {
   type BikeSpecInput,
 } from "@/lib/sizing";
 import { requestAnswersSchema } from "@/lib/validations/request";
+import { createStatusLink } from "./queries/status-links";
 import { DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, type DemoRequest } from "./seed-data";
 
 /** A uuid derived from a name, so a demo row has the same id on every run. */
@@ -166,12 +167,12 @@ async function seedRequest(
       bikeYear: answers.bike.year ?? null,
       riderMassKg: input.rider.massKg,
       answers,
-      statusTokenHash: hashStatusToken(token),
       assignedTunerId: tuner?.id ?? null,
       declineReason: demo.declineReason ?? null,
       createdAt,
       updatedAt: createdAt,
     });
+    await createStatusLink(id, tx, token);
     const approved = demo.status === "approved";
     const approvedAt = new Date(createdAt.getTime() + 86_400_000);
     await tx.insert(recommendationVersions).values({

@@ -1,8 +1,12 @@
 // Every e-mail template by name, with its subject line and demo props, for sending (lib/mail's
 // sendTemplateEmail) and for the staff preview page.
 import type { ReactElement } from "react";
+import * as requestDeclined from "./request-declined";
+import * as requestReceived from "./request-received";
+import * as sheetReady from "./sheet-ready";
 import * as signInLink from "./sign-in-link";
 import * as staffInvite from "./staff-invite";
+import * as tunerQuestion from "./tuner-question";
 
 export interface EmailTemplate<P> {
   Component: (props: P) => ReactElement;
@@ -25,6 +29,30 @@ export const emailTemplates = {
     demoProps: staffInvite.demoProps,
     description: "Invitation to the shop workspace",
   } satisfies EmailTemplate<staffInvite.StaffInviteEmailProps>,
+  "request-received": {
+    Component: requestReceived.RequestReceivedEmail,
+    subject: requestReceived.subject,
+    demoProps: requestReceived.demoProps,
+    description: "Confirmation with the private status link",
+  } satisfies EmailTemplate<requestReceived.RequestReceivedEmailProps>,
+  "tuner-question": {
+    Component: tunerQuestion.TunerQuestionEmail,
+    subject: tunerQuestion.subject,
+    demoProps: tunerQuestion.demoProps,
+    description: "A tuner's question to the rider",
+  } satisfies EmailTemplate<tunerQuestion.TunerQuestionEmailProps>,
+  "request-declined": {
+    Component: requestDeclined.RequestDeclinedEmail,
+    subject: requestDeclined.subject,
+    demoProps: requestDeclined.demoProps,
+    description: "Request declined, with the reason",
+  } satisfies EmailTemplate<requestDeclined.RequestDeclinedEmailProps>,
+  "sheet-ready": {
+    Component: sheetReady.SheetReadyEmail,
+    subject: sheetReady.subject,
+    demoProps: sheetReady.demoProps,
+    description: "Approved (or revised) setup sheet with its download link",
+  } satisfies EmailTemplate<sheetReady.SheetReadyEmailProps>,
 } as const;
 
 export type EmailTemplateName = keyof typeof emailTemplates;

@@ -200,12 +200,19 @@ CREATE TABLE "setup_requests" (
 	"bike_year" integer,
 	"rider_mass_kg" double precision NOT NULL,
 	"answers" jsonb NOT NULL,
-	"status_token_hash" text NOT NULL,
 	"assigned_tuner_id" text,
 	"decline_reason" text,
 	"search_text" text GENERATED ALWAYS AS (lower(rider_name || ' ' || rider_email || ' ' || bike_label)) STORED,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
+CREATE TABLE "status_links" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"request_id" uuid NOT NULL,
+	"token_hash" text NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"last_used_at" timestamp with time zone
 );
 --> statement-breakpoint
 CREATE TABLE "uploads" (
@@ -235,6 +242,7 @@ ALTER TABLE "sag_reports" ADD CONSTRAINT "sag_reports_version_id_recommendation_
 ALTER TABLE "setup_requests" ADD CONSTRAINT "setup_requests_rider_user_id_user_id_fk" FOREIGN KEY ("rider_user_id") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "setup_requests" ADD CONSTRAINT "setup_requests_bike_model_id_bike_models_id_fk" FOREIGN KEY ("bike_model_id") REFERENCES "public"."bike_models"("id") ON DELETE restrict ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "setup_requests" ADD CONSTRAINT "setup_requests_assigned_tuner_id_user_id_fk" FOREIGN KEY ("assigned_tuner_id") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "status_links" ADD CONSTRAINT "status_links_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "uploads" ADD CONSTRAINT "uploads_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 CREATE INDEX "account_user_idx" ON "account" USING btree ("user_id");--> statement-breakpoint
 CREATE INDEX "session_user_idx" ON "session" USING btree ("user_id");--> statement-breakpoint
@@ -255,7 +263,6 @@ CREATE UNIQUE INDEX "recommendation_versions_request_version_idx" ON "recommenda
 CREATE INDEX "request_messages_request_idx" ON "request_messages" USING btree ("request_id","created_at");--> statement-breakpoint
 CREATE INDEX "sag_reports_request_idx" ON "sag_reports" USING btree ("request_id","created_at");--> statement-breakpoint
 CREATE UNIQUE INDEX "setup_requests_number_idx" ON "setup_requests" USING btree ("number");--> statement-breakpoint
-CREATE UNIQUE INDEX "setup_requests_token_idx" ON "setup_requests" USING btree ("status_token_hash");--> statement-breakpoint
 CREATE INDEX "setup_requests_status_created_idx" ON "setup_requests" USING btree ("status","created_at");--> statement-breakpoint
 CREATE INDEX "setup_requests_created_idx" ON "setup_requests" USING btree ("created_at");--> statement-breakpoint
 CREATE INDEX "setup_requests_email_idx" ON "setup_requests" USING btree ("rider_email");--> statement-breakpoint
@@ -264,4 +271,6 @@ CREATE INDEX "setup_requests_discipline_idx" ON "setup_requests" USING btree ("d
 CREATE INDEX "setup_requests_bike_class_idx" ON "setup_requests" USING btree ("bike_class","created_at");--> statement-breakpoint
 CREATE INDEX "setup_requests_rider_name_idx" ON "setup_requests" USING btree (lower("rider_name"));--> statement-breakpoint
 CREATE INDEX "setup_requests_search_idx" ON "setup_requests" USING gin ("search_text" gin_trgm_ops);--> statement-breakpoint
+CREATE UNIQUE INDEX "status_links_token_idx" ON "status_links" USING btree ("token_hash");--> statement-breakpoint
+CREATE INDEX "status_links_request_idx" ON "status_links" USING btree ("request_id");--> statement-breakpoint
 CREATE INDEX "uploads_request_idx" ON "uploads" USING btree ("request_id");

@@ -47,8 +47,6 @@ export const setupRequests = pgTable(
     riderMassKg: doublePrecision("rider_mass_kg").notNull(),
     // Everything the rider answered, exactly as given (original units included).
     answers: jsonb("answers").notNull(),
-    // SHA-256 of the private status-link token; the token itself is never stored.
-    statusTokenHash: text("status_token_hash").notNull(),
     assignedTunerId: text("assigned_tuner_id").references(() => user.id, { onDelete: "set null" }),
     declineReason: text("decline_reason"),
     // Lower-cased rider name, e-mail and bike for the queue's search; a trigram index serves
@@ -61,7 +59,6 @@ export const setupRequests = pgTable(
   },
   (t) => [
     uniqueIndex("setup_requests_number_idx").on(t.number),
-    uniqueIndex("setup_requests_token_idx").on(t.statusTokenHash),
     // Queue: filter by status, newest first; and the plain newest-first listing.
     index("setup_requests_status_created_idx").on(t.status, t.createdAt),
     index("setup_requests_created_idx").on(t.createdAt),
@@ -71,6 +68,27 @@ export const setupRequests = pgTable(
     index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt),
     index("setup_requests_rider_name_idx").on(sql`lower(${t.riderName})`),
     index("setup_requests_search_idx").using("gin", sql`${t.searchText} gin_trgm_ops`),
+  ],
+);
+
+/**
+ * Private status links. Each e-mail to the rider carries a link with a fresh long random token; only
+ * its SHA-256 is stored, so a database leak leaks no working link, and every link sent stays valid.
+ */
+export const statusLinks = pgTable(
+  "status_links",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    requestId: uuid("request_id")
+      .notNull()
+      .references(() => setupRequests.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull(),
+    createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
+    lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+  },
+  (t) => [
+    uniqueIndex("status_links_token_idx").on(t.tokenHash),
+    index("status_links_request_idx").on(t.requestId),
   ],
 );
 

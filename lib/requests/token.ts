@@ -1,5 +1,4 @@
-// The rider's private status link holds a long random token; only its SHA-256 is stored, so a
-// database leak does not leak working links.
+// The rider's private status links: a long random token in the URL, only its SHA-256 stored.
 import { createHash, createHmac, randomBytes } from "node:crypto";
 
 export function newStatusToken(): string {
@@ -18,4 +17,10 @@ export function demoStatusToken(secret: string, requestId: string): string {
 
 export function statusPath(token: string): string {
   return `/status/${token}`;
+}
+
+export function sheetPath(requestId: string, version: number, token?: string): string {
+  const query = new URLSearchParams({ version: String(version) });
+  if (token) query.set("token", token);
+  return `/api/requests/${requestId}/sheet?${query}`;
 }

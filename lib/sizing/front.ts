@@ -4,13 +4,13 @@ import type { FrontResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { sprungLegsOf } from "./bike-schema";
 import { forkForce, forkPreloadForSag, forkRate, idealForkSpring, makeCoilFork, solveForkSag, type CoilFork } from "./fork";
-import { evaluateCandidate, selectRate, type EndModel, type SagTargetsMm } from "./selection";
+import { evaluateCandidate, idealToOrder, selectRate, type EndModel, type SagTargetsMm } from "./selection";
 import { airAbsMpaForSag, airChamberForce } from "./air";
 import { firstCrossing } from "./solve";
 import { naturalFrequencyOf } from "./frequency";
 import { ATMOSPHERE_MPA, STANDARD_GRAVITY, pressureTriple, rateTriple } from "./units";
 import { OIL_LEVEL_STEP_MM } from "./defaults";
-import { CURVE_POINTS, describeSource, sagWarnings } from "./rear";
+import { CURVE_POINTS, describeSource, limitNotes, sagWarnings } from "./rear";
 import { SizingInputError } from "./errors";
 import { fmt, rateText } from "./format";
 
@@ -71,39 +71,31 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const limits = { minMm: f.preloadMinMm, maxMm: f.preloadMaxMm };
   const h0 = f.stockOilLevelMm;
   const mid = (t.staticSagMinMm + t.staticSagMaxMm) / 2;
-  let sagOnly = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm);
-  if (!(sagOnly.rateNmm > 0) || !Number.isFinite(sagOnly.rateNmm)) {
-    // The rider adds less load than the air spring takes up between the two sags: size on race sag
-    // alone at minimum preload, k = (W_fr − 2F_air(s_r)) / (n_s·(p_min + s_r)), and say so.
-    const netPerLegN = forkPreloadForSag(fk, 1, h0, W.raceN, t.raceSagMm) + t.raceSagMm; // (W − 2F_air)/n_s
-    sagOnly = { rateNmm: netPerLegN / (limits.minMm + t.raceSagMm), preloadMm: limits.minMm };
-    if (!(sagOnly.rateNmm > 0))
-      throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" }]);
-    warnings.push({
-      code: "FRONT_SAG_TARGETS_UNREACHABLE",
-      severity: "caution",
-      message: `No fork spring gives both ${fmt(t.raceSagMm, 0)} mm race sag and ${fmt(mid, 0)} mm static sag for this rider; sized on race sag at minimum preload.`,
-      field: "front.sagTargets",
-    });
-  }
-  const idealRateNmm = sagOnly.rateNmm * c.rateFactor;
-  const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
+  const sagOnlyRateNmm = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm).rateNmm;
+  if (!(forkPreloadForSag(fk, 1, h0, W.raceN, t.raceSagMm) + t.raceSagMm > 0))
+    throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" }]);
   const modelAt = (h: number): EndModel => ({
     preloadForSag: (k, load, s) => forkPreloadForSag(fk, k, h, load, s),
     solveSag: (k, p, load) => solveForkSag(fk, k, p, h, load),
   });
   const m0 = modelAt(h0);
-  const preferStaticMm = c.rateFactor === 1 ? mid : m0.solveSag(idealRateNmm, idealPreloadMm, W.staticN).sagMm;
+  const ideal = idealToOrder(sagOnlyRateNmm * c.rateFactor, m0, W.raceN, t.raceSagMm, limits);
+  const idealRateNmm = ideal.rateNmm;
+  const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
+  const preferStaticMm = c.rateFactor === 1 && !ideal.limitedBy ? mid : m0.solveSag(idealRateNmm, idealPreloadMm, W.staticN).sagMm;
   const sel =
     ov?.rateNmm !== undefined
       ? { chosen: evaluateCandidate(m0, ov.rateNmm, W, t, limits), source: "override" as const }
       : selectRate(m0, c.stockRatesNmm, idealRateNmm, W, t, limits, preferStaticMm);
   const k = sel.chosen.rateNmm;
   reasons.push(
-    `Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; ` +
-      `${rateText(sagOnly.rateNmm, "front")} per leg (${fk.sprungLegs} sprung) meets ${fmt(t.raceSagMm, 0)} mm race and ${fmt(mid, 0)} mm static sag` +
-      (c.rateFactor !== 1 ? `, times ${fmt(c.rateFactor, 3)} = ${rateText(idealRateNmm, "front")}.` : "."),
+    `Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone` +
+      (sagOnlyRateNmm > 0
+        ? `; ${rateText(sagOnlyRateNmm, "front")} per leg (${fk.sprungLegs} sprung) meets ${fmt(t.raceSagMm, 0)} mm race and ${fmt(mid, 0)} mm static sag`
+        : "") +
+      (c.rateFactor !== 1 ? `, times ${fmt(c.rateFactor, 3)} for skill and style.` : "."),
   );
+  limitNotes("FRONT", "front", ideal, sagOnlyRateNmm * c.rateFactor, idealPreloadMm, t, mid, warnings, reasons);
   describeSource("FRONT", "fork spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   const clampP = (p: number) => Math.min(limits.maxMm, Math.max(limits.minMm, p));
@@ -161,7 +153,7 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     kind: f.kind,
     sprungLegs: fk.sprungLegs,
     idealRate: rateTriple(idealRateNmm),
-    sagOnlyIdealRateNmm: sagOnly.rateNmm,
+    sagOnlyIdealRateNmm: sagOnlyRateNmm,
     idealPreloadMm,
     chosenRate: rateTriple(k),
     stockRate: rateTriple(stockRate),

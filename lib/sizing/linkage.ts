@@ -168,12 +168,16 @@ export function idealSpringOn(
   raceSagMm: number,
   path: string,
 ): { rateNmm: number; preloadMm: number } {
-  const num = raceLoadN * leverageAt(L, raceSagMm) - staticLoadN * leverageAt(L, staticSagMm);
-  const den = travelAt(L, raceSagMm) - travelAt(L, staticSagMm);
-  const rateNmm = num / den;
+  const rateNmm = twoSagRate(L, staticLoadN, raceLoadN, staticSagMm, raceSagMm);
   if (!(rateNmm > 0) || !Number.isFinite(rateNmm))
     throw new SizingInputError([
       { path, message: "No spring can meet both sag targets on this leverage curve (ratio rises too fast)" },
     ]);
   return { rateNmm, preloadMm: preloadForSag(L, rateNmm, raceLoadN, raceSagMm) };
+}
+
+/** k* = (W_rr·LR(y_r) − W_rs·LR(y_s)) / (x(y_r) − x(y_s)); may be ≤ 0 when the targets are impossible. */
+export function twoSagRate(L: Linkage, staticLoadN: number, raceLoadN: number, staticSagMm: number, raceSagMm: number): number {
+  const num = raceLoadN * leverageAt(L, raceSagMm) - staticLoadN * leverageAt(L, staticSagMm);
+  return num / (travelAt(L, raceSagMm) - travelAt(L, staticSagMm));
 }

@@ -2,8 +2,8 @@ import type { BikeSpec } from "./bike-schema";
 import type { Loads } from "./loads";
 import type { RearResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
-import { idealSpringOn, leverageAt, travelAt, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
-import { evaluateCandidate, selectRate, type EndModel, type SagTargetsMm } from "./selection";
+import { twoSagRate, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
+import { evaluateCandidate, idealToOrder, selectRate, type EndModel, type IdealToOrder, type SagTargetsMm } from "./selection";
 import { naturalFrequencyOf } from "./frequency";
 import { rateTriple, STANDARD_GRAVITY } from "./units";
 import { fmt, rateText } from "./format";
@@ -32,26 +32,14 @@ export function evaluateRear(
   const m = rearModel(L, r.wheelTravelMm);
   const W = { staticN: loads.rearStaticN, raceN: loads.rearRaceN };
   const mid = (targets.staticSagMinMm + targets.staticSagMaxMm) / 2;
-  let sagOnly: { rateNmm: number; preloadMm: number };
-  try {
-    sagOnly = idealSpringOn(L, W.staticN, W.raceN, mid, targets.raceSagMm, "bike.rear.leverageCurve");
-  } catch {
-    // Both sag targets cannot be met (a very light rider's load barely differs from the bike's own):
-    // size on race sag alone at the collar's minimum preload, and say so.
-    const rateNmm = (W.raceN * leverageAt(L, targets.raceSagMm)) / (r.preloadMinMm + travelAt(L, targets.raceSagMm));
-    sagOnly = { rateNmm, preloadMm: r.preloadMinMm };
-    warnings.push({
-      code: "REAR_SAG_TARGETS_UNREACHABLE",
-      severity: "caution",
-      message: `No spring gives both ${fmt(targets.raceSagMm, 0)} mm race sag and ${fmt(mid, 0)} mm static sag for this rider; sized on race sag at minimum preload.`,
-      field: "rear.sagTargets",
-    });
-  }
-  const idealRateNmm = sagOnly.rateNmm * rateFactor;
-  const idealPreloadMm = preloadForSag(L, idealRateNmm, W.raceN, targets.raceSagMm);
-  // With a rate factor of 1 this is the window's middle; otherwise where the factored ideal puts it.
-  const preferStaticMm = rateFactor === 1 ? mid : solveSag(L, idealRateNmm, idealPreloadMm, W.staticN, r.wheelTravelMm).sagMm;
   const limits = { minMm: r.preloadMinMm, maxMm: r.preloadMaxMm };
+  const sagOnlyRateNmm = twoSagRate(L, W.staticN, W.raceN, mid, targets.raceSagMm);
+  const ideal = idealToOrder(sagOnlyRateNmm * rateFactor, m, W.raceN, targets.raceSagMm, limits);
+  const idealRateNmm = ideal.rateNmm;
+  const idealPreloadMm = preloadForSag(L, idealRateNmm, W.raceN, targets.raceSagMm);
+  // With a rate factor of 1 and no limit this is the window's middle; otherwise where the ideal puts it.
+  const preferStaticMm =
+    rateFactor === 1 && !ideal.limitedBy ? mid : solveSag(L, idealRateNmm, idealPreloadMm, W.staticN, r.wheelTravelMm).sagMm;
 
   const sel =
     ov?.rateNmm !== undefined
@@ -59,17 +47,11 @@ export function evaluateRear(
       : selectRate(m, stockRatesNmm, idealRateNmm, W, targets, limits, preferStaticMm);
   const k = sel.chosen.rateNmm;
   reasons.push(
-    `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone; ` +
-      `${rateText(sagOnly.rateNmm, "rear")} meets ${fmt(targets.raceSagMm, 0)} mm race sag with ${fmt(mid, 0)} mm static sag` +
-      (rateFactor !== 1 ? `, times ${fmt(rateFactor, 3)} for skill and style = ${rateText(idealRateNmm, "rear")}.` : "."),
+    `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone` +
+      (sagOnlyRateNmm > 0 ? `; ${rateText(sagOnlyRateNmm, "rear")} meets ${fmt(targets.raceSagMm, 0)} mm race sag with ${fmt(mid, 0)} mm static sag` : "") +
+      (rateFactor !== 1 ? `, times ${fmt(rateFactor, 3)} for skill and style.` : "."),
   );
-  if (idealPreloadMm < r.preloadMinMm || idealPreloadMm > r.preloadMaxMm)
-    warnings.push({
-      code: "REAR_IDEAL_PRELOAD_OUT_OF_RANGE",
-      severity: "info",
-      message: `The ideal rate would need ${fmt(idealPreloadMm, 1)} mm preload, outside ${r.preloadMinMm}–${r.preloadMaxMm} mm.`,
-      field: "rear.idealPreloadMm",
-    });
+  limitNotes("REAR", "rear", ideal, sagOnlyRateNmm * rateFactor, idealPreloadMm, targets, mid, warnings, reasons);
   describeSource("REAR", "shock spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   let preloadMm = sel.chosen.preloadMm;
@@ -98,7 +80,7 @@ export function evaluateRear(
   const sprungMassKg = W.raceN / STANDARD_GRAVITY;
   return {
     idealRate: rateTriple(idealRateNmm),
-    sagOnlyIdealRateNmm: sagOnly.rateNmm,
+    sagOnlyIdealRateNmm: sagOnlyRateNmm,
     idealPreloadMm,
     chosenRate: rateTriple(k),
     stockRate: rateTriple(r.stockRateNmm),
@@ -163,4 +145,33 @@ export function sagWarnings(
       message: `Static sag ${fmt(stat.sagMm, 0)} mm is outside ${fmt(t.staticSagMinMm, 0)}–${fmt(t.staticSagMaxMm, 0)} mm: the spring is ${stat.sagMm < t.staticSagMinMm ? "soft" : "stiff"} for this rider.`,
       field: `${field}.predicted.staticSagMm`,
     });
+}
+
+/** Say when the ideal to order is not the pure sag ideal, and why. */
+export function limitNotes(
+  code: "REAR" | "FRONT",
+  end: "rear" | "front",
+  ideal: IdealToOrder,
+  sagIdealNmm: number,
+  preloadMm: number,
+  t: SagTargetsMm,
+  staticMidMm: number,
+  warnings: SizingWarning[],
+  reasons: string[],
+): void {
+  if (ideal.limitedBy === "unreachable")
+    warnings.push({
+      code: `${code}_SAG_TARGETS_UNREACHABLE`,
+      severity: "caution",
+      message: `No spring gives both ${fmt(t.raceSagMm, 0)} mm race sag and ${fmt(staticMidMm, 0)} mm static sag for this rider; sized on race sag with the most preload allowed.`,
+      field: `${end}.sagTargets`,
+    });
+  else if (ideal.limitedBy)
+    warnings.push({
+      code: `${code}_IDEAL_LIMITED_BY_PRELOAD`,
+      severity: "info",
+      message: `The sag targets ask for ${rateText(sagIdealNmm, end)}, which needs preload outside the adjuster's limits; the ${ideal.limitedBy === "soft" ? "softest" : "stiffest"} fittable rate is ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm.`,
+      field: `${end}.idealRate`,
+    });
+  else reasons.push(`${code === "REAR" ? "Rear" : "Front"}: ideal ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm preload.`);
 }

@@ -85,3 +85,30 @@ export function selectRate(
   if (nearest) return { chosen: nearest, source: "stock-nearest", tried };
   return { chosen: evaluateCandidate(m, idealRateNmm, loads, t, limits), source: "order", tried };
 }
+
+export interface IdealToOrder {
+  rateNmm: number;
+  /** "soft"/"stiff": the sag ideal was moved to the softest/stiffest rate the preload limits allow;
+   *  "unreachable": no rate meets both sag targets, so the softest that reaches race sag. */
+  limitedBy: "soft" | "stiff" | "unreachable" | null;
+}
+
+/**
+ * The rate to order must be fittable: race sag on target with preload inside the adjuster's limits.
+ * At both ends the race-sag preload has the form p(k) = A/k − B (rear: A = W·LR(y_r), B = x(y_r);
+ * fork: A = (W − 2F_air)/n_s, B = s_r), so the fittable rates are A/(p_max + B) ≤ k ≤ A/(p_min + B).
+ * Clamping the sag ideal into that band keeps it monotonic in load and in sag (both bounds move the
+ * same way as the ideal).
+ */
+export function idealToOrder(sagIdealNmm: number, m: EndModel, raceN: number, raceSagMm: number, limits: Limits): IdealToOrder {
+  const p1 = m.preloadForSag(1, raceN, raceSagMm);
+  const p2 = m.preloadForSag(2, raceN, raceSagMm);
+  const A = 2 * (p1 - p2);
+  const B = A - p1;
+  const softest = A / (limits.maxMm + B);
+  const stiffest = A / (limits.minMm + B);
+  if (!(sagIdealNmm > 0) || !Number.isFinite(sagIdealNmm)) return { rateNmm: softest, limitedBy: "unreachable" };
+  if (sagIdealNmm < softest) return { rateNmm: softest, limitedBy: "soft" };
+  if (sagIdealNmm > stiffest) return { rateNmm: stiffest, limitedBy: "stiff" };
+  return { rateNmm: sagIdealNmm, limitedBy: null };
+}

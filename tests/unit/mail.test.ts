@@ -125,7 +125,6 @@ describe("sendMail / sendTemplateEmail", () => {
         bikeLabel: "300 two-stroke enduro (typical)",
         riderMassKg: 82,
         answers: {},
-        statusTokenHash: "unit-test-token-hash",
       })
       .returning({ id: setupRequests.id });
     respondWith(ok("msg-with-attachment"));

@@ -80,7 +80,8 @@ function allFinite(x: unknown): boolean {
 describe("properties of the ideal spring", () => {
   it("a heavier rider never gets a softer ideal spring (rear and front)", () => {
     fc.assert(
-      fc.property(validInput, fc.double({ min: 0.5, max: 30, noNaN: true }), (input, extraKg) => {
+      fc.property(validInput, fc.double({ min: 15, max: 220, noNaN: true }), fc.double({ min: 0.5, max: 30, noNaN: true }), (input, massKg, extraKg) => {
+        input.rider.massKg = massKg; // the whole valid range, not only the class's riders
         const heavier = structuredClone(input);
         heavier.rider.massKg += extraKg;
         const a = recommend(input);
@@ -127,6 +128,23 @@ describe("properties of the ideal spring", () => {
         const b = recommend(deeper);
         expect(b.rear.idealRate.nMm).toBeLessThanOrEqual(a.rear.idealRate.nMm);
         expect(b.front.idealRate!.nMm).toBeLessThanOrEqual(a.front.idealRate!.nMm);
+      }),
+      RUNS,
+    );
+  });
+});
+
+describe("the rate to order", () => {
+  it("can always be fitted: its race-sag preload lies within the adjuster's limits", () => {
+    fc.assert(
+      fc.property(validInput, fc.double({ min: 15, max: 250, noNaN: true }), (input, massKg) => {
+        input.rider.massKg = massKg;
+        const r = recommend(input);
+        const b = input.bike;
+        expect(r.rear.idealPreloadMm).toBeGreaterThanOrEqual(b.rear.preloadMinMm - 1e-9);
+        expect(r.rear.idealPreloadMm).toBeLessThanOrEqual(b.rear.preloadMaxMm + 1e-9);
+        expect(r.front.idealPreloadMm!).toBeGreaterThanOrEqual((b.fork.preloadMinMm ?? 0) - 1e-9);
+        expect(r.front.idealPreloadMm!).toBeLessThanOrEqual((b.fork.preloadMaxMm ?? 0) + 1e-9);
       }),
       RUNS,
     );

@@ -1,0 +1,56 @@
+// The frame of every e-mail a rider gets about a request: a greeting, a few paragraphs, one
+// button, and the plain address of the button's link for mail apps that hide buttons.
+import { Button, Heading, Text } from "@react-email/components";
+import type { ReactNode } from "react";
+import { EmailLayout, emailStyles as s } from "./email-layout";
+
+export interface RiderEmailProps {
+  shopName: string;
+  riderName: string;
+  preview: string;
+  heading: string;
+  children: ReactNode;
+  action: { label: string; url: string };
+  /** Shown under the button's address. */
+  after?: ReactNode;
+}
+
+export const RIDER_EMAIL_REASON =
+  "You get this e-mail because you asked this shop for a suspension setup. Keep it: the link is private to you.";
+
+export function RiderEmail({ shopName, riderName, preview, heading, children, action, after }: RiderEmailProps) {
+  return (
+    <EmailLayout shopName={shopName} preview={preview} reason={RIDER_EMAIL_REASON}>
+      <Heading as="h1" style={s.heading}>
+        {heading}
+      </Heading>
+      <Text style={s.paragraph}>Hello {riderName},</Text>
+      {children}
+      <Text style={s.paragraph}>
+        <Button href={action.url} style={s.button}>
+          {action.label}
+        </Button>
+      </Text>
+      <Text style={s.small}>If the button does nothing, copy this address into your browser:</Text>
+      <Text style={s.urlText}>{action.url}</Text>
+      {after}
+    </EmailLayout>
+  );
+}
+
+/** A quoted block (the tuner's question, the reason for a decline), kept as the tuner wrote it. */
+export function Quote({ children }: { children: ReactNode }) {
+  return (
+    <Text
+      style={{
+        ...s.paragraph,
+        borderLeft: "4px solid #2f6b4f",
+        paddingLeft: "12px",
+        whiteSpace: "pre-wrap",
+        color: "#1d2327",
+      }}
+    >
+      {children}
+    </Text>
+  );
+}
