@@ -29,9 +29,11 @@ const rearPointSchema = z.object({ wheelTravelMm: num, wheelForceN: num });
 const forkPointSchema = z.object({ forkTravelMm: num, forceN: num });
 
 export const rearResultSchema = z.object({
-  /** Rate the sag targets ask for, times the rate factor: what to order when nothing fits. */
+  /** What to order when nothing stocked fits: the sag ideal times the rate factor, limited to rates
+   *  that reach race sag with preload inside the adjuster's limits. */
   idealRate: rateTripleSchema,
-  /** Before the rate factor: the rate that meets both sag targets exactly. */
+  /** Before the rate factor and limits: the rate that meets both sag targets exactly (≤ 0 when no
+   *  spring can, with a *_SAG_TARGETS_UNREACHABLE warning). */
   sagOnlyIdealRateNmm: num,
   idealPreloadMm: num,
   chosenRate: rateTripleSchema,
