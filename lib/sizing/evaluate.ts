@@ -1,6 +1,6 @@
 import { z } from "zod";
-import { sizingInputSchema, type SizingInputParsed } from "./input-schema";
-import { setupOverridesSchema, type SetupOverrides } from "./overrides";
+import { sizingInputSchema, type SizingInput, type SizingInputParsed } from "./input-schema";
+import { setupOverridesSchema, type SetupOverrides, type SetupOverridesInput } from "./overrides";
 import type { Recommendation, SizingWarning } from "./output-schema";
 import { SizingInputError, pathOf } from "./errors";
 import { computeLoads } from "./loads";
@@ -30,8 +30,11 @@ function withSagOverrides(t: SagTargetsMm, ov: { raceSagMm?: number; staticSagMi
   return out;
 }
 
-/** The whole recommendation with a tuner's overrides applied; `recommend` is this with none. */
-export function evaluateSetup(input: unknown, overrides: unknown = {}): Recommendation {
+/**
+ * The whole recommendation with a tuner's overrides applied; `recommend` is this with none. Both
+ * arguments are validated at run time (types help callers, they are not trusted).
+ */
+export function evaluateSetup(input: SizingInput, overrides: SetupOverridesInput = {}): Recommendation {
   const inp = parseOrThrow(sizingInputSchema, input);
   const ov = parseOrThrow(setupOverridesSchema, overrides ?? {}, "overrides.");
   return evaluateParsed(inp, ov);

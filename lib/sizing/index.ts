@@ -29,7 +29,7 @@ export {
   type SizingWarning,
   type RateSource,
 } from "./output-schema";
-export { setupOverridesSchema, type SetupOverrides } from "./overrides";
+export { setupOverridesSchema, type SetupOverrides, type SetupOverridesInput } from "./overrides";
 export * from "./vocab";
 
 export { shockTravelAtMm, rearWheelForceN, solveRearSagMm, idealRearSpring, type LeveragePoint } from "./linkage";

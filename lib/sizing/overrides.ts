@@ -25,3 +25,4 @@ export const setupOverridesSchema = z.object({
 });
 
 export type SetupOverrides = z.output<typeof setupOverridesSchema>;
+export type SetupOverridesInput = z.input<typeof setupOverridesSchema>;
