@@ -31,6 +31,7 @@ import {
   type BikeSpecInput,
 } from "@/lib/sizing";
 import { requestAnswersSchema } from "@/lib/validations/request";
+import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
 import { DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, type DemoRequest } from "./seed-data";
 
@@ -136,18 +137,8 @@ async function seedRequest(
     ...demo.answers,
     bike: { ...demo.answers.bike, modelId: bike.id },
   });
-  const targets = defaultTargetValues(answers.riding.discipline, answers.rider.skill);
-  const input = buildSizingInput(answers, {
-    bike: bike.spec,
-    targets,
-    stock: {
-      forkRatesNmm: sizingDefaults.TYPICAL_FORK_RATES_NMM,
-      shockRatesNmm: sizingDefaults.TYPICAL_SHOCK_RATES_NMM,
-    },
-    clickerRules: sizingDefaults.DEFAULT_CLICKER_RULES,
-    gearMassKg: DEMO_SHOP.gearMassKg,
-    frequencyRatioWindow: { ...sizingDefaults.FREQUENCY_RATIO_WINDOW },
-  });
+  const context = await loadShopSizingContext(bike.spec, answers.riding.discipline, answers.rider.skill);
+  const input = buildSizingInput(answers, context);
   const output = recommend(input);
   const createdAt = new Date(Date.now() - demo.daysAgo * 86_400_000);
   const tuner = demo.tuner ? staff.get(demo.tuner) : undefined;

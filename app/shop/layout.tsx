@@ -4,13 +4,16 @@ import { SignOutButton } from "@/components/auth/sign-out-button";
 import { ShopNav, type NavItem } from "@/components/shop/shop-nav";
 import { Logo } from "@/components/ui/logo";
 import { requireRole } from "@/lib/auth/guard";
-import { STAFF_ROLES } from "@/lib/auth/roles";
+import { STAFF_ROLES, type Role } from "@/lib/auth/roles";
 
-// Only pages that exist are linked; admin-only pages are added for admins only.
-const STAFF_NAV: NavItem[] = [{ href: "/shop", label: "Queue" }];
+// Link only pages that exist; `roles` lists who sees the link (the pages guard themselves too).
+const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
+  { href: "/shop", label: "Queue", roles: STAFF_ROLES },
+];
 
 export default async function ShopLayout({ children }: { children: ReactNode }) {
   const user = await requireRole(STAFF_ROLES, { page: "/shop" });
+  const items = SHOP_NAV.filter((item) => item.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
   return (
     <div className="flex min-h-dvh flex-col">
       <header className="bg-pine-900 text-white">
@@ -18,7 +21,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
           <Link href="/shop" className="inline-flex min-h-11 items-center">
             <Logo />
           </Link>
-          <ShopNav items={STAFF_NAV} />
+          <ShopNav items={items} />
           <div className="ml-auto flex items-center gap-2 text-sm">
             <span>
               {user.name} <span className="text-pine-100">({user.role})</span>

@@ -107,8 +107,8 @@ CREATE TABLE "shop_settings" (
 	"paper_size" text DEFAULT 'A4' NOT NULL,
 	"sheet_footer" text,
 	"gear_mass_kg" double precision DEFAULT 8 NOT NULL,
-	"frequency_ratio_min" double precision DEFAULT 0.9 NOT NULL,
-	"frequency_ratio_max" double precision DEFAULT 1.1 NOT NULL,
+	"frequency_ratio_min" double precision DEFAULT 0.8 NOT NULL,
+	"frequency_ratio_max" double precision DEFAULT 1.8 NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint

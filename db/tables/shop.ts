@@ -30,9 +30,9 @@ export const shopSettings = pgTable("shop_settings", {
   paperSize: text("paper_size").notNull().default("A4"),
   sheetFooter: text("sheet_footer"),
   gearMassKg: doublePrecision("gear_mass_kg").notNull().default(8),
-  // Window for front/rear natural-frequency ratio shown on the review screen.
-  frequencyRatioMin: doublePrecision("frequency_ratio_min").notNull().default(0.9),
-  frequencyRatioMax: doublePrecision("frequency_ratio_max").notNull().default(1.1),
+  // Window for the front/rear natural-frequency ratio (engine default: lib/sizing/defaults.ts).
+  frequencyRatioMin: doublePrecision("frequency_ratio_min").notNull().default(0.8),
+  frequencyRatioMax: doublePrecision("frequency_ratio_max").notNull().default(1.8),
   updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
 });
 
