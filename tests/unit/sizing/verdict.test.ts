@@ -71,13 +71,13 @@ describe("sag verdict, rear", () => {
 });
 
 describe("sag verdict, front", () => {
-  it("a heavier rider compresses the fork more: too soft, add preload", () => {
+  it("a much heavier rider compresses the fork more: too soft, add preload", () => {
     const fk = coilForkOf(rec.input.bike);
     const k = rec.front.chosenRate!.nMm;
     const p = rec.front.preloadMm!;
     const h = rec.front.oilLevelMm!;
     const F = (s: number) => forkForce(fk, k, p, h, s, 1);
-    const heavierN = rec.resolved.loads.frontRaceN + 20 * (1 - rec.resolved.riderRearShare) * STANDARD_GRAVITY * Math.cos((27 * Math.PI) / 180);
+    const heavierN = rec.resolved.loads.frontRaceN + 50 * (1 - rec.resolved.riderRearShare) * STANDARD_GRAVITY * Math.cos((27 * Math.PI) / 180);
     const measured = {
       staticSagMm: firstCrossing(F, rec.resolved.loads.frontStaticN, fk.travelMm, []).sagMm,
       raceSagMm: firstCrossing(F, heavierN, fk.travelMm, []).sagMm,
@@ -85,6 +85,7 @@ describe("sag verdict, front", () => {
     const right = sagVerdict({ input, recommendation: rec, end: "front", measured: { staticSagMm: rec.front.predicted.staticSagMm, raceSagMm: rec.front.predicted.raceSagMm } });
     expect(right.verdict).toBe("right");
     const v = sagVerdict({ input, recommendation: rec, end: "front", measured });
+    expect(v.verdict).toBe("too-soft");
     expect(v.preloadChangeMm!).toBeGreaterThan(0);
     expect(v.suggestedRateNmm!).toBeGreaterThan(k);
     expect(v.collarTurnsChange).toBeNull();
