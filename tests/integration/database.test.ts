@@ -1,4 +1,5 @@
-import { mkdtempSync, rmSync } from "node:fs";
+import { spawnSync } from "node:child_process";
+import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { eq, sql } from "drizzle-orm";
@@ -56,15 +57,40 @@ describe("PGlite on disk", () => {
     await second.close();
   }, 60_000);
 
-  it("refuses a second opener of the same folder while the first holds it", async () => {
+  it("refuses a second process on the same folder while the first holds it", async () => {
     const dataDir = path.join(dir, "locked");
     const first = await openPglite(dataDir);
-    // Same process re-entering is the one case the pid check cannot tell apart; a child process
-    // would be the real second opener, so simulate it by writing another live pid (our parent).
-    await first.close();
+    try {
+      // A real second process (the seed, another server) trying the same folder.
+      const script = `import("./db/client.ts").then(m => m.openPglite(${JSON.stringify(dataDir)}))
+        .then(() => { console.log("opened"); process.exit(0); })
+        .catch((e) => { console.error(e.message); process.exit(3); });`;
+      const child = spawnSync("npx", ["tsx", "--eval", script], { encoding: "utf8", timeout: 60_000 });
+      expect(child.status).toBe(3);
+      expect(child.stderr).toContain(`in use by process ${process.pid}`);
+    } finally {
+      await first.close();
+    }
+    // Once released, the folder opens again.
+    const again = await openPglite(dataDir);
+    await again.close();
+  }, 90_000);
+
+  it("takes over a lock left by a process that no longer exists", async () => {
+    const dataDir = path.join(dir, "stale");
+    const { writeFileSync } = await import("node:fs");
+    mkdirSync(dir, { recursive: true });
+    // pid_max on Linux is at most 4194304, so this pid cannot be alive.
+    writeFileSync(`${dataDir}.lock`, "4194399");
+    const handle = await openPglite(dataDir);
+    await handle.close();
+  }, 60_000);
+
+  it("fails clearly when another live process holds the lock file", async () => {
+    const dataDir = path.join(dir, "held");
     const { writeFileSync } = await import("node:fs");
     writeFileSync(`${dataDir}.lock`, String(process.ppid));
     await expect(openPglite(dataDir)).rejects.toBeInstanceOf(DataDirLockedError);
     rmSync(`${dataDir}.lock`);
-  }, 60_000);
+  });
 });
