@@ -6,6 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { FormAlert } from "@/components/ui/form-alert";
 import { authClient } from "@/lib/auth/client";
 import { riderLinkSchema } from "@/lib/validations/auth";
 
@@ -52,11 +53,7 @@ export function RiderLinkForm() {
         error={formState.errors.email?.message}
         {...register("email")}
       />
-      {failure ? (
-        <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm font-medium text-red-800">
-          {failure}
-        </p>
-      ) : null}
+      <FormAlert message={failure} />
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Sending…" : "E-mail me a sign-in link"}
       </Button>

@@ -7,6 +7,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { FormAlert } from "@/components/ui/form-alert";
 import { authClient } from "@/lib/auth/client";
 import { staffSignInSchema } from "@/lib/validations/auth";
 
@@ -54,11 +55,7 @@ export function StaffSignInForm({ next }: { next: string }) {
         error={formState.errors.password?.message}
         {...register("password")}
       />
-      {failure ? (
-        <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm font-medium text-red-800">
-          {failure}
-        </p>
-      ) : null}
+      <FormAlert message={failure} />
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Signing in…" : "Sign in"}
       </Button>
