@@ -2,6 +2,7 @@
 import { and, asc, eq, inArray, or, isNull } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import {
+  bikeModels,
   outboundEmails,
   requestMessages,
   sagReports,
@@ -83,4 +84,17 @@ export async function listStaffMembers() {
 export async function findStaffMember(userId: string) {
   const staff = await listStaffMembers();
   return staff.find((s) => s.id === userId) ?? null;
+}
+
+/** Bike classes of the catalog for the queue's filter (requests store the class, not the model). */
+export async function listBikeClassOptions() {
+  const db = await getDb();
+  const rows = await db
+    .selectDistinct({ value: bikeModels.bikeClass, label: bikeModels.name })
+    .from(bikeModels)
+    .orderBy(asc(bikeModels.name));
+  // One entry per class: the first model's name labels it.
+  const seen = new Map<string, string>();
+  for (const r of rows) if (!seen.has(r.value)) seen.set(r.value, r.label);
+  return [...seen].map(([value, label]) => ({ value, label }));
 }
