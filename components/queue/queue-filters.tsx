@@ -58,10 +58,10 @@ export function QueueFiltersForm({
       </label>
       <label className={labelClass}>
         Discipline
-        <select value={filters.discipline} onChange={pick("discipline")} className={`${selectClass} capitalize`}>
+        <select value={filters.discipline} onChange={pick("discipline")} className={selectClass}>
           <option value="">Any discipline</option>
           {DISCIPLINES.map((d) => (
-            <option key={d} value={d}>{d.replace("-", " ")}</option>
+            <option key={d} value={d}>{d.charAt(0).toUpperCase() + d.slice(1).replace("-", " ")}</option>
           ))}
         </select>
       </label>

@@ -81,7 +81,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
     setMessage(null);
     try {
       let version: number | null = latest.version;
-      if (dirty || (action === "save" && frozen)) version = await save();
+      if (dirty) version = await save();
       if (version === null) return;
       if (action === "approve") {
         const r = await postJson(`/api/requests/${requestId}/approve`, "POST", { version });
@@ -121,7 +121,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             </p>
           ) : null}
           <div className="flex flex-wrap gap-3">
-            <Button type="submit" variant="secondary" disabled={busy || invalid || (!dirty && !frozen)}>
+            <Button type="submit" variant="secondary" disabled={busy || invalid || !dirty}>
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
             <Button onClick={() => void run("approve")} disabled={busy || invalid || (frozen && !dirty)}>
