@@ -26,17 +26,22 @@ export function QueueFiltersForm({
 }) {
   // Search waits for a pause in typing so each keystroke does not hit the server.
   const [q, setQ] = useState(filters.q);
-  // When the URL's search changes from outside (clear filters, back button), show it.
+  const [sentQ, setSentQ] = useState(filters.q);
+  useEffect(() => {
+    if (q === filters.q) return;
+    const t = setTimeout(() => {
+      setSentQ(q);
+      onChange({ q });
+    }, 300);
+    return () => clearTimeout(t);
+  }, [q, filters.q, onChange]);
+  // When the URL's search changes from outside (clear filters, back button), show it; our own
+  // update arriving late must not overwrite what the tuner has typed since.
   const [urlQ, setUrlQ] = useState(filters.q);
   if (urlQ !== filters.q) {
     setUrlQ(filters.q);
-    setQ(filters.q);
+    if (filters.q !== sentQ) setQ(filters.q);
   }
-  useEffect(() => {
-    if (q === filters.q) return;
-    const t = setTimeout(() => onChange({ q }), 300);
-    return () => clearTimeout(t);
-  }, [q, filters.q, onChange]);
 
   const pick = (key: keyof QueueFilters) => (e: { target: { value: string } }) => onChange({ [key]: e.target.value });
   const active = ["status", "q", "discipline", "bikeClass", "tuner", "from", "to"].some((k) => filters[k as keyof QueueFilters]);

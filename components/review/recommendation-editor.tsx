@@ -33,6 +33,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   const [message, setMessage] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
+  const [acknowledged, setAcknowledged] = useState(false);
 
   const engine = useMemo(() => evaluateLive(input, {}), [input]);
   const air = engine.ok && engine.rec.front.kind === "air";
@@ -96,6 +97,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   }
 
   const r = shown;
+  const critical = r.warnings.filter((w) => w.severity === "critical");
   return (
     <section aria-labelledby="adjust-heading" className="flex flex-col gap-4">
       <h2 id="adjust-heading" className="text-xl font-semibold">Adjust version {latest.version}{frozen ? " (approved)" : " (draft)"}</h2>
@@ -120,11 +122,20 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
               {message.text}
             </p>
           ) : null}
+          {critical.length ? (
+            <label className="flex items-start gap-2 rounded-lg border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
+              <input type="checkbox" className="mt-1 size-5" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
+              <span>
+                This setup has {critical.length} critical warning{critical.length === 1 ? "" : "s"} (see the list). I have checked them
+                against the manufacturer&apos;s manual and approve anyway.
+              </span>
+            </label>
+          ) : null}
           <div className="flex flex-wrap gap-3">
             <Button type="submit" variant="secondary" disabled={busy || invalid || !dirty}>
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
-            <Button onClick={() => void run("approve")} disabled={busy || invalid || (frozen && !dirty)}>
+            <Button onClick={() => void run("approve")} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
               {dirty ? "Save and approve" : "Approve"} — e-mail the rider
             </Button>
             <Button variant="ghost" disabled={busy || !dirty} onClick={() => { setValues(initial); setServerErrors({}); setMessage(null); }}>

@@ -141,6 +141,8 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
       auditBy(actor, requestId, "recommendation.approved", {
         version: latest.version,
         superseded: superseded.map((s) => s.version),
+        // Approving over a critical warning is the tuner's call (the screen asks to confirm); keep it on record.
+        criticalWarnings: criticalCodes(latest.output),
       }),
     );
     await recordAudit(events, tx);
@@ -152,4 +154,9 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
     { actor: { userId: actor.id, label: actor.name } },
   );
   return { version, revised, mail };
+}
+
+function criticalCodes(output: unknown): string[] {
+  const warnings = (output as { warnings?: { code: string; severity: string }[] } | null)?.warnings ?? [];
+  return warnings.filter((w) => w.severity === "critical").map((w) => w.code);
 }

@@ -227,6 +227,17 @@ describe("ask, decline, assign", () => {
     expect(assigned?.detail).toMatchObject({ from: null, to: ines.id, toName: "Ines Harrowgate" });
   });
 
+  it("two approvals racing on the same draft: exactly one wins, the other gets 409, one e-mail goes out", async () => {
+    const id = stableUuid("request:r08");
+    const before = sent.length;
+    const results = await Promise.all([call(approve, id, "POST", {}), call(approve, id, "POST", {})]);
+    expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    expect(sent.slice(before).filter((m) => m.to.includes("lotte.brightwater@example.test"))).toHaveLength(1);
+    const approvals = (await listAuditForRequest(id)).filter((e) => e.action === "recommendation.approved");
+    expect(approvals).toHaveLength(1);
+    expect(approvals[0]!.detail).toMatchObject({ version: 1, superseded: [], criticalWarnings: [] });
+  });
+
   it("answers 404 for an unknown or malformed id", async () => {
     expect((await call(getDetail, stableUuid("request:none"), "GET")).status).toBe(404);
     expect((await call(getDetail, "not-a-uuid", "GET")).status).toBe(404);
