@@ -65,7 +65,9 @@ export function paramsFrom(f: QueueFilters): URLSearchParams {
 export class QueueError extends Error {}
 
 export async function fetchQueue(f: QueueFilters): Promise<QueuePage> {
-  const response = await fetch(`/api/requests?${paramsFrom(f)}`, { headers: { accept: "application/json" } });
+  const params = paramsFrom(f);
+  params.set("counts", "1");
+  const response = await fetch(`/api/requests?${params}`, { headers: { accept: "application/json" } });
   const body = (await response.json().catch(() => ({}))) as Partial<QueuePage> & { error?: string; fields?: Record<string, string> };
   if (!response.ok) {
     const fields = body.fields ? Object.entries(body.fields).map(([k, m]) => `${k}: ${m}`).join("; ") : "";

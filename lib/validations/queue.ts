@@ -35,6 +35,8 @@ export const queueQuerySchema = z
       .max(100, "Page size is at most 100")
       .default(25),
     sort: z.enum(QUEUE_SORTS, { message: `Sort is one of ${QUEUE_SORTS.join(", ")}` }).default("newest"),
+    // "1": also answer the number of requests per status (the queue's header cards).
+    counts: z.enum(["1", "true"], { message: "counts is 1 or absent" }).optional(),
   })
   .refine((q) => !q.from || !q.to || q.from <= q.to, { message: "From must be on or before To", path: ["to"] });
 
