@@ -1,6 +1,7 @@
 import Link from "next/link";
 import type { ReactNode } from "react";
 import { SignOutButton } from "@/components/auth/sign-out-button";
+import { Providers } from "@/components/providers";
 import { ShopNav, type NavItem } from "@/components/shop/shop-nav";
 import { Logo } from "@/components/ui/logo";
 import { requireRole } from "@/lib/auth/guard";
@@ -30,7 +31,9 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
           </div>
         </div>
       </header>
-      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">{children}</main>
+      <main className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
+        <Providers>{children}</Providers>
+      </main>
     </div>
   );
 }

@@ -1,6 +1,6 @@
-import { and, asc, count, desc, eq, like, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, gte, isNull, like, lt, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { REQUEST_STATUSES, setupRequests, type RequestStatus } from "@/db/schema";
+import { REQUEST_STATUSES, setupRequests, user, type RequestStatus } from "@/db/schema";
 import type { QueueQuery } from "@/lib/validations/queue";
 
 export async function countRequestsByStatus(): Promise<Record<RequestStatus, number>> {
@@ -50,25 +50,54 @@ const QUEUE_ORDER = {
   newest: [desc(setupRequests.createdAt)],
   oldest: [asc(setupRequests.createdAt)],
   number: [desc(setupRequests.number)],
+  number_asc: [asc(setupRequests.number)],
   rider: [asc(sql`lower(${setupRequests.riderName})`), desc(setupRequests.createdAt)],
+  rider_desc: [desc(sql`lower(${setupRequests.riderName})`), desc(setupRequests.createdAt)],
   status: [asc(setupRequests.status), desc(setupRequests.createdAt)],
-} as const;
+} as const satisfies Record<QueueQuery["sort"], unknown[]>;
 
-/** One page of the staff queue with the total matching rows. */
-export async function listQueue(query: QueueQuery) {
-  const db = await getDb();
-  const conditions = [];
+const DAY_MS = 86_400_000;
+
+/** The WHERE of the queue; each filter hits an index (status/discipline/bike class/tuner + created). */
+function queueConditions(query: QueueQuery, callerId?: string): SQL | undefined {
+  const conditions: SQL[] = [];
   if (query.status) conditions.push(eq(setupRequests.status, query.status));
+  if (query.discipline) conditions.push(eq(setupRequests.discipline, query.discipline));
+  if (query.bikeClass) conditions.push(eq(setupRequests.bikeClass, query.bikeClass));
+  if (query.tuner === "unassigned") conditions.push(isNull(setupRequests.assignedTunerId));
+  else if (query.tuner === "me" && callerId) conditions.push(eq(setupRequests.assignedTunerId, callerId));
+  else if (query.tuner && query.tuner !== "me") conditions.push(eq(setupRequests.assignedTunerId, query.tuner));
+  // Dates are whole UTC days; "to" includes its whole day.
+  if (query.from) conditions.push(gte(setupRequests.createdAt, new Date(`${query.from}T00:00:00Z`)));
+  if (query.to) conditions.push(lt(setupRequests.createdAt, new Date(Date.parse(`${query.to}T00:00:00Z`) + DAY_MS)));
   if (query.q) {
     // search_text is lower-cased and trigram-indexed; LIKE wildcards typed by the user are literal.
     const pattern = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
     conditions.push(like(setupRequests.searchText, pattern));
   }
-  const where = conditions.length ? and(...conditions) : undefined;
+  return conditions.length ? and(...conditions) : undefined;
+}
+
+/**
+ * One page of the staff queue with the total matching rows. The tuner's name comes from a join
+ * (one query for the page, one for the count: no per-row lookups).
+ */
+export async function listQueue(query: QueueQuery, callerId?: string) {
+  const db = await getDb();
+  const where = queueConditions(query, callerId);
   const [items, totals] = await Promise.all([
     db
-      .select({ ...summaryColumns, riderEmail: setupRequests.riderEmail, skill: setupRequests.skill })
+      .select({
+        ...summaryColumns,
+        riderEmail: setupRequests.riderEmail,
+        skill: setupRequests.skill,
+        bikeClass: setupRequests.bikeClass,
+        assignedTunerId: setupRequests.assignedTunerId,
+        assignedTunerName: user.name,
+        updatedAt: setupRequests.updatedAt,
+      })
       .from(setupRequests)
+      .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
       .where(where)
       .orderBy(...QUEUE_ORDER[query.sort])
       .limit(query.pageSize)
@@ -77,3 +106,5 @@ export async function listQueue(query: QueueQuery) {
   ]);
   return { items, total: Number(totals[0]?.n ?? 0) };
 }
+
+export type QueueItem = Awaited<ReturnType<typeof listQueue>>["items"][number];

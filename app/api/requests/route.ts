@@ -1,16 +1,21 @@
-// GET /api/requests: the staff queue, `{ items: [{ id, status, … }], total }`.
+// GET /api/requests: the staff queue, `{ items: [{ id, status, … }], total }` (+ `counts` per status
+// with `counts=1`). Filters: status, discipline, bikeClass, tuner (user id | "me" | "unassigned"),
+// from/to (UTC days), q (rider name, e-mail, bike); page, pageSize, sort.
 import { NextResponse } from "next/server";
-import { listQueue } from "@/db/queries/requests";
+import { countRequestsByStatus, listQueue } from "@/db/queries/requests";
 import { withErrors } from "@/lib/api/respond";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import { queueQuerySchema } from "@/lib/validations/queue";
+import { queueParams, queueQuerySchema } from "@/lib/validations/queue";
 
 export const dynamic = "force-dynamic";
 
 export const GET = withErrors(async (request: Request) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
-  const params = Object.fromEntries(new URL(request.url).searchParams);
-  const query = queueQuerySchema.parse(params);
-  return NextResponse.json(await listQueue(query));
+  const caller = await requireRole(STAFF_ROLES, { headers: request.headers });
+  const query = queueQuerySchema.parse(queueParams(new URL(request.url).searchParams));
+  const [page, counts] = await Promise.all([
+    listQueue(query, caller.id),
+    query.counts ? countRequestsByStatus() : undefined,
+  ]);
+  return NextResponse.json(counts ? { ...page, counts } : page);
 });

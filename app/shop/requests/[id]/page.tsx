@@ -1,0 +1,111 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { AnswersPanel } from "@/components/review/answers-panel";
+import { EmailsPanel, MessagesPanel, PhotosPanel, SagReportsPanel } from "@/components/review/activity-panels";
+import { AuditTimeline } from "@/components/review/audit-timeline";
+import { RecommendationEditor } from "@/components/review/recommendation-editor";
+import { VersionPicker, sheetLinkFor } from "@/components/review/version-picker";
+import { VersionView } from "@/components/review/version-view";
+import { AssignForm, WorkflowActions } from "@/components/review/workflow-actions";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { getRequestDetail, listStaffMembers } from "@/db/queries/review";
+import { startReview } from "@/db/queries/workflow";
+import { requireRole } from "@/lib/auth/guard";
+import { STAFF_ROLES } from "@/lib/auth/roles";
+import type { Recommendation, SetupOverrides, SizingInput } from "@/lib/sizing";
+
+export const metadata: Metadata = { title: "Request" };
+export const dynamic = "force-dynamic";
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeZone: "UTC" });
+
+export default async function RequestPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
+  const { id } = await params;
+  const user = await requireRole(STAFF_ROLES, { page: `/shop/requests/${id}` });
+  if (!UUID.test(id)) notFound();
+  let detail = await getRequestDetail(id);
+  if (!detail) notFound();
+  // A tuner opening a new request starts its review (audited like any status change).
+  if (detail.status === "submitted") {
+    await startReview(id, user);
+    detail = (await getRequestDetail(id)) ?? notFound();
+  }
+  const staff = (await listStaffMembers()).map(({ id: sid, name }) => ({ id: sid, name }));
+  const { version: asked } = await searchParams;
+  const latest = detail.versions.at(-1);
+  const shown = detail.versions.find((v) => String(v.version) === asked) ?? latest;
+  const editable = shown && latest && shown.version === latest.version && detail.status !== "declined";
+
+  return (
+    <div className="flex flex-col gap-6">
+      <Link href="/shop" className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">← Back to the queue</Link>
+      <header className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
+        <div className="flex flex-wrap items-center gap-3">
+          <h1 className="text-2xl font-bold">Request {detail.number}: {detail.riderName}</h1>
+          <StatusBadge status={detail.status} />
+        </div>
+        <p className="text-stone-700">
+          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {day.format(detail.createdAt)}
+        </p>
+        {detail.status === "declined" && detail.declineReason ? (
+          <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm"><span className="font-semibold">Declined:</span> {detail.declineReason}</p>
+        ) : null}
+        {detail.status === "waiting_for_rider" ? (
+          <p className="rounded-lg bg-violet-50 px-3 py-2 text-sm text-violet-900">Waiting for the rider&apos;s answer; it will appear under Questions and answers.</p>
+        ) : null}
+        <div className="flex flex-wrap items-end gap-4">
+          <AssignForm requestId={id} current={detail.assignedTunerId} staff={staff} />
+          {shown ? (
+            <a href={sheetLinkFor(id, shown).href} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center text-pine-700 underline">
+              {sheetLinkFor(id, shown).label}
+            </a>
+          ) : null}
+        </div>
+      </header>
+
+      {!shown ? (
+        <p role="alert" className="rounded-xl border border-amber-300 bg-amber-50 p-4">
+          The engine made no recommendation for this request (for example a bike that is not in the catalog). Ask the rider for
+          what is missing, or decline with a reason.
+        </p>
+      ) : editable ? (
+        <RecommendationEditor
+          key={shown.version}
+          requestId={id}
+          input={shown.input as SizingInput}
+          latest={{
+            version: shown.version,
+            state: shown.state,
+            overrides: (shown.overrides ?? {}) as SetupOverrides,
+            notesForRider: shown.notesForRider,
+            internalNotes: shown.internalNotes,
+          }}
+        />
+      ) : (
+        <VersionView
+          version={shown.version}
+          state={shown.state}
+          input={shown.input as SizingInput}
+          output={shown.output as Recommendation}
+          notesForRider={shown.notesForRider}
+          internalNotes={shown.internalNotes}
+        />
+      )}
+
+      {detail.versions.length > 0 ? <VersionPicker requestId={id} versions={detail.versions} shown={shown?.version ?? 0} /> : null}
+      <WorkflowActions requestId={id} status={detail.status} />
+      <div className="grid gap-6 lg:grid-cols-2">
+        <AnswersPanel answers={detail.answers} bikeLabel={detail.bikeLabel} />
+        <div className="flex flex-col gap-6">
+          <PhotosPanel photos={detail.photos} />
+          <MessagesPanel messages={detail.messages} />
+          <SagReportsPanel reports={detail.sagReports} />
+        </div>
+        <EmailsPanel emails={detail.emails} />
+        <AuditTimeline events={detail.audit} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,143 @@
+"use client";
+
+// The queue table (TanStack Table). Sorting and paging happen on the server: the table only maps
+// its sorting state to the API's `sort` parameter.
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  useReactTable,
+  type SortingState,
+} from "@tanstack/react-table";
+import Link from "next/link";
+import { StatusBadge } from "@/components/ui/status-badge";
+import type { QueueRow } from "./queue-data";
+
+const SORT_OF: Record<string, { asc: string; desc: string }> = {
+  number: { asc: "number_asc", desc: "number" },
+  riderName: { asc: "rider", desc: "rider_desc" },
+  status: { asc: "status", desc: "status" },
+  createdAt: { asc: "oldest", desc: "newest" },
+};
+
+export function sortingFrom(sort: string): SortingState {
+  for (const [id, s] of Object.entries(SORT_OF)) {
+    if (s.desc === sort) return [{ id, desc: id !== "status" }];
+    if (s.asc === sort) return [{ id, desc: false }];
+  }
+  return [{ id: "createdAt", desc: true }];
+}
+
+export function sortFrom(sorting: SortingState): string {
+  const first = sorting[0];
+  if (!first) return "newest";
+  const s = SORT_OF[first.id];
+  return s ? (first.desc ? s.desc : s.asc) : "newest";
+}
+
+const col = createColumnHelper<QueueRow>();
+const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
+
+const columns = [
+  col.accessor("number", { header: "No.", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
+  col.accessor("riderName", {
+    header: "Rider",
+    cell: (c) => (
+      <div className="flex flex-col">
+        <Link href={`/shop/requests/${c.row.original.id}`} className="font-medium text-pine-700 underline underline-offset-2 hover:text-pine-900">
+          {c.getValue()}
+        </Link>
+        <span className="text-xs text-stone-600">{c.row.original.riderEmail}</span>
+      </div>
+    ),
+  }),
+  col.accessor("bikeLabel", { header: "Bike", enableSorting: false }),
+  col.accessor("discipline", { header: "Discipline", enableSorting: false, cell: (c) => <span className="capitalize">{c.getValue().replace("-", " ")}</span> }),
+  col.accessor("assignedTunerName", { header: "Tuner", enableSorting: false, cell: (c) => c.getValue() ?? <span className="text-stone-500">Not assigned</span> }),
+  col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
+  col.accessor("createdAt", { header: "Received", cell: (c) => dateFormat.format(new Date(c.getValue())) }),
+];
+
+export function QueueTable({
+  rows,
+  sort,
+  onSort,
+  busy,
+}: {
+  rows: QueueRow[];
+  sort: string;
+  onSort: (sort: string) => void;
+  busy: boolean;
+}) {
+  const sorting = sortingFrom(sort);
+  // TanStack Table is not compatible with the React Compiler's memoization; the compiler skips this
+  // component on purpose (the table is small: one page of rows).
+  // eslint-disable-next-line react-hooks/incompatible-library
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting },
+    manualSorting: true,
+    manualPagination: true,
+    enableSortingRemoval: false,
+    onSortingChange: (updater) => onSort(sortFrom(typeof updater === "function" ? updater(sorting) : updater)),
+    getCoreRowModel: getCoreRowModel(),
+    getRowId: (r) => r.id,
+  });
+  return (
+    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white" aria-busy={busy}>
+      <table className="w-full text-left text-sm">
+        <caption className="sr-only">Setup requests, sorted by {sort}</caption>
+        <thead className="bg-stone-100 text-stone-700">
+          {table.getHeaderGroups().map((group) => (
+            <tr key={group.id}>
+              {group.headers.map((h) => {
+                const dir = h.column.getIsSorted();
+                return (
+                  <th
+                    key={h.id}
+                    scope="col"
+                    className="px-3 py-2"
+                    aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : undefined}
+                  >
+                    {h.column.getCanSort() ? (
+                      <button
+                        type="button"
+                        onClick={h.column.getToggleSortingHandler()}
+                        className="inline-flex min-h-11 items-center gap-1 font-semibold hover:text-pine-800"
+                      >
+                        {flexRender(h.column.columnDef.header, h.getContext())}
+                        <span aria-hidden="true">{dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}</span>
+                        <span className="sr-only">{dir ? `(sorted ${dir === "asc" ? "ascending" : "descending"})` : "(sort)"}</span>
+                      </button>
+                    ) : (
+                      flexRender(h.column.columnDef.header, h.getContext())
+                    )}
+                  </th>
+                );
+              })}
+            </tr>
+          ))}
+        </thead>
+        <tbody>
+          {table.getRowModel().rows.map((row) => (
+            <tr key={row.id} className="border-t border-stone-100 hover:bg-pine-50">
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className="px-3 py-2 align-top">
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
+            </tr>
+          ))}
+          {rows.length === 0 && !busy ? (
+            <tr>
+              <td colSpan={columns.length} className="px-3 py-6 text-center text-stone-600">
+                No requests match these filters.
+              </td>
+            </tr>
+          ) : null}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,59 @@
+// The adjust editor's pure parts: typed values → engine overrides (rate units converted with exact
+// factors), the figure-by-figure audit diff, and which workflow step may start from which status.
+import { describe, expect, it } from "vitest";
+import { overridesFrom, valuesFrom } from "@/components/review/editor-state";
+import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
+import { canStart, conflictMessage } from "@/lib/review/transitions";
+
+describe("overridesFrom", () => {
+  const empty = valuesFrom({}, null, null);
+
+  it("leaves every figure to the engine when nothing is typed", () => {
+    expect(overridesFrom(empty, false)).toEqual({ overrides: {}, errors: {} });
+  });
+
+  it("converts typed rates to N/mm (1 kgf = 9.80665 N; 1 lbf = 4.4482216152605 N; 1 in = 25.4 mm — NIST SP 811)", () => {
+    const { overrides } = overridesFrom({ ...empty, rearRate: "5.4", rearRateUnit: "kgf/mm", frontRate: "25", frontRateUnit: "lbf/in" }, false);
+    expect(overrides.rear?.rateNmm).toBeCloseTo(5.4 * 9.80665, 10);
+    expect(overrides.front?.rateNmm).toBeCloseTo((25 * 4.4482216152605) / 25.4, 10);
+  });
+
+  it("accepts a decimal comma, sends only the fork's own spring kind, and names a bad field", () => {
+    const coil = overridesFrom({ ...empty, frontOilLevel: "120,5", frontAirKpa: "700" }, false);
+    expect(coil.overrides).toEqual({ front: { oilLevelMm: 120.5 } });
+    const air = overridesFrom({ ...empty, frontOilLevel: "120", frontAirKpa: "700" }, true);
+    expect(air.overrides).toEqual({ front: { airPressureKpaGauge: 700 } });
+    const bad = overridesFrom({ ...empty, rearPreload: "ten", clickers: { forkRebound: "x" } }, false);
+    expect(Object.keys(bad.errors).sort()).toEqual(["clickers.forkRebound", "rear.preloadMm"]);
+  });
+
+  it("round-trips stored overrides into the form", () => {
+    const stored = { rear: { rateNmm: 52, preloadMm: 8 }, clickers: { shockRebound: 11 } };
+    expect(overridesFrom(valuesFrom(stored, "n", null), false).overrides).toEqual(stored);
+  });
+});
+
+describe("diffOverrides", () => {
+  it("lists each changed figure with old and new value, unchanged ones not at all", () => {
+    const a = { rear: { rateNmm: 50, preloadMm: 8 }, clickers: { forkRebound: 10 } };
+    const b = { rear: { rateNmm: 54, preloadMm: 8 }, front: { oilLevelMm: 130 } };
+    expect(diffOverrides(a, b)).toEqual([
+      { field: "clickers.forkRebound", from: 10, to: null },
+      { field: "front.oilLevelMm", from: null, to: 130 },
+      { field: "rear.rateNmm", from: 50, to: 54 },
+    ]);
+    expect(diffOverrides(b, b)).toEqual([]);
+    expect(compactOverrides({ rear: {}, front: { oilLevelMm: undefined } })).toEqual({});
+  });
+});
+
+describe("transitions", () => {
+  it("allows approving an approved request only through a revision, never a declined one", () => {
+    expect(canStart("approve", "in_review")).toBe(true);
+    expect(canStart("approve", "declined")).toBe(false);
+    expect(canStart("ask", "approved")).toBe(false);
+    expect(canStart("decline", "declined")).toBe(false);
+    expect(conflictMessage("decline", "declined")).toBe("This request is already declined.");
+    expect(conflictMessage("ask", "approved")).toContain("Save a revision first");
+  });
+});
