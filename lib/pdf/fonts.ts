@@ -1,5 +1,6 @@
-// Inter (SIL Open Font License, lib/pdf/fonts/LICENSE-Inter.txt) shipped with the app as .woff: react-pdf
-// embeds .woff/.ttf but not .woff2. The files are read from the project folder, which is the working
+// Inter (SIL Open Font License, lib/pdf/fonts/LICENSE-Inter.txt) shipped with the app as .ttf, made
+// losslessly from @fontsource/inter's .woff by lib/pdf/fonts/convert.ts (react-pdf embeds .woff/.ttf,
+// not .woff2; .ttf renders faster). The files are read from the project folder, which is the working
 // directory of `next start`, `next dev`, vitest and the scripts; @react-pdf/renderer stays an external
 // package, so nothing here goes through the bundler.
 import { existsSync } from "node:fs";
@@ -23,7 +24,7 @@ export function registerSheetFonts(): void {
   if (registered) return;
   const dir = sheetFontDir();
   const file = (subset: string, weight: number) => {
-    const src = path.join(dir, `inter-${subset}-${weight}-normal.woff`);
+    const src = path.join(dir, `inter-${subset}-${weight}-normal.ttf`);
     if (!existsSync(src)) throw new Error(`Setup sheet font missing: ${src} (run the app from the project folder)`);
     return { src, fontWeight: weight };
   };
