@@ -34,3 +34,13 @@ export function pdfInfo(pdf: Uint8Array): Record<string, string> {
 export function squash(text: string): string {
   return text.replace(/[ \t]+/g, " ");
 }
+
+/** Rows of `pdffonts`: name and whether it is embedded. */
+export function pdfFonts(pdf: Uint8Array): { name: string; embedded: boolean }[] {
+  const out = withFile(pdf, (file) => execFileSync("pdffonts", [file], { encoding: "utf8" }));
+  return out
+    .split("\n")
+    .slice(2)
+    .filter((line) => line.trim())
+    .map((line) => ({ name: line.split(/\s+/)[0]!, embedded: /\byes\s+yes\s+(yes|no)\s+\d+\s+\d+\s*$/.test(line) }));
+}

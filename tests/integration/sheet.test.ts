@@ -19,7 +19,7 @@ import { demoStatusToken } from "@/lib/requests/token";
 import { convertRate, recommendationSchema, type Recommendation } from "@/lib/sizing";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 import { captureMail, cookieFrom, signInStaff, signInWithEmailLink } from "../helpers/auth";
-import { pdfInfo, pdfText, squash } from "../helpers/pdf";
+import { pdfFonts, pdfInfo, pdfText, squash } from "../helpers/pdf";
 
 const SECRET = process.env.BETTER_AUTH_SECRET!; // the seed derives demo links from it
 const r09 = stableUuid("request:r09");
@@ -84,6 +84,10 @@ describe("setup sheet of seeded approved request r09", () => {
     // ISO 216: A4 is 210 × 297 mm = 595.28 × 841.89 pt.
     expect(info["Page size"]).toContain("595.28 x 841.89");
     expect(info.Title).toBe("Setup sheet, request 9, version 1");
+    // Only the shipped Inter, embedded as subsets: no text left to a viewer's fallback font.
+    const fonts = pdfFonts(pdf);
+    expect(fonts.map((f) => f.name.replace(/^[A-Z]{6}\+/, "")).sort()).toEqual(["Inter-Bold", "Inter-Regular", "Inter-SemiBold"]);
+    expect(fonts.every((f) => f.embedded)).toBe(true);
   });
 
   it("shows the shop, the rider, the bike, the version, the approval date and the tuner", () => {

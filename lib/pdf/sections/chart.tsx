@@ -2,9 +2,12 @@
 // d3 paths the request page draws on screen; here the viewBox scales it to the column.
 import { G, Line, Path, Svg, Text as SvgText, Text, View } from "@react-pdf/renderer";
 import type { ChartGeometry } from "@/lib/charts/force-curve";
+import { SHEET_FONT } from "../fonts";
 import { COLORS, s } from "../styles";
 
 const TICK_FONT = 13;
+// Svg text does not inherit the page font: name it, or the viewer falls back to its own Helvetica.
+const tick = { fontSize: TICK_FONT, fontFamily: SHEET_FONT };
 
 export function ForceChart({ title, geometry, width }: { title: string; geometry: ChartGeometry; width: number }) {
   const g = geometry;
@@ -18,13 +21,13 @@ export function ForceChart({ title, geometry, width }: { title: string; geometry
         {g.yTicks.map((t) => (
           <G key={`y${t.value}`}>
             <Line x1={left} x2={right} y1={t.position} y2={t.position} stroke={COLORS.rule} strokeWidth={1} />
-            <SvgText x={left - 6} y={t.position + 4} style={{ fontSize: TICK_FONT }} fill={COLORS.muted} textAnchor="end">
+            <SvgText x={left - 6} y={t.position + 4} style={tick} fill={COLORS.muted} textAnchor="end">
               {String(t.value)}
             </SvgText>
           </G>
         ))}
         {g.xTicks.map((t) => (
-          <SvgText key={`x${t.value}`} x={t.position} y={bottom + 18} style={{ fontSize: TICK_FONT }} fill={COLORS.muted} textAnchor="middle">
+          <SvgText key={`x${t.value}`} x={t.position} y={bottom + 18} style={tick} fill={COLORS.muted} textAnchor="middle">
             {String(t.value)}
           </SvgText>
         ))}
@@ -33,7 +36,7 @@ export function ForceChart({ title, geometry, width }: { title: string; geometry
         {g.markers.map((m) => (
           <G key={m.label}>
             <Line x1={m.position} x2={m.position} y1={top} y2={bottom} stroke={COLORS.amber} strokeWidth={1.2} strokeDasharray="4 3" />
-            <SvgText x={m.position + 3} y={m.label === "race sag" ? top + 14 : top + 30} style={{ fontSize: TICK_FONT }} fill={COLORS.amber}>
+            <SvgText x={m.position + 3} y={m.label === "race sag" ? top + 14 : top + 30} style={tick} fill={COLORS.amber}>
               {m.label}
             </SvgText>
           </G>
