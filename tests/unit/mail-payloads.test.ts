@@ -23,6 +23,7 @@ import { notifyRider } from "@/lib/notify";
 import { renderSetupSheet } from "@/lib/pdf";
 import { demoSheetData } from "@/lib/pdf/demo-data";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
+import { pdfText } from "../helpers/pdf";
 import { ORIGIN, cookieFrom } from "../helpers/auth";
 import { POST as authPost, GET as authGet } from "@/app/api/auth/[...all]/route";
 
@@ -166,7 +167,10 @@ describe("rider e-mails through notifyRider", () => {
     expect(mail.subject).toBe("Revised setup sheet (version 2) for request 9");
     const sheet = linkIn(mail, `/api/requests/${r09}/sheet?version=2&token=`);
     expect((await download(sheet)).status).toBe(200);
-    expect((await download(sheet.replace("version=2", "version=1"))).status).toBe(200);
+    const old = await download(sheet.replace("version=2", "version=1"));
+    expect(old.status).toBe(200);
+    // The superseded sheet says so, so a rider holding the old file knows to use the new one.
+    expect(pdfText(new Uint8Array(await old.arrayBuffer()))).toContain("A newer version of this sheet exists");
   });
 });
 
