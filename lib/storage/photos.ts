@@ -3,9 +3,9 @@
 // but has no HEVC decoder), and a photo the shop cannot open is worse than a clear "convert it".
 import { fileTypeFromBuffer } from "file-type";
 
-export const MAX_PHOTOS = 6;
-/** 10 MB: a full-resolution phone JPEG is 3–6 MB; anything larger is usually a video or a RAW. */
-export const MAX_PHOTO_BYTES = 10 * 1024 * 1024;
+import { MAX_PHOTOS, MAX_PHOTO_BYTES } from "./limits";
+
+export { MAX_PHOTOS, MAX_PHOTO_BYTES };
 
 export const PHOTO_TYPES = {
   "image/jpeg": "jpg",

@@ -11,6 +11,7 @@ import { submitSetupRequest } from "@/lib/requests/intake";
 import { statusPath } from "@/lib/requests/token";
 import { MAX_PHOTO_BYTES, MAX_PHOTOS, PhotoError, displayName, type IncomingPhoto } from "@/lib/storage";
 import { queueQuerySchema } from "@/lib/validations/queue";
+import { friendlyError } from "@/lib/validations/messages";
 import { requestAnswersSchema } from "@/lib/validations/request";
 
 export const dynamic = "force-dynamic";
@@ -67,7 +68,7 @@ export const POST = publicRoute(
   withErrors(async (request: Request) => {
     await limitSubmissions(request);
     const body = await readBody(request);
-    const answers = requestAnswersSchema.parse(body.answers);
+    const answers = requestAnswersSchema.parse(body.answers, { error: friendlyError });
     let created;
     try {
       created = await submitSetupRequest(answers, body.photos);
