@@ -43,7 +43,7 @@ export function RiderStep(props: StepProps) {
         id="rider-weight"
         label="Your weight"
         register={register("weight.value")}
-        error={e("weight.value") ?? e("weight.unit")}
+        error={e("weight.value") ?? e("weight") ?? e("weight.unit")}
         unit={<UnitToggle name="weight-unit" legend="Weight unit" units={["kg", "lb"]} register={register("weight.unit")} />}
       />
       <label className="flex min-h-12 items-center gap-3 rounded-lg border border-stone-300 bg-white px-3">
