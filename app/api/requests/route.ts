@@ -33,6 +33,11 @@ const bad = (field: string, message: string, status: 400 | 413 = 400) =>
 async function readBody(request: Request): Promise<{ answers: unknown; photos: IncomingPhoto[] }> {
   const type = request.headers.get("content-type") ?? "";
   if (type.startsWith("multipart/form-data")) {
+    // The whole form is read into memory: refuse a body larger than 6 full-size photos up front.
+    const declared = Number(request.headers.get("content-length") ?? 0);
+    if (declared > MAX_PHOTOS * MAX_PHOTO_BYTES + 1024 * 1024) {
+      throw bad("photos", `The photos are too large together: at most ${MAX_PHOTOS} photos of 10 MB each.`, 413);
+    }
     const form = await request.formData().catch(() => {
       throw bad("_", "The form data could not be read.");
     });
