@@ -10,7 +10,13 @@ export function StepIndicator({ step, reached, onGo }: { step: number; reached: 
         {STEP_TITLES.map((title, i) => {
           const current = i === step;
           const base = "flex min-h-12 w-full flex-col items-center justify-center rounded-lg px-1 text-xs font-semibold leading-tight";
-          const number = <span className="text-base">{i + 1}</span>;
+          const number = (
+            <span className="text-base">
+              <span className="sr-only">Step </span>
+              {i + 1}
+              <span className="sr-only">: </span>
+            </span>
+          );
           return (
             <li key={title}>
               {current ? (

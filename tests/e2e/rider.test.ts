@@ -188,18 +188,6 @@ describe("a rider's setup request", () => {
     await expectNoSideways(page);
     await page.close();
   });
-
-  it("answers the shop's question from the status page", async () => {
-    const page = await browsing.context.newPage();
-    await page.goto(`${baseUrl}/status/${demoToken("r08")}`);
-    await expect.poll(() => page.getByText("Roughly how much of your riding is seated on tight trails?").count()).toBe(1);
-    await page.getByLabel("Your answer", { exact: true }).fill("About half of it, mostly tight forest singletrack.");
-    await page.getByRole("button", { name: "Send answer" }).click();
-    await expect.poll(() => page.getByText("In review", { exact: true }).count()).toBe(1);
-    await expect.poll(() => page.getByText("About half of it, mostly tight forest singletrack.").count()).toBe(1);
-    expect(await page.getByLabel("Your answer", { exact: true }).count()).toBe(0);
-    await page.close();
-  });
 });
 
 describe("accessibility of the public pages (axe-core)", () => {
