@@ -63,6 +63,13 @@ export const bikeStepSchema = z
     if (!bike.modelId && !bike.notListed) {
       ctx.addIssue({ code: "custom", path: ["modelId"], message: "Pick your bike, or choose “not listed”" });
     }
+    // The engine's bike model needs 30–250 kg: outside that the figure is almost surely a typo.
+    const mass = bike.notListed?.mass;
+    if (mass) {
+      const kg = mass.unit === "kg" ? mass.value : mass.value * 0.45359237;
+      if (kg < 30 || kg > 250)
+        ctx.addIssue({ code: "custom", path: ["notListed", "mass", "value"], message: "Bike weight should be between 30 and 250 kg (66–550 lb)" });
+    }
   });
 
 const sagValue = z.coerce.number().min(0).max(400, "Sag looks too large").optional();

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { buttonClass } from "@/components/ui/button";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { listRequestsForRiderEmail } from "@/db/queries/requests";
 import { requireSession } from "@/lib/auth/guard";
@@ -25,9 +26,9 @@ export default async function MyRequestsPage() {
           {requests.map((r) => (
             <li key={r.id} className="rounded-xl border border-stone-200 bg-white p-4">
               <div className="flex flex-wrap items-center justify-between gap-2">
-                <p className="font-semibold">
+                <Link href={`/my-requests/${r.id}`} className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline">
                   Request {r.number} · {r.bikeLabel}
-                </p>
+                </Link>
                 <StatusBadge status={r.status} />
               </div>
               <p className="mt-1 text-sm text-stone-600">
@@ -37,7 +38,14 @@ export default async function MyRequestsPage() {
           ))}
         </ul>
       )}
-      <Link href="/" className="font-semibold text-pine-700 underline">Back to the start</Link>
+      <div className="flex flex-wrap gap-3">
+        <Link href="/request" className={buttonClass("primary")}>
+          Ask for another setup
+        </Link>
+        <Link href="/" className={buttonClass("secondary")}>
+          Back to the start
+        </Link>
+      </div>
     </div>
   );
 }

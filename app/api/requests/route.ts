@@ -1,12 +1,20 @@
 // GET /api/requests: the staff queue, `{ items: [{ id, status, … }], total }` (+ `counts` per status
 // with `counts=1`). Filters: status, discipline, bikeClass, tuner (user id | "me" | "unassigned"),
 // from/to (UTC days), q (rider name, e-mail, bike); page, pageSize, sort.
+// POST /api/requests: a rider's new setup request (public), 201 `{ id, statusUrl }`.
 import { NextResponse } from "next/server";
 import { countRequestsByStatus, listQueue } from "@/db/queries/requests";
-import { withErrors } from "@/lib/api/respond";
-import { requireRole } from "@/lib/auth/guard";
+import { HttpError, withErrors } from "@/lib/api/respond";
+import { createLimiter } from "@/lib/api/rate-limit";
+import { publicRoute, requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
+import { notifyRider } from "@/lib/notify";
+import { submitSetupRequest } from "@/lib/requests/intake";
+import { statusPath } from "@/lib/requests/token";
+import { MAX_PHOTO_BYTES, MAX_PHOTOS, PhotoError, displayName, type IncomingPhoto } from "@/lib/storage";
 import { queueParams, queueQuerySchema } from "@/lib/validations/queue";
+import { friendlyError } from "@/lib/validations/messages";
+import { requestAnswersSchema } from "@/lib/validations/request";
 
 export const dynamic = "force-dynamic";
 
@@ -19,3 +27,71 @@ export const GET = withErrors(async (request: Request) => {
   ]);
   return NextResponse.json(counts ? { ...page, counts } : page);
 });
+
+// A rider sends one request, maybe a corrected second: 8 per 15 minutes per client stops floods
+// without getting in the way of a real rider.
+const limitSubmissions = createLimiter(8, 15 * 60);
+
+const bad = (field: string, message: string, status: 400 | 413 = 400) =>
+  new HttpError(status, message, { [field]: message });
+
+async function readBody(request: Request): Promise<{ answers: unknown; photos: IncomingPhoto[] }> {
+  const type = request.headers.get("content-type") ?? "";
+  if (type.startsWith("multipart/form-data")) {
+    // The whole form is read into memory: refuse a body larger than 6 full-size photos up front.
+    const declared = Number(request.headers.get("content-length") ?? 0);
+    if (declared > MAX_PHOTOS * MAX_PHOTO_BYTES + 1024 * 1024) {
+      throw bad("photos", `The photos are too large together: at most ${MAX_PHOTOS} photos of 10 MB each.`, 413);
+    }
+    const form = await request.formData().catch(() => {
+      throw bad("_", "The form data could not be read.");
+    });
+    const raw = form.get("answers");
+    if (typeof raw !== "string") throw bad("answers", "The answers are missing.");
+    let answers: unknown;
+    try {
+      answers = JSON.parse(raw);
+    } catch {
+      throw bad("answers", "The answers are not valid JSON.");
+    }
+    const files = form.getAll("photos").filter((f): f is File => typeof f !== "string");
+    if (files.length > MAX_PHOTOS) throw bad("photos", `Send at most ${MAX_PHOTOS} photos (you chose ${files.length}).`);
+    const photos: IncomingPhoto[] = [];
+    for (const [i, file] of files.entries()) {
+      // Refuse by the declared size before reading a large file into memory.
+      if (file.size > MAX_PHOTO_BYTES)
+        throw bad(`photos.${i}`, `“${displayName(file.name)}” is ${(file.size / 1048576).toFixed(1)} MB; each photo may be at most 10 MB.`, 413);
+      photos.push({ originalName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) });
+    }
+    return { answers, photos };
+  }
+  if (type.startsWith("application/json")) {
+    const answers = await request.json().catch(() => {
+      throw bad("_", "The request body is not valid JSON.");
+    });
+    return { answers, photos: [] };
+  }
+  throw new HttpError(415, "Send the answers as application/json or multipart/form-data.");
+}
+
+export const POST = publicRoute(
+  withErrors(async (request: Request) => {
+    await limitSubmissions(request);
+    const body = await readBody(request);
+    const answers = requestAnswersSchema.parse(body.answers, { error: friendlyError });
+    let created;
+    try {
+      created = await submitSetupRequest(answers, body.photos);
+    } catch (error) {
+      if (error instanceof PhotoError) throw bad(error.field, error.message, error.status);
+      throw error;
+    }
+    // The request is committed: a failed e-mail is recorded and retried, never undoes it.
+    try {
+      await notifyRider(created.id, { kind: "request-received" }, { statusToken: created.statusToken });
+    } catch (error) {
+      console.error("[requests] confirmation e-mail could not be queued", created.id, error);
+    }
+    return NextResponse.json({ id: created.id, statusUrl: statusPath(created.statusToken) }, { status: 201 });
+  }),
+);

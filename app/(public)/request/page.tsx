@@ -1,0 +1,20 @@
+import type { Metadata } from "next";
+import { RequestForm } from "@/components/request-form/request-form";
+import { getShopSettings } from "@/db/queries/settings";
+
+export const metadata: Metadata = { title: "Ask for a setup" };
+export const dynamic = "force-dynamic";
+
+export default async function RequestPage() {
+  // The shop's preferred units are the form's starting units; the rider can switch any field.
+  const settings = await getShopSettings();
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="text-2xl font-bold">Ask for a suspension setup</h1>
+      <p className="text-stone-700">
+        Five short steps, about five minutes. Your answers are kept on this phone as you go, so you can stop and come back.
+      </p>
+      <RequestForm metric={(settings?.units ?? "metric") !== "imperial"} />
+    </div>
+  );
+}

@@ -1,0 +1,159 @@
+"use client";
+
+// The rider's setup request, one step at a time. Every change goes to the draft in localStorage;
+// the request is sent once from the review step and the draft is cleared only after a 201.
+import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
+import { useRouter } from "next/navigation";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { Button } from "@/components/ui/button";
+import { BikeStep } from "./bike-step";
+import { clearDraft, emptyDraft, loadDraft, saveDraft, STEP_KEYS, type Draft, type StepKey } from "./draft";
+import { FeelStep } from "./feel-step";
+import { prepareStep } from "./prepare";
+import { ReviewStep, type ServerProblem } from "./review-step";
+import { RiderStep } from "./rider-step";
+import { RidingStep } from "./riding-step";
+import { STEP_TITLES, StepIndicator } from "./step-indicator";
+
+const HEADINGS = ["About you", "Your riding", "Your bike", "How it feels", "Check and send"];
+
+async function send(draft: Draft, photos: File[]): Promise<Response> {
+  const answers = {
+    ...Object.fromEntries(STEP_KEYS.slice(0, 4).map((k) => [k, prepareStep(k, draft.values[k])])),
+    review: { consent: draft.values.review?.consent === true },
+  };
+  if (!photos.length) {
+    return fetch("/api/requests", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(answers) });
+  }
+  const body = new FormData();
+  body.set("answers", JSON.stringify(answers));
+  for (const photo of photos) body.append("photos", photo);
+  return fetch("/api/requests", { method: "POST", body });
+}
+
+export function RequestForm({ metric }: { metric: boolean }) {
+  const [queryClient] = useState(() => new QueryClient());
+  const router = useRouter();
+  const [draft, setDraft] = useState<Draft | null>(null);
+  const [restored, setRestored] = useState(false);
+  const [photos, setPhotos] = useState<File[]>([]);
+  const [submitting, setSubmitting] = useState(false);
+  const [problem, setProblem] = useState<ServerProblem | null>(null);
+  // Bumped by "start over" so every step's form starts again from empty.
+  const [generation, setGeneration] = useState(0);
+  const heading = useRef<HTMLHeadingElement>(null);
+  const shownStep = useRef<number | null>(null);
+
+  useEffect(() => {
+    const found = loadDraft();
+    // Reading localStorage can only happen in the browser, after the first render.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
+    setDraft(found ?? emptyDraft());
+    setRestored(Boolean(found && Object.keys(found.values).length));
+  }, []);
+
+  // Moving between steps puts the focus on the new step's heading (not on first load).
+  const step = draft?.step;
+  useEffect(() => {
+    if (step === undefined) return;
+    if (shownStep.current !== null && shownStep.current !== step) {
+      window.scrollTo({ top: 0 });
+      heading.current?.focus();
+    }
+    shownStep.current = step;
+  }, [step]);
+
+  // The draft is saved with every change; saving twice (strict mode) is harmless.
+  const update = useCallback((change: (d: Draft) => Draft) => {
+    setDraft((d) => {
+      const next = change(d ?? emptyDraft());
+      saveDraft(next);
+      return next;
+    });
+  }, []);
+
+  const go = useCallback((to: number) => update((d) => ({ ...d, step: to, reached: Math.max(d.reached, to) })), [update]);
+
+  // Stable handlers per step, so each step's watch subscription is set up once.
+  const handlers = useMemo(
+    () =>
+      Object.fromEntries(
+        STEP_KEYS.map((key) => [key, (values: Record<string, unknown>) => update((d) => ({ ...d, values: { ...d.values, [key]: values } }))]),
+      ) as Record<StepKey, (values: Record<string, unknown>) => void>,
+    [update],
+  );
+
+  if (!draft) {
+    return <p className="text-stone-700" aria-busy="true">Opening the form…</p>;
+  }
+
+  const submit = async (values: Record<string, unknown>) => {
+    const current = { ...draft, values: { ...draft.values, review: values } };
+    setSubmitting(true);
+    setProblem(null);
+    try {
+      const response = await send(current, photos);
+      if (response.status === 201) {
+        const { statusUrl } = (await response.json()) as { statusUrl: string };
+        clearDraft();
+        router.push(`${statusUrl}?sent=1`);
+        return;
+      }
+      const body = (await response.json().catch(() => ({}))) as ServerProblem;
+      if (response.status === 429) {
+        setProblem({ error: body.error ?? "Too many requests from this connection. Try again later; your answers are kept." });
+      } else {
+        setProblem({ error: body.error ?? "The shop could not take the request just now.", fields: body.fields });
+      }
+    } catch {
+      setProblem({ error: "No connection: your answers are kept on this phone. Check your signal and press send again." });
+    } finally {
+      setSubmitting(false);
+    }
+  };
+
+  const common = (key: StepKey) => ({
+    values: draft.values[key] ?? {},
+    onChange: handlers[key],
+    onNext: () => go(Math.min(draft.step + 1, 4)),
+    onBack: draft.step > 0 ? () => go(draft.step - 1) : undefined,
+    metric,
+  });
+  const photoError = problem?.fields ? Object.entries(problem.fields).find(([k]) => k.startsWith("photos"))?.[1] : undefined;
+
+  return (
+    <QueryClientProvider client={queryClient}>
+      <div className="flex flex-col gap-5">
+        <StepIndicator step={draft.step} reached={draft.reached} onGo={go} />
+        {restored ? (
+          <div role="status" className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-pine-50 p-3 text-pine-900">
+            <span>We kept your answers from last time{photos.length ? "" : " (photos have to be added again)"}.</span>
+            <Button
+              variant="ghost"
+              onClick={() => {
+                clearDraft();
+                setDraft(emptyDraft());
+                setGeneration((g) => g + 1);
+                setRestored(false);
+                setPhotos([]);
+              }}
+            >
+              Start over
+            </Button>
+          </div>
+        ) : null}
+        <h2 ref={heading} tabIndex={-1} className="text-xl font-bold outline-none">
+          Step {draft.step + 1} of 5: {HEADINGS[draft.step]}
+          <span className="sr-only"> ({STEP_TITLES[draft.step]})</span>
+        </h2>
+        {draft.step === 0 ? <RiderStep key={`rider-${generation}`} {...common("rider")} /> : null}
+        {draft.step === 1 ? <RidingStep key={`riding-${generation}`} {...common("riding")} /> : null}
+        {draft.step === 2 ? <BikeStep key={`bike-${generation}`} {...common("bike")} photos={photos} onPhotos={setPhotos} photoError={photoError} /> : null}
+        {draft.step === 3 ? <FeelStep key={`feel-${generation}`} {...common("feel")} /> : null}
+        {draft.step === 4 ? (
+          <ReviewStep key={`review-${generation}`} {...common("review")} onNext={submit} draft={draft} photos={photos} submitting={submitting} problem={problem} onGo={go} />
+        ) : null}
+      </div>
+    </QueryClientProvider>
+  );
+}

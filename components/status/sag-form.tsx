@@ -1,0 +1,80 @@
+"use client";
+
+// The sag follow-up: three readings per end in mm or inches; the engine's verdict comes back at once.
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, type FieldValues } from "react-hook-form";
+import { ErrorText, MeasureField, UnitToggle, errorAt } from "@/components/request-form/fields";
+import { Button } from "@/components/ui/button";
+import type { SagVerdict } from "@/lib/sizing";
+import { friendlyError } from "@/lib/validations/messages";
+import { sagReportSchema } from "@/lib/validations/status";
+import { VerdictCard } from "./verdict-card";
+
+const READINGS = [
+  ["static", "Static sag"],
+  ["race", "Race sag"],
+  ["free", "Free sag (optional)"],
+] as const;
+
+export function SagForm({ requestId, token, metric }: { requestId: string; token?: string; metric: boolean }) {
+  const router = useRouter();
+  const [result, setResult] = useState<Partial<Record<"front" | "rear", SagVerdict>> | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const form = useForm<FieldValues>({
+    resolver: zodResolver(sagReportSchema as never, { error: friendlyError }) as never,
+    defaultValues: { unit: metric ? "mm" : "in", front: { free: "", static: "", race: "" }, rear: { free: "", static: "", race: "" } },
+  });
+  const { register, formState, setError } = form;
+  const e = (path: string) => errorAt(formState.errors, path);
+
+  const onSubmit = form.handleSubmit(async () => {
+    setProblem(null);
+    const raw = form.getValues();
+    try {
+      const response = await fetch(`/api/status/${requestId}/sag`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify({ ...raw, token }),
+      });
+      const body = (await response.json().catch(() => ({}))) as { verdict?: typeof result; error?: string; fields?: Record<string, string> };
+      if (response.status === 201) {
+        setResult(body.verdict ?? {});
+        router.refresh();
+        return;
+      }
+      for (const [field, message] of Object.entries(body.fields ?? {})) setError(field, { message });
+      setProblem(body.error ?? "The report could not be sent.");
+    } catch {
+      setProblem("No connection. Your figures are still in the form: send again when you have signal.");
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Report measured sag">
+      <div className="flex items-center justify-between gap-3">
+        <span className="text-sm font-medium text-stone-800">Unit for every reading</span>
+        <UnitToggle name="report-unit" legend="Sag unit" units={["mm", "in"]} register={register("unit")} />
+      </div>
+      {(["rear", "front"] as const).map((end) => (
+        <fieldset key={end} className="flex min-w-0 flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
+          <legend className="px-1 font-semibold">{end === "rear" ? "Rear (shock)" : "Front (fork)"}</legend>
+          {READINGS.map(([key, text]) => (
+            <MeasureField key={key} id={`${end}-${key}`} label={`${end === "rear" ? "Rear" : "Front"} ${text.toLowerCase()}`} register={register(`${end}.${key}`)} error={e(`${end}.${key}`)} unit={null} />
+          ))}
+        </fieldset>
+      ))}
+      <ErrorText id="sag-problem" message={problem ?? undefined} />
+      <Button type="submit" className="min-h-12" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Checking…" : "Check my sag"}
+      </Button>
+      {result ? (
+        <div role="status" aria-live="polite" className="flex flex-col gap-2">
+          <h4 className="font-semibold">What the numbers say</h4>
+          {(["rear", "front"] as const).map((end) => (result[end] ? <VerdictCard key={end} verdict={result[end]} /> : null))}
+        </div>
+      ) : null}
+    </form>
+  );
+}

@@ -1,0 +1,2 @@
+export * from "./photos";
+export * from "./disk";
