@@ -1,5 +1,6 @@
 // Messages with the rider, e-mails sent about the request (failed ones stand out), photos and the
 // rider's sag reports with the engine's verdicts.
+import { EmailStatusItems } from "@/components/mail/email-status-list";
 import type { RequestDetail } from "@/db/queries/review";
 
 const time = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
@@ -28,20 +29,7 @@ export function EmailsPanel({ emails }: { emails: RequestDetail["emails"] }) {
   return (
     <section aria-labelledby="emails-heading" className={box}>
       <h2 id="emails-heading" className="mb-2 text-lg font-semibold">E-mails to the rider</h2>
-      {emails.length === 0 ? <p className="text-sm text-stone-600">None sent yet.</p> : null}
-      <ul className="flex flex-col gap-2 text-sm">
-        {emails.map((e) => (
-          <li key={e.id} className={`rounded-lg border p-2 ${e.status === "failed" ? "border-red-300 bg-red-50 text-red-900" : "border-stone-200"}`}>
-            <p>
-              <span className="font-semibold">{e.status === "failed" ? "FAILED" : e.status === "sent" ? "Sent" : "Queued"}</span>: {e.subject}
-            </p>
-            <p className="text-stone-700">
-              to {e.toAddress} · {time.format(e.sentAt ?? e.createdAt)} UTC · {e.attempts} attempt{e.attempts === 1 ? "" : "s"}
-              {e.status === "failed" && e.lastError ? ` · ${e.lastError}` : ""}
-            </p>
-          </li>
-        ))}
-      </ul>
+      <EmailStatusItems emails={emails} />
     </section>
   );
 }

@@ -1,9 +1,9 @@
 // Everything the request detail page shows, loaded in parallel (one query per kind, no per-row lookups).
 import { and, asc, eq, inArray, or, isNull } from "drizzle-orm";
+import { listOutboundEmailsForRequest } from "@/db/queries/outbound-emails";
 import { getDb } from "@/db/client";
 import {
   bikeModels,
-  outboundEmails,
   requestMessages,
   sagReports,
   setupRequests,
@@ -48,21 +48,7 @@ export async function getRequestDetail(requestId: string) {
       .where(eq(uploads.requestId, requestId))
       .orderBy(asc(uploads.createdAt)),
     db.select().from(sagReports).where(eq(sagReports.requestId, requestId)).orderBy(asc(sagReports.createdAt)),
-    db
-      .select({
-        id: outboundEmails.id,
-        template: outboundEmails.template,
-        toAddress: outboundEmails.toAddress,
-        subject: outboundEmails.subject,
-        status: outboundEmails.status,
-        attempts: outboundEmails.attempts,
-        lastError: outboundEmails.lastError,
-        createdAt: outboundEmails.createdAt,
-        sentAt: outboundEmails.sentAt,
-      })
-      .from(outboundEmails)
-      .where(eq(outboundEmails.requestId, requestId))
-      .orderBy(asc(outboundEmails.createdAt)),
+    listOutboundEmailsForRequest(requestId),
     listAuditForRequest(requestId),
   ]);
   return { ...row.request, assignedTunerName: row.tunerName, versions, messages, photos, sagReports: sags, emails, audit };
