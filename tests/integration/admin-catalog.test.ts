@@ -14,7 +14,7 @@ import { recommend } from "@/lib/sizing";
 import { referenceAnswers } from "@/lib/shop/target-preview";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 import { ORIGIN } from "../helpers/auth";
-import { idContext, jsonRequest, LR, newModel, PROGRESSIVE_STROKE_MM, shockTravelExact, staffCookie } from "./admin-helpers";
+import { idContext, jsonRequest, LR, newModel, PROGRESSIVE_STROKE_MM, shockTravelExact, staffCookie, noCtx } from "./admin-helpers";
 
 let tuner: string;
 let created: { id: string; slug: string; spec: { rear: { shockStrokeMm: number } } };
@@ -31,7 +31,7 @@ const body = async (r: Response) => (await r.json()) as { error: string; fields:
 
 describe("create and edit", () => {
   it("a tuner saves a model; the listed columns follow the spec", async () => {
-    const response = await createModel(jsonRequest("/api/shop/catalog", "POST", tuner, newModel()));
+    const response = await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", tuner, newModel()));
     expect(response.status).toBe(201);
     created = (await response.json()) as typeof created;
     expect(created).toMatchObject({
@@ -48,7 +48,7 @@ describe("create and edit", () => {
     const before = await snapshot();
     const model = newModel({ name: "Bad stroke" });
     model.spec.rear.shockStrokeMm = 132; // the exact integral is 121.64 mm (see admin-helpers)
-    const response = await createModel(jsonRequest("/api/shop/catalog", "POST", tuner, model));
+    const response = await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", tuner, model));
     expect(response.status).toBe(400);
     const { fields } = await body(response);
     expect(Object.keys(fields)).toEqual(["spec.rear.shockStrokeMm"]);
@@ -74,7 +74,7 @@ describe("create and edit", () => {
     const model = newModel();
     model.spec.clickers.forkRebound = { min: 0, max: 20, stock: 25 };
     model.spec.fork = { ...model.spec.fork, kind: "air", stockRateNmm: undefined };
-    const response = await createModel(jsonRequest("/api/shop/catalog", "POST", tuner, model));
+    const response = await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", tuner, model));
     expect(response.status).toBe(400);
     const keys = Object.keys((await body(response)).fields);
     expect(keys).toEqual(expect.arrayContaining(["spec.clickers.forkRebound.stock"]));
@@ -82,7 +82,7 @@ describe("create and edit", () => {
   });
 
   it("a second model with the same slug is a 409 naming slug", async () => {
-    const response = await createModel(jsonRequest("/api/shop/catalog", "POST", tuner, newModel()));
+    const response = await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", tuner, newModel()));
     expect(response.status).toBe(409);
     expect((await body(response)).fields).toEqual({ slug: expect.any(String) });
   });
@@ -97,7 +97,7 @@ describe("create and edit", () => {
   });
 
   it("anonymous callers get 401", async () => {
-    expect((await createModel(jsonRequest("/api/shop/catalog", "POST", undefined, newModel()))).status).toBe(401);
+    expect((await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", undefined, newModel()))).status).toBe(401);
   });
 });
 
@@ -114,9 +114,9 @@ describe("duplicate and retire", () => {
   it("a retired model leaves the list but stays readable by id", async () => {
     const response = await retire(jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: true }), idContext(created.id));
     expect(response.status).toBe(200);
-    const listed = (await (await listCatalog(jsonRequest("/api/shop/catalog", "GET", tuner))).json()) as { items: { id: string }[] };
+    const listed = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog", "GET", tuner))).json()) as { items: { id: string }[] };
     expect(listed.items.map((i) => i.id)).not.toContain(created.id);
-    const onlyRetired = (await (await listCatalog(jsonRequest("/api/shop/catalog?retired=only", "GET", tuner))).json()) as { items: { id: string }[] };
+    const onlyRetired = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?retired=only", "GET", tuner))).json()) as { items: { id: string }[] };
     expect(onlyRetired.items.map((i) => i.id)).toEqual([created.id]);
     expect((await loadBikeSpec(created.id))?.spec.rear.wheelTravelMm).toBe(300);
     await retire(jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: false }), idContext(created.id));
@@ -130,24 +130,24 @@ describe("duplicate and retire", () => {
 
 describe("CSV", () => {
   const csvImport = (text: string) =>
-    importCsv(new Request(`${ORIGIN()}/api/shop/catalog/csv`, { method: "POST", headers: { cookie: tuner, "content-type": "text/csv" }, body: text }));
+    noCtx(importCsv)(new Request(`${ORIGIN()}/api/shop/catalog/csv`, { method: "POST", headers: { cookie: tuner, "content-type": "text/csv" }, body: text }));
 
   it("import of the export changes nothing, and a second export is identical", async () => {
-    const first = await (await exportCsv(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text();
+    const first = await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text();
     const models = await listAllBikeModels();
     expect(first.split("\n")).toHaveLength(models.length + 1);
     const before = JSON.stringify(models.map(({ updatedAt: _u, ...m }) => m));
     const result = (await (await csvImport(first)).json()) as { saved: unknown[]; refused: unknown[] };
     expect(result.refused).toEqual([]);
     expect(result.saved).toHaveLength(models.length);
-    const second = await (await exportCsv(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text();
+    const second = await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text();
     expect(second).toBe(first);
     const after = JSON.stringify((await listAllBikeModels()).map(({ updatedAt: _u, ...m }) => m));
     expect(after).toBe(before);
   });
 
   it("a bad row is reported with its field and reason; the good rows are saved", async () => {
-    const lines = (await (await exportCsv(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text()).split("\n");
+    const lines = (await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text()).split("\n");
     const header = lines[0]!.split(",");
     const slugCol = header.indexOf("slug");
     const strokeCol = header.indexOf("spec.rear.shockStrokeMm");

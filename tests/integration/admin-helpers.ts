@@ -49,3 +49,9 @@ export const newModel = (over: Record<string, unknown> = {}) => ({
   spec: progressiveSpec(),
   ...over,
 });
+
+/** Route handlers without route params take an unused second argument. */
+export const noCtx =
+  (handler: (request: Request, context: never) => Promise<Response>) =>
+  (request: Request) =>
+    handler(request, undefined as never);

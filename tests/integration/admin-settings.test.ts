@@ -15,7 +15,7 @@ import { seedDemo, stableUuid } from "@/db/seed-demo";
 import { defaultTargetValues } from "@/lib/shop/targets";
 import { sizingDefaults } from "@/lib/sizing";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
-import { idContext, jsonRequest, staffCookie } from "./admin-helpers";
+import { idContext, jsonRequest, staffCookie, noCtx } from "./admin-helpers";
 
 let owner: string;
 let tuner: string;
@@ -32,7 +32,7 @@ const fields = async (r: Response) => Object.keys(((await r.json()) as { fields:
 
 describe("spring stock", () => {
   it("stores a rate entered in lbf/in in N/mm", async () => {
-    const response = await addSpring(
+    const response = await noCtx(addSpring)(
       jsonRequest("/api/shop/stock", "POST", tuner, { end: "shock", rate: 300, rateUnit: "lbf/in", quantity: 2, freeLengthMm: 260, innerDiameterMm: 61 }),
     );
     expect(response.status).toBe(201);
@@ -56,7 +56,7 @@ describe("spring stock", () => {
     ["a zero inner diameter", { end: "shock", rate: 50, rateUnit: "N/mm", quantity: 1, innerDiameterMm: 0 }, ["innerDiameterMm"]],
   ])("refuses %s, naming the field, nothing changed", async (_w, payload, names) => {
     const before = JSON.stringify(await listSpringStock());
-    const response = await addSpring(jsonRequest("/api/shop/stock", "POST", tuner, payload));
+    const response = await noCtx(addSpring)(jsonRequest("/api/shop/stock", "POST", tuner, payload));
     expect(response.status).toBe(400);
     expect(await fields(response)).toEqual(names);
     expect(JSON.stringify(await listSpringStock())).toBe(before);
@@ -77,17 +77,17 @@ describe("setup targets", () => {
 
   it("a tuner is refused (403) and the row is unchanged", async () => {
     const before = await getSetupTarget("motocross", "intermediate");
-    const response = await putTarget(jsonRequest("/api/shop/targets", "PUT", tuner, { discipline: "motocross", skill: "intermediate", values: edited() }));
+    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", tuner, { discipline: "motocross", skill: "intermediate", values: edited() }));
     expect(response.status).toBe(403);
     expect(await getSetupTarget("motocross", "intermediate")).toEqual(before);
-    expect((await putRules(jsonRequest("/api/shop/targets/rules", "PUT", tuner, { rules: [] }))).status).toBe(403);
+    expect((await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", tuner, { rules: [] }))).status).toBe(403);
   });
 
   it("an admin saves a row, and reset puts back the engine's defaults", async () => {
-    const response = await putTarget(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "motocross", skill: "intermediate", values: edited() }));
+    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "motocross", skill: "intermediate", values: edited() }));
     expect(response.status).toBe(200);
     expect(await getSetupTarget("motocross", "intermediate")).toEqual(edited());
-    const reset = await resetTarget(jsonRequest("/api/shop/targets/reset", "POST", owner, { discipline: "motocross", skill: "intermediate" }));
+    const reset = await noCtx(resetTarget)(jsonRequest("/api/shop/targets/reset", "POST", owner, { discipline: "motocross", skill: "intermediate" }));
     expect(reset.status).toBe(200);
     // Engine defaults (lib/sizing/defaults.ts): motocross rear race sag 0.335, intermediate offset 0.
     expect((await getSetupTarget("motocross", "intermediate"))?.sag.rearRace).toBe(0.335);
@@ -99,14 +99,14 @@ describe("setup targets", () => {
     ["a rear share of 1.2", (v: ReturnType<typeof edited>) => ({ ...v, riderRearShare: 1.2 }), ["values.riderRearShare"]],
   ])("refuses %s, naming the field, nothing changed", async (_w, change, names) => {
     const before = await getSetupTarget("enduro", "pro");
-    const response = await putTarget(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "enduro", skill: "pro", values: change(edited()) }));
+    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "enduro", skill: "pro", values: change(edited()) }));
     expect(response.status).toBe(400);
     expect(await fields(response)).toEqual(names);
     expect(await getSetupTarget("enduro", "pro")).toEqual(before);
   });
 
   it("preview: less rear race sag asks for a stiffer rear spring for the same rider", async () => {
-    const response = await preview(
+    const response = await noCtx(preview)(
       jsonRequest("/api/shop/targets/preview", "POST", owner, {
         discipline: "motocross",
         skill: "intermediate",
@@ -126,13 +126,13 @@ describe("setup targets", () => {
 describe("clicker rules", () => {
   it("replaces the table, refuses a bad rule naming it, and resets to the engine's defaults", async () => {
     const rule = { trigger: { kind: "terrain", terrain: "mud" }, clicker: "forkRebound", change: 1, reason: "Mud: quicken fork rebound 1 click" };
-    expect((await putRules(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule] }))).status).toBe(200);
+    expect((await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule] }))).status).toBe(200);
     expect(await listClickerRules()).toEqual([rule]);
-    const bad = await putRules(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule, { ...rule, clicker: "rearHub", change: 40 }] }));
+    const bad = await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule, { ...rule, clicker: "rearHub", change: 40 }] }));
     expect(bad.status).toBe(400);
     expect(await fields(bad)).toEqual(["rules.1.change", "rules.1.clicker"]);
     expect(await listClickerRules()).toEqual([rule]);
-    expect((await resetRules(jsonRequest("/api/shop/targets/rules", "DELETE", owner))).status).toBe(200);
+    expect((await noCtx(resetRules)(jsonRequest("/api/shop/targets/rules", "DELETE", owner))).status).toBe(200);
     expect(await listClickerRules()).toEqual(sizingDefaults.DEFAULT_CLICKER_RULES);
   });
 });
@@ -153,23 +153,23 @@ describe("shop settings", () => {
   };
 
   it("a tuner is refused (403)", async () => {
-    expect((await putSettings(jsonRequest("/api/shop/settings", "PUT", tuner, valid))).status).toBe(403);
+    expect((await noCtx(putSettings)(jsonRequest("/api/shop/settings", "PUT", tuner, valid))).status).toBe(403);
   });
 
   it("an admin saves; e-mail is stored lower-case and an empty website as none", async () => {
-    const response = await putSettings(jsonRequest("/api/shop/settings", "PUT", owner, valid));
+    const response = await noCtx(putSettings)(jsonRequest("/api/shop/settings", "PUT", owner, valid));
     expect(response.status).toBe(200);
     expect(await getShopSettings()).toMatchObject({ name: "Ridge Line Suspension", email: "desk@ridgeline.test", website: null, paperSize: "LETTER", units: "imperial", gearMassKg: 9 });
   });
 
   it("refuses a bad paper size, e-mail and frequency window, naming each, nothing changed", async () => {
     const before = await getShopSettings();
-    const response = await putSettings(
+    const response = await noCtx(putSettings)(
       jsonRequest("/api/shop/settings", "PUT", owner, { ...valid, email: "desk", paperSize: "A5", gearMassKg: -1 }),
     );
     expect(response.status).toBe(400);
     expect(await fields(response)).toEqual(["email", "gearMassKg", "paperSize"]);
-    const window = await putSettings(jsonRequest("/api/shop/settings", "PUT", owner, { ...valid, frequencyRatioMax: 0.5 }));
+    const window = await noCtx(putSettings)(jsonRequest("/api/shop/settings", "PUT", owner, { ...valid, frequencyRatioMax: 0.5 }));
     expect(await fields(window)).toEqual(["frequencyRatioMax"]);
     expect(await getShopSettings()).toEqual(before);
   });

@@ -13,7 +13,7 @@ import { seedDemo } from "@/db/seed-demo";
 import { hashInviteToken } from "@/lib/auth/staff";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 import { captureMail, cookieFrom } from "../helpers/auth";
-import { idContext, jsonRequest, staffCookie } from "./admin-helpers";
+import { idContext, jsonRequest, staffCookie, noCtx } from "./admin-helpers";
 
 const server = setupServer();
 let sent: ReturnType<typeof captureMail>;
@@ -33,7 +33,7 @@ afterAll(async () => {
   await closeTestDatabase();
 });
 
-const catalogAs = (cookie: string) => listCatalog(jsonRequest("/api/shop/catalog", "GET", cookie));
+const catalogAs = (cookie: string) => noCtx(listCatalog)(jsonRequest("/api/shop/catalog", "GET", cookie));
 const memberId = async (email: string) => (await findUserByEmail(email))!.id;
 const inviteLink = (email: string) => {
   const html = sent.findLast((m) => m.to.includes(email))?.html ?? "";
@@ -43,8 +43,8 @@ const inviteLink = (email: string) => {
 describe("admin-only actions", () => {
   it("a tuner gets 403 on team, and nothing is sent", async () => {
     const before = sent.length;
-    expect((await listTeam(jsonRequest("/api/shop/team", "GET", tuner))).status).toBe(403);
-    expect((await invite(jsonRequest("/api/shop/team", "POST", tuner, { email: "x@example.test", role: "tuner" }))).status).toBe(403);
+    expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", tuner))).status).toBe(403);
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", tuner, { email: "x@example.test", role: "tuner" }))).status).toBe(403);
     const id = await memberId("tuner2@sagwise.test");
     expect((await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", tuner, { active: false }), idContext(id))).status).toBe(403);
     expect(sent.length).toBe(before);
@@ -53,19 +53,19 @@ describe("admin-only actions", () => {
 
 describe("invitations", () => {
   it("refuses a bad e-mail and a bad role, naming the fields", async () => {
-    const response = await invite(jsonRequest("/api/shop/team", "POST", owner, { email: "not-mail", role: "owner" }));
+    const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email: "not-mail", role: "owner" }));
     expect(response.status).toBe(400);
     expect(Object.keys(((await response.json()) as { fields: object }).fields).sort()).toEqual(["email", "role"]);
   });
 
   it("refuses to invite someone already on the team (409)", async () => {
-    const response = await invite(jsonRequest("/api/shop/team", "POST", owner, { email: "tuner2@sagwise.test", role: "tuner" }));
+    const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email: "tuner2@sagwise.test", role: "tuner" }));
     expect(response.status).toBe(409);
   });
 
   it("e-mails a link; the token is stored only as its SHA-256; accepting creates a signed-in tuner", async () => {
     const email = "new.tuner@example.test";
-    const response = await invite(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }));
+    const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }));
     expect(response.status).toBe(201);
     const link = inviteLink(email);
     expect(link).toBeDefined();
@@ -78,24 +78,24 @@ describe("invitations", () => {
     expect(row.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(JSON.stringify(rows)).not.toContain(token);
 
-    const short = await accept(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "N", password: "short" }));
+    const short = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "N", password: "short" }));
     expect(short.status).toBe(400);
     expect(Object.keys(((await short.json()) as { fields: object }).fields).sort()).toEqual(["name", "password"]);
     expect(await findUserByEmail(email)).toBeNull();
 
-    const accepted = await accept(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
+    const accepted = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
     expect(accepted.status).toBe(201);
     const cookie = cookieFrom(accepted);
     expect(cookie).toMatch(/session_token=/);
     expect((await catalogAs(cookie)).status).toBe(200);
-    expect((await listTeam(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(403);
+    expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(403);
 
-    const again = await accept(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
+    const again = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
     expect(again.status).toBe(409);
   });
 
   it("an unknown token is a 404", async () => {
-    const response = await accept(jsonRequest("/api/invite/accept", "POST", undefined, { token: "x".repeat(43), name: "Someone", password: "a-long-password-1" }));
+    const response = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token: "x".repeat(43), name: "Someone", password: "a-long-password-1" }));
     expect(response.status).toBe(404);
   });
 });
@@ -120,7 +120,7 @@ describe("roles and deactivation", () => {
     const response = await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { role: "admin" }), idContext(id));
     expect(response.status).toBe(200);
     const cookie = await staffCookie("tuner2@sagwise.test");
-    expect((await listTeam(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(200);
+    expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(200);
     await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { role: "tuner" }), idContext(id));
     expect((await listStaff()).find((m) => m.id === id)?.role).toBe("tuner");
   });
@@ -132,7 +132,7 @@ describe("roles and deactivation", () => {
     const self = await patchMember(jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", owner, { active: false }), idContext(ownerId));
     expect(self.status).toBe(409);
     expect((await listStaff()).find((m) => m.id === ownerId)).toMatchObject({ role: "admin", banned: false });
-    expect((await listTeam(jsonRequest("/api/shop/team", "GET", owner))).status).toBe(200);
+    expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", owner))).status).toBe(200);
   });
 
   it("with a second admin, the first can be demoted", async () => {
