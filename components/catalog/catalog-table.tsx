@@ -35,6 +35,8 @@ const columns = [
 
 export function CatalogTable({ rows }: { rows: CatalogRow[] }) {
   const [sorting, setSorting] = useState<SortingState>([]);
+  // TanStack Table returns fresh functions each render; this component does not rely on memoizing them.
+  // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({ data: rows, columns, state: { sorting }, onSortingChange: setSorting, getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel() });
   return (
     <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">

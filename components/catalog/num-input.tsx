@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useState } from "react";
+import { useState } from "react";
 
 interface NumInputProps {
   id: string;
@@ -16,12 +16,14 @@ interface NumInputProps {
 /** A labelled number input that keeps what is typed ("1.") while handing the parent a number. */
 export function NumInput({ id, label, value, onChange, error, hint, step = "any", className = "" }: NumInputProps) {
   const [text, setText] = useState(value === undefined || value === null ? "" : String(value));
-  useEffect(() => {
-    const parsed = text.trim() === "" ? undefined : Number(text);
-    if (parsed !== (value ?? undefined)) setText(value === undefined || value === null ? "" : String(value));
-    // Only an outside change (reset, duplicate) rewrites the text.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [value]);
+  const [shown, setShown] = useState(value);
+  // Only an outside change (reset, duplicate) rewrites the text; adjusting state during render is
+  // React's recommended way to follow a prop (react.dev "you might not need an effect").
+  if (!Object.is(shown, value)) {
+    setShown(value);
+    const parsed = text.trim() === "" ? undefined : Number(text.trim().replace(",", "."));
+    if (!Object.is(parsed, value ?? undefined)) setText(value === undefined || value === null ? "" : String(value));
+  }
   const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ");
   return (
     <div className={`flex flex-col gap-1 ${className}`}>

@@ -31,6 +31,8 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   const [rules, setRules] = useState<ClickerRule[]>(initial);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
+  // Bumped on reset so the uncontrolled "change" inputs show the restored numbers.
+  const [version, setVersion] = useState(0);
   const set = (i: number, patch: Partial<ClickerRule>) => setRules((rs) => rs.map((r, j) => (j === i ? { ...r, ...patch } : r)));
 
   async function save() {
@@ -47,7 +49,11 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   }
   async function reset() {
     const r = await callApi<{ rules: ClickerRule[] }>("/api/shop/targets/rules", "DELETE");
-    if (r.ok) (setRules(r.data.rules), setErrors({}), setMessage("Back to the engine's default rules."));
+    if (!r.ok) return setMessage(r.error);
+    setRules(r.data.rules);
+    setVersion((v) => v + 1);
+    setErrors({});
+    setMessage("Back to the engine's default rules.");
   }
 
   return (
@@ -57,7 +63,7 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <thead><tr className="text-stone-600"><th scope="col">When</th><th scope="col">Clicker</th><th scope="col">Change</th><th scope="col">Reason shown to the rider</th><th scope="col"><span className="sr-only">Remove</span></th></tr></thead>
-          <tbody>
+          <tbody key={version}>
             {rules.map((r, i) => (
               <tr key={i} className="align-top">
                 <td className="py-1 pr-2">
