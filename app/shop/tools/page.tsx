@@ -6,6 +6,8 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 
 export const metadata: Metadata = { title: "Workshop tools" };
+// Signed-in pages render per request (the guard reads the session cookie).
+export const dynamic = "force-dynamic";
 
 export default async function ToolsPage() {
   await requireRole(STAFF_ROLES, { page: "/shop/tools" });

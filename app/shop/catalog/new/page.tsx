@@ -5,6 +5,8 @@ import { STAFF_ROLES } from "@/lib/auth/roles";
 import { sizingDefaults } from "@/lib/sizing";
 
 export const metadata: Metadata = { title: "Add a bike" };
+// Signed-in pages render per request (the guard reads the session cookie).
+export const dynamic = "force-dynamic";
 
 export default async function NewBikePage() {
   await requireRole(STAFF_ROLES, { page: "/shop/catalog/new" });
