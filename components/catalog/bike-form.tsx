@@ -124,7 +124,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
           {CLICKERS.map(([cid, label]) => (
             <fieldset key={cid} className="grid grid-cols-3 gap-2">
               <legend className="mb-1 text-sm font-semibold text-stone-800">{label}</legend>
-              {(["min", "max", "stock"] as const).map((k) => num([`spec.clickers.${cid}.${k}`, `${label}: ${k === "stock" ? "stock position" : k}`]))}
+              {([["min", "Least"], ["max", "Most"], ["stock", "Stock"]] as const).map(([k, word]) => num([`spec.clickers.${cid}.${k}`, word]))}
             </fieldset>
           ))}
         </div>

@@ -2,9 +2,10 @@
 // the catalog form; a rider's request on that bike is then sized on it.
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import type { Page } from "playwright-core";
-import { openBrowser, type Browsing } from "./browser";
+import { mailFor, openBrowser, type Browsing } from "./browser";
 
 const baseUrl = inject("baseUrl");
+const mailUrl = inject("mailUrl");
 const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "sagwise-demo";
 const BIKE_NAME = `E2E progressive 350 ${Date.now()}`;
 
@@ -67,6 +68,43 @@ describe("admin catalog", () => {
     expect(model.rearWheelTravelMm).toBe(300);
     expect(model.spec.rear.shockStrokeMm).toBe(Number(STROKE));
     expect(model.spec.rear.leverageCurve.map((p) => [p.wheelTravelMm, p.ratio])).toEqual(CURVE);
+    await page.screenshot({ path: "/tmp/issue7-bike.png", fullPage: true });
+  });
+
+  it("an invited tuner joins through the e-mailed link; deactivation signs them out at once", async () => {
+    const email = `e2e-tuner-${Date.now()}@example.test`;
+    await page.goto(`${baseUrl}/shop/team`);
+    const invite = page.getByRole("form", { name: "Invite to the team" });
+    await invite.getByLabel("E-mail").fill(email);
+    await invite.getByRole("button", { name: "Send invitation" }).click();
+    await expect.poll(() => page.getByRole("status").first().textContent()).toContain(`Invitation sent to ${email}`);
+
+    const messages = await mailFor(mailUrl, email);
+    expect(messages).toHaveLength(1);
+    const link = /href="([^"]*\/invite\/[^"]+)"/.exec(messages[0]?.html ?? "")?.[1];
+    expect(link, "the e-mail carries the invitation link").toBeTruthy();
+
+    const invitee = await openBrowser();
+    try {
+      const tab = await invitee.context.newPage();
+      await tab.goto(link!);
+      const accept = tab.getByRole("form", { name: "Accept invitation" });
+      await accept.getByLabel("Your name").fill("Tess Newcomer");
+      await accept.getByLabel("Password").fill("a-long-password-1");
+      await accept.getByRole("button", { name: "Join the workspace" }).click();
+      await tab.waitForURL(`${baseUrl}/shop`);
+      const nav = tab.getByRole("navigation", { name: "Workspace" });
+      expect(await nav.getByRole("link", { name: "Catalog", exact: true }).count()).toBe(1);
+      expect(await nav.getByRole("link", { name: "Team", exact: true }).count()).toBe(0);
+
+      await page.reload();
+      await page.getByRole("button", { name: "Deactivate Tess Newcomer" }).click();
+      await expect.poll(() => page.getByRole("button", { name: "Reactivate Tess Newcomer" }).count()).toBe(1);
+      await tab.goto(`${baseUrl}/shop/catalog`);
+      expect(new URL(tab.url()).pathname).toBe("/sign-in");
+    } finally {
+      await invitee.close();
+    }
   });
 
   it("the new bike is in the catalog list", async () => {
