@@ -8,7 +8,7 @@ import { POST as accept } from "@/app/api/invite/accept/route";
 import { GET as listCatalog } from "@/app/api/shop/catalog/route";
 import { findUserByEmail, listStaff } from "@/db/queries/team";
 import { getDb } from "@/db/client";
-import { staffInvites } from "@/db/schema";
+import { auditEvents, staffInvites } from "@/db/schema";
 import { seedDemo } from "@/db/seed-demo";
 import { hashInviteToken } from "@/lib/auth/staff";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
@@ -89,6 +89,9 @@ describe("invitations", () => {
     expect(cookie).toMatch(/session_token=/);
     expect((await catalogAs(cookie)).status).toBe(200);
     expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(403);
+
+    const actions = (await db.select().from(auditEvents)).map((e) => [e.action, e.actorLabel]);
+    expect(actions).toEqual(expect.arrayContaining([["staff.invited", "Mara Quillfeather"], ["staff.joined", "New Tuner"]]));
 
     const again = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
     expect(again.status).toBe(409);

@@ -1,6 +1,7 @@
 // POST /api/invite/accept { token, name, password }: public on purpose (the invitee has no account
 // yet; the e-mailed token is the proof). Creates the staff account and signs the person in.
 import { NextResponse } from "next/server";
+import { recordAudit } from "@/db/queries/audit";
 import { HttpError, withErrors } from "@/lib/api/respond";
 import { publicRoute } from "@/lib/auth/guard";
 import { getAuth } from "@/lib/auth/server";
@@ -17,6 +18,7 @@ export const POST = publicRoute(
     }
     const input = acceptInviteSchema.parse(body);
     const account = await acceptInvite(input);
+    await recordAudit({ actorUserId: account.id, actorLabel: input.name, action: "staff.joined", detail: { email: account.email, role: account.role } });
     const auth = await getAuth();
     const signedIn = await auth.api.signInEmail({
       body: { email: account.email, password: input.password },

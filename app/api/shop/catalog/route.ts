@@ -6,6 +6,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { bikeModelSchema, catalogQuerySchema } from "@/lib/validations/bike";
 import { jsonBody } from "../_lib/body";
+import { auditShop } from "../_lib/audit";
 
 export const dynamic = "force-dynamic";
 
@@ -16,9 +17,11 @@ export const GET = withErrors(async (request: Request) => {
 });
 
 export const POST = withErrors(async (request: Request) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
+  const user = await requireRole(STAFF_ROLES, { headers: request.headers });
   const values = bikeModelSchema.parse(await jsonBody(request));
   if (await slugTaken(values.slug))
     throw new HttpError(409, "Another model already uses this slug.", { slug: "Already used by another model" });
-  return NextResponse.json(await createBikeModel(values), { status: 201 });
+  const row = await createBikeModel(values);
+  await auditShop(user, "bike.created", { id: row.id, slug: row.slug });
+  return NextResponse.json(row, { status: 201 });
 });

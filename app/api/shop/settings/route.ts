@@ -5,6 +5,7 @@ import { withErrors } from "@/lib/api/respond";
 import { requireRole } from "@/lib/auth/guard";
 import { shopSettingsSchema } from "@/lib/validations/settings";
 import { jsonBody } from "../_lib/body";
+import { auditShop } from "../_lib/audit";
 
 export const dynamic = "force-dynamic";
 
@@ -14,7 +15,9 @@ export const GET = withErrors(async (request: Request) => {
 });
 
 export const PUT = withErrors(async (request: Request) => {
-  await requireRole(["admin"], { headers: request.headers });
+  const user = await requireRole(["admin"], { headers: request.headers });
   const values = shopSettingsSchema.parse(await jsonBody(request));
-  return NextResponse.json(await saveShopSettings(values));
+  const row = await saveShopSettings(values);
+  await auditShop(user, "settings.saved", {});
+  return NextResponse.json(row);
 });

@@ -5,10 +5,12 @@ import { withErrors } from "@/lib/api/respond";
 import { requireRole } from "@/lib/auth/guard";
 import { saveTargetSchema } from "@/lib/validations/targets";
 import { jsonBody } from "../_lib/body";
+import { auditShop } from "../_lib/audit";
 
 export const PUT = withErrors(async (request: Request) => {
-  await requireRole(["admin"], { headers: request.headers });
+  const user = await requireRole(["admin"], { headers: request.headers });
   const { discipline, skill, values } = saveTargetSchema.parse(await jsonBody(request));
   await saveSetupTarget(discipline, skill, values);
+  await auditShop(user, "targets.saved", { discipline, skill, values });
   return NextResponse.json({ discipline, skill, values });
 });

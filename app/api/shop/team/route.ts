@@ -8,6 +8,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { inviteStaff } from "@/lib/auth/staff";
 import { inviteSchema } from "@/lib/validations/team";
 import { jsonBody } from "../_lib/body";
+import { auditShop } from "../_lib/audit";
 
 export const dynamic = "force-dynamic";
 
@@ -20,5 +21,7 @@ export const GET = withErrors(async (request: Request) => {
 export const POST = withErrors(async (request: Request) => {
   const admin = await requireRole(["admin"], { headers: request.headers });
   const input = inviteSchema.parse(await jsonBody(request));
-  return NextResponse.json(await inviteStaff(input, admin), { status: 201 });
+  const invited = await inviteStaff(input, admin);
+  await auditShop(admin, "staff.invited", { email: invited.email, role: invited.role, mail: invited.mailStatus });
+  return NextResponse.json(invited, { status: 201 });
 });

@@ -6,6 +6,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { bikeModelSchema } from "@/lib/validations/bike";
 import { jsonBody, uuidParam, type IdContext } from "../../_lib/body";
+import { auditShop } from "../../_lib/audit";
 
 export const dynamic = "force-dynamic";
 
@@ -17,11 +18,13 @@ export const GET = withErrors(async (request: Request, { params }: IdContext) =>
 });
 
 export const PUT = withErrors(async (request: Request, { params }: IdContext) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
+  const user = await requireRole(STAFF_ROLES, { headers: request.headers });
   const id = await uuidParam(params, "bike model");
   const values = bikeModelSchema.parse(await jsonBody(request));
   if (!(await getBikeModel(id))) throw new HttpError(404, "No such bike model.");
   if (await slugTaken(values.slug, id))
     throw new HttpError(409, "Another model already uses this slug.", { slug: "Already used by another model" });
-  return NextResponse.json(await updateBikeModel(id, values));
+  const row = await updateBikeModel(id, values);
+  await auditShop(user, "bike.updated", { id, slug: values.slug });
+  return NextResponse.json(row);
 });

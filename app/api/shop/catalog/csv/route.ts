@@ -7,6 +7,7 @@ import { HttpError, withErrors } from "@/lib/api/respond";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { catalogToCsv, parseCatalogCsv } from "@/lib/validations/bike-csv";
+import { auditShop } from "../../_lib/audit";
 
 export const dynamic = "force-dynamic";
 
@@ -39,7 +40,7 @@ async function csvText(request: Request): Promise<string> {
 }
 
 export const POST = withErrors(async (request: Request) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
+  const user = await requireRole(STAFF_ROLES, { headers: request.headers });
   const { results, fileError } = parseCatalogCsv(await csvText(request));
   if (fileError) throw new HttpError(400, fileError, { file: fileError });
   const saved: { row: number; slug: string; action: "created" | "updated" }[] = [];
@@ -56,5 +57,6 @@ export const POST = withErrors(async (request: Request) => {
       refused.push({ row: r.row, slug: r.slug, fields: { _: "Could not be saved" } });
     }
   }
+  await auditShop(user, "catalog.imported", { saved: saved.length, refused: refused.length });
   return NextResponse.json({ saved, refused });
 });

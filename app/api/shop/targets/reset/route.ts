@@ -6,11 +6,13 @@ import { requireRole } from "@/lib/auth/guard";
 import { defaultTargetValues } from "@/lib/shop/targets";
 import { targetKeySchema } from "@/lib/validations/targets";
 import { jsonBody } from "../../_lib/body";
+import { auditShop } from "../../_lib/audit";
 
 export const POST = withErrors(async (request: Request) => {
-  await requireRole(["admin"], { headers: request.headers });
+  const user = await requireRole(["admin"], { headers: request.headers });
   const { discipline, skill } = targetKeySchema.parse(await jsonBody(request));
   const values = defaultTargetValues(discipline, skill);
   await saveSetupTarget(discipline, skill, values);
+  await auditShop(user, "targets.reset", { discipline, skill });
   return NextResponse.json({ discipline, skill, values });
 });

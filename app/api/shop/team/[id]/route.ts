@@ -7,6 +7,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { updateStaffMember } from "@/lib/auth/staff";
 import { memberUpdateSchema } from "@/lib/validations/team";
 import { jsonBody, type IdContext } from "../../_lib/body";
+import { auditShop } from "../../_lib/audit";
 
 export const PATCH = withErrors(async (request: Request, { params }: IdContext) => {
   const admin = await requireRole(["admin"], { headers: request.headers });
@@ -15,5 +16,6 @@ export const PATCH = withErrors(async (request: Request, { params }: IdContext) 
   if (id === admin.id && change.active === false)
     throw new HttpError(409, "You cannot deactivate your own account.", { active: "Your own account" });
   const member = await updateStaffMember(id, change, request.headers);
+  await auditShop(admin, "staff.changed", { userId: id, ...change });
   return NextResponse.json(member);
 });

@@ -6,9 +6,10 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { bikeModelSchema } from "@/lib/validations/bike";
 import { uuidParam, type IdContext } from "../../../_lib/body";
+import { auditShop } from "../../../_lib/audit";
 
 export const POST = withErrors(async (request: Request, { params }: IdContext) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
+  const user = await requireRole(STAFF_ROLES, { headers: request.headers });
   const source = await getBikeModel(await uuidParam(params, "bike model"));
   if (!source) throw new HttpError(404, "No such bike model.");
   let slug = `${source.slug}-copy`.slice(0, 75);
@@ -22,5 +23,7 @@ export const POST = withErrors(async (request: Request, { params }: IdContext) =
     notes: source.notes,
     spec: source.spec,
   });
-  return NextResponse.json(await createBikeModel(values), { status: 201 });
+  const row = await createBikeModel(values);
+  await auditShop(user, "bike.duplicated", { id: row.id, from: source.id });
+  return NextResponse.json(row, { status: 201 });
 });
