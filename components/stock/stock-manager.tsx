@@ -25,7 +25,9 @@ export function StockManager({ rows }: { rows: StockRow[] }) {
     setEditing(null);
     router.refresh();
   };
-  const remove = async (id: string) => {
+  const remove = async (id: string, label: string) => {
+    // Removing a line cannot be undone from here; ask first.
+    if (!window.confirm(`Remove the ${label} spring line from the stock list?`)) return;
     if ((await callApi(`/api/shop/stock/${id}`, "DELETE")).ok) router.refresh();
   };
   return (
@@ -68,7 +70,7 @@ export function StockManager({ rows }: { rows: StockRow[] }) {
                     <td className="px-3 py-2">{r.fitNotes ?? ""}</td>
                     <td className="flex gap-1 px-3 py-1">
                       <Button variant="ghost" onClick={() => setEditing(r.id)} aria-label={`Edit ${t.nMm.toFixed(2)} N/mm ${end} spring`}>Edit</Button>
-                      <Button variant="ghost" onClick={() => remove(r.id)} aria-label={`Remove ${t.nMm.toFixed(2)} N/mm ${end} spring`}>Remove</Button>
+                      <Button variant="ghost" onClick={() => remove(r.id, `${t.nMm.toFixed(2)} N/mm ${end}`)} aria-label={`Remove ${t.nMm.toFixed(2)} N/mm ${end} spring`}>Remove</Button>
                     </td>
                   </tr>
                 );
