@@ -23,6 +23,15 @@ export interface BikeFormValues {
   spec: BikeSpecInput;
 }
 
+/** Optional groups left fully empty are absent, not half-filled objects the schema would refuse. */
+function withoutEmptyOptionals(m: BikeFormValues): BikeFormValues {
+  const spec = { ...m.spec, fork: { ...m.spec.fork } };
+  const empty = (o: object | undefined) => !o || Object.values(o).every((v) => v === undefined);
+  if (empty(spec.riderMassRangeKg)) delete spec.riderMassRangeKg;
+  if (empty(spec.fork.air)) delete spec.fork.air;
+  return { ...m, spec };
+}
+
 const section = "flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4";
 
 export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string }) {
@@ -33,7 +42,8 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
   const [message, setMessage] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
 
-  const parsed = useMemo(() => bikeModelSchema.safeParse(model), [model]);
+  const payload = useMemo(() => withoutEmptyOptionals(model), [model]);
+  const parsed = useMemo(() => bikeModelSchema.safeParse(payload), [payload]);
   const clientErrors = submitted && !parsed.success ? issuesByPath(parsed.error) : {};
   const errors = { ...clientErrors, ...serverErrors };
   const update = (path: string, value: unknown) => {
@@ -54,7 +64,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
       return;
     }
     setSaving(true);
-    const result = await callApi<{ id: string }>(id ? `/api/shop/catalog/${id}` : "/api/shop/catalog", id ? "PUT" : "POST", model);
+    const result = await callApi<{ id: string }>(id ? `/api/shop/catalog/${id}` : "/api/shop/catalog", id ? "PUT" : "POST", payload);
     setSaving(false);
     if (!result.ok) {
       setServerErrors(result.fields);

@@ -122,6 +122,13 @@ describe("duplicate and retire", () => {
     await retire(jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: false }), idContext(created.id));
   });
 
+  it("search finds a model by class, case-insensitive", async () => {
+    const found = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=ENDURO-350", "GET", tuner))).json()) as { items: { id: string }[] };
+    expect(found.items.map((i) => i.id)).toContain(created.id);
+    const none = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=no-such-bike", "GET", tuner))).json()) as { items: unknown[] };
+    expect(none.items).toEqual([]);
+  });
+
   it("an unknown id is a 404", async () => {
     const response = await getModel(jsonRequest("/api/shop/catalog/x", "GET", tuner), idContext("not-a-uuid"));
     expect(response.status).toBe(404);
