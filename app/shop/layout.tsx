@@ -10,7 +10,13 @@ import { STAFF_ROLES, type Role } from "@/lib/auth/roles";
 // Link only pages that exist; `roles` lists who sees the link (the pages guard themselves too).
 const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
   { href: "/shop", label: "Queue", roles: STAFF_ROLES },
+  { href: "/shop/catalog", label: "Catalog", roles: STAFF_ROLES },
+  { href: "/shop/stock", label: "Stock", roles: STAFF_ROLES },
   { href: "/shop/emails", label: "E-mails", roles: STAFF_ROLES },
+  { href: "/shop/tools", label: "Tools", roles: STAFF_ROLES },
+  { href: "/shop/targets", label: "Targets", roles: ["admin"] },
+  { href: "/shop/team", label: "Team", roles: ["admin"] },
+  { href: "/shop/settings", label: "Settings", roles: ["admin"] },
 ];
 
 export default async function ShopLayout({ children }: { children: ReactNode }) {

@@ -28,7 +28,9 @@ export function StaffSignInForm({ next }: { next: string }) {
       setFailure(
         error.status === 403
           ? "This account is deactivated. Ask the shop owner."
-          : "That e-mail and password do not match a staff account.",
+          : error.status === 429
+            ? "Too many sign-in attempts. Wait a few seconds and try again."
+            : "That e-mail and password do not match a staff account.",
       );
       return;
     }

@@ -12,3 +12,16 @@ export async function getShopSettings() {
 export async function getShopName(): Promise<string> {
   return (await getShopSettings())?.name ?? "Your suspension shop";
 }
+
+export type ShopSettingsValues = Omit<typeof shopSettings.$inferInsert, "id" | "updatedAt">;
+
+/** Creates or replaces the single settings row. */
+export async function saveShopSettings(values: ShopSettingsValues) {
+  const db = await getDb();
+  const [row] = await db
+    .insert(shopSettings)
+    .values({ ...values, id: 1 })
+    .onConflictDoUpdate({ target: shopSettings.id, set: { ...values, updatedAt: new Date() } })
+    .returning();
+  return row!;
+}

@@ -14,6 +14,18 @@ const FLAGS = [
   "--disable-sync",
 ];
 
+let clients = 0;
+
+/**
+ * A distinct client address per browser or API context, sent as X-Forwarded-For as a proxy would.
+ * Sign-in is rate-limited per client (better-auth: 3 tries per 10 s); without this every test would
+ * be one client. 203.0.113.0/24 is the documentation range (RFC 5737): only a header, never a target.
+ */
+export function clientHeaders(): Record<string, string> {
+  clients += 1;
+  return { "x-forwarded-for": `203.0.113.${(process.pid + clients) % 250}` };
+}
+
 export interface Browsing {
   context: BrowserContext;
   close(): Promise<void>;
@@ -28,6 +40,7 @@ export async function openBrowser(
     headless: true,
     args: FLAGS,
     viewport: options.viewport ?? { width: 1280, height: 800 },
+    extraHTTPHeaders: clientHeaders(),
   });
   return {
     context,

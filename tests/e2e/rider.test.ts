@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { stableUuid } from "@/db/seed-demo";
 import { demoStatusToken } from "@/lib/requests/token";
 import { tinyPng } from "../fixtures/images";
-import { mailFor, openBrowser, type Browsing } from "./browser";
+import { clientHeaders, mailFor, openBrowser, type Browsing } from "./browser";
 
 const baseUrl = inject("baseUrl");
 const mailUrl = inject("mailUrl");
@@ -261,7 +261,7 @@ describe("accessibility of the public pages (axe-core)", () => {
 describe("after a staff approval (needs issues 5 and 6 merged)", () => {
   it("the rider downloads the approved sheet from the status page and reports sag", async () => {
     expect(created.id, "the first test created a request").toBeTruthy();
-    const staff = await playwrightRequest.newContext({ baseURL: baseUrl, extraHTTPHeaders: { origin: baseUrl } });
+    const staff = await playwrightRequest.newContext({ baseURL: baseUrl, extraHTTPHeaders: { origin: baseUrl, ...clientHeaders() } });
     try {
       const signedIn = await staff.post("/api/auth/sign-in/email", { data: { email: "tuner@sagwise.test", password: DEMO_PASSWORD } });
       expect(signedIn.status()).toBe(200);

@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import { SettingsForm } from "@/components/settings/settings-form";
+import { getShopSettings } from "@/db/queries/settings";
+import { requireRole } from "@/lib/auth/guard";
+import { sizingDefaults } from "@/lib/sizing";
+
+export const metadata: Metadata = { title: "Shop settings" };
+export const dynamic = "force-dynamic";
+
+export default async function SettingsPage() {
+  await requireRole(["admin"], { page: "/shop/settings" });
+  const s = await getShopSettings();
+  return (
+    <div className="flex flex-col gap-4">
+      <h1 className="text-2xl font-bold">Shop settings</h1>
+      <SettingsForm
+        initial={{
+          name: s?.name ?? "",
+          email: s?.email ?? "",
+          phone: s?.phone ?? "",
+          address: s?.address ?? "",
+          website: s?.website ?? "",
+          units: s?.units ?? "metric",
+          paperSize: s?.paperSize ?? "A4",
+          sheetFooter: s?.sheetFooter ?? "",
+          gearMassKg: s?.gearMassKg ?? sizingDefaults.DEFAULT_GEAR_MASS_KG,
+          frequencyRatioMin: s?.frequencyRatioMin ?? sizingDefaults.FREQUENCY_RATIO_WINDOW.min,
+          frequencyRatioMax: s?.frequencyRatioMax ?? sizingDefaults.FREQUENCY_RATIO_WINDOW.max,
+        }}
+      />
+    </div>
+  );
+}

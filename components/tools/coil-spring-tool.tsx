@@ -1,0 +1,54 @@
+"use client";
+
+import { useState } from "react";
+import { NumInput } from "@/components/catalog/num-input";
+import { issuesByPath } from "@/components/catalog/form-utils";
+import { DEFAULT_SHEAR_MODULUS_MPA, END_TYPES, coilGeometrySchema, type EndType } from "@/lib/validations/tools";
+import { CalcCard, Result } from "./calc-card";
+import { coilReport } from "./spring-math";
+
+export function CoilSpringTool() {
+  const [v, setV] = useState<Record<string, unknown>>({ endType: "squared-ground", shearModulusMpa: DEFAULT_SHEAR_MODULUS_MPA, loadN: 0 });
+  const parsed = coilGeometrySchema.safeParse(v);
+  const errors = parsed.success ? {} : issuesByPath(parsed.error);
+  const touched = (k: string) => v[k] !== undefined;
+  const report = parsed.success ? coilReport(parsed.data) : null;
+  const n = (k: string, label: string, hint?: string) => (
+    <NumInput id={`coil-${k}`} label={label} hint={hint} value={v[k] as number | undefined} onChange={(x) => setV((o) => ({ ...o, [k]: x }))} error={touched(k) ? errors[k] : undefined} />
+  );
+  return (
+    <CalcCard
+      id="coil-tool"
+      title="Spring check from wire and coils"
+      formula={<>k = G·d⁴ / (8·D³·nₐ) with D = OD − d; C = D/d; K_W = (4C − 1)/(4C − 4) + 0.615/C; τ = K_W·8·F·D/(π·d³). Active coils nₐ by end type: squared and ground or squared: total − 2; plain: total; plain and ground: total − 1.</>}
+      source="Shigley, Mechanical Engineering Design, 10th ed.: eq. 10-9 (rate), eq. 10-4 (Wahl factor), eqs. 10-1 and 10-4 (stress), table 10-1 (end types); G ≈ 79.3 GPa for steel spring wire, table 10-5."
+    >
+      <div className="grid gap-3 sm:grid-cols-2">
+        {n("wireDiameterMm", "Wire diameter d (mm)")}
+        {n("outerDiameterMm", "Outer diameter OD (mm)")}
+        {n("totalCoils", "Total coils")}
+        <label className="flex flex-col gap-1 text-sm font-medium">
+          End type
+          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={v.endType as string} onChange={(e) => setV((o) => ({ ...o, endType: e.target.value as EndType }))}>
+            {Object.entries(END_TYPES).map(([k, t]) => <option key={k} value={k}>{t.label}</option>)}
+          </select>
+        </label>
+        {n("shearModulusMpa", "Shear modulus G (MPa)", "79 300 MPa for steel spring wire")}
+        {n("loadN", "Load for the stress check (N)")}
+      </div>
+      {report ? (
+        <dl aria-label="Spring check results">
+          <Result label="Mean diameter D" value={`${report.meanDiameterMm.toFixed(2)} mm`} />
+          <Result label="Active coils" value={report.activeCoils.toFixed(2)} />
+          <Result label="Spring rate" value={`${report.rate.nMm.toFixed(2)} N/mm · ${report.rate.kgfMm.toFixed(3)} kgf/mm · ${report.rate.lbfIn.toFixed(0)} lbf/in`} />
+          <Result label="Spring index C" value={report.springIndex.toFixed(2)} />
+          <Result label="Wahl factor" value={report.wahlFactor.toFixed(3)} />
+          <Result label="Shear stress at the load" value={`${report.shearStressMpa.toFixed(0)} MPa`} />
+        </dl>
+      ) : (
+        <p className="text-sm text-stone-600">Enter the measurements to see the rate.</p>
+      )}
+      <p className="text-xs text-stone-600">A spring index below 4 or above 12 is hard to make and to trust (Shigley §10-2). A compressed spring stores energy: measure springs out of the shock or fork, and work to the manufacturer&apos;s service manual.</p>
+    </CalcCard>
+  );
+}

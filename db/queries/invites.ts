@@ -1,0 +1,39 @@
+// Staff invitations: only the SHA-256 of the e-mailed token is stored.
+import { and, desc, eq, gt, isNull } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { staffInvites } from "@/db/schema";
+
+export type StaffInviteRow = typeof staffInvites.$inferSelect;
+
+export async function insertInvite(values: typeof staffInvites.$inferInsert) {
+  const db = await getDb();
+  const [row] = await db.insert(staffInvites).values(values).returning();
+  return row!;
+}
+
+/** Open invitations (not accepted, not expired), newest first. */
+export async function listOpenInvites(now = new Date()) {
+  const db = await getDb();
+  return db
+    .select({ id: staffInvites.id, email: staffInvites.email, role: staffInvites.role, expiresAt: staffInvites.expiresAt, createdAt: staffInvites.createdAt })
+    .from(staffInvites)
+    .where(and(isNull(staffInvites.acceptedAt), gt(staffInvites.expiresAt, now)))
+    .orderBy(desc(staffInvites.createdAt));
+}
+
+export async function findInviteByTokenHash(tokenHash: string): Promise<StaffInviteRow | null> {
+  const db = await getDb();
+  const [row] = await db.select().from(staffInvites).where(eq(staffInvites.tokenHash, tokenHash));
+  return row ?? null;
+}
+
+/** Marks the invitation used; false when someone used it first. */
+export async function markInviteAccepted(id: string): Promise<boolean> {
+  const db = await getDb();
+  const rows = await db
+    .update(staffInvites)
+    .set({ acceptedAt: new Date() })
+    .where(and(eq(staffInvites.id, id), isNull(staffInvites.acceptedAt)))
+    .returning({ id: staffInvites.id });
+  return rows.length > 0;
+}
