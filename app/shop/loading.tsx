@@ -1,6 +1,6 @@
 export default function Loading() {
   return (
-    <div className="flex animate-pulse flex-col gap-6" aria-busy="true" aria-label="Loading">
+    <div className="flex animate-pulse flex-col gap-6" role="status" aria-busy="true" aria-label="Loading">
       <div className="h-8 w-56 rounded bg-stone-200" />
       <div className="grid grid-cols-2 gap-3 sm:grid-cols-5">
         {Array.from({ length: 5 }, (_, i) => (

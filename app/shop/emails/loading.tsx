@@ -1,6 +1,6 @@
 export default function Loading() {
   return (
-    <div className="flex animate-pulse flex-col gap-6" aria-busy="true" aria-label="Loading">
+    <div className="flex animate-pulse flex-col gap-6" role="status" aria-busy="true" aria-label="Loading">
       <div className="h-8 w-40 rounded bg-stone-200" />
       <div className="h-5 w-2/3 rounded bg-stone-200" />
       {Array.from({ length: 3 }, (_, i) => (
