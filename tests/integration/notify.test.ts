@@ -1,30 +1,17 @@
 // Rider e-mails: each carries a working private link, is recorded, and is audited; a failed send is
 // recorded as failed without throwing.
 import { http, HttpResponse } from "msw";
-import { setupServer } from "msw/node";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { findRequestIdByStatusToken } from "@/db/queries/status-links";
-import { seedDemo, stableUuid } from "@/db/seed-demo";
+import { stableUuid } from "@/db/seed-demo";
 import { mailBaseUrl } from "@/lib/env";
 import { notifyRider } from "@/lib/notify";
-import { closeTestDatabase, createTestDatabase } from "../helpers/db";
-import { captureMail } from "../helpers/auth";
+import { setupTestApp } from "../helpers/app";
 
-const server = setupServer();
-let sent: ReturnType<typeof captureMail>;
+const app = setupTestApp({ seed: true });
+
 const requestId = stableUuid("request:r09");
-
-beforeAll(async () => {
-  await createTestDatabase();
-  await seedDemo();
-  server.listen({ onUnhandledRequest: "error" });
-  sent = captureMail(server);
-}, 120_000);
-afterAll(async () => {
-  server.close();
-  await closeTestDatabase();
-});
 
 const tokenIn = (text: string) => /\/status\/([A-Za-z0-9_-]{40,})/.exec(text)?.[1];
 
@@ -32,7 +19,7 @@ describe("notifyRider", () => {
   it("sends the confirmation with a status link that opens this request", async () => {
     const result = await notifyRider(requestId, { kind: "request-received" });
     expect(result.status).toBe("sent");
-    const mail = sent.at(-1)!;
+    const mail = app.sent.at(-1)!;
     expect(mail.to).toEqual(["dario.lindqvist@example.test"]);
     expect(mail.subject).toContain("received your setup request");
     const token = tokenIn(mail.text);
@@ -43,7 +30,7 @@ describe("notifyRider", () => {
 
   it("links the approved sheet by version with the rider's token", async () => {
     await notifyRider(requestId, { kind: "sheet-ready", version: 2, tunerName: "Teo", revised: true });
-    const mail = sent.at(-1)!;
+    const mail = app.sent.at(-1)!;
     expect(mail.subject).toBe("Revised setup sheet (version 2) for request 9");
     const sheet = new RegExp(`/api/requests/${requestId}/sheet\\?version=2&token=([A-Za-z0-9_-]+)`).exec(mail.text);
     expect(sheet).toBeTruthy();
@@ -51,7 +38,7 @@ describe("notifyRider", () => {
   });
 
   it("records a failed send as failed in the audit trail, without throwing", async () => {
-    server.use(http.post(`${mailBaseUrl()}/emails`, () => HttpResponse.json({ statusCode: 500, name: "internal_server_error", message: "down" }, { status: 500 })));
+    app.server.use(http.post(`${mailBaseUrl()}/emails`, () => HttpResponse.json({ statusCode: 500, name: "internal_server_error", message: "down" }, { status: 500 })));
     const result = await notifyRider(
       requestId,
       { kind: "request-declined", reason: "Test" },

@@ -1,44 +1,25 @@
 // POST /api/requests and GET /api/bikes against a fresh seeded database: a valid request is stored
 // with recommendation version 1 in one go; every kind of bad input is refused naming the field and
 // leaves no row and no file; the limiter answers 429.
-import { mkdtempSync, readdirSync, readFileSync, rmSync } from "node:fs";
-import os from "node:os";
+import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { count, eq } from "drizzle-orm";
-import { setupServer } from "msw/node";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { GET as listBikes } from "@/app/api/bikes/route";
 import { POST as submit } from "@/app/api/requests/route";
 import { getDb } from "@/db/client";
 import { bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { findRequestIdByStatusToken } from "@/db/queries/status-links";
 import { listAuditForRequest } from "@/db/queries/audit";
-import { seedDemo, stableUuid } from "@/db/seed-demo";
-import { resetEnvForTests } from "@/lib/env";
+import { stableUuid } from "@/db/seed-demo";
 import { recommendationSchema } from "@/lib/sizing";
-import { closeTestDatabase, createTestDatabase } from "../helpers/db";
-import { captureMail, ORIGIN } from "../helpers/auth";
+import { setupTestApp } from "../helpers/app";
+import { ORIGIN } from "../helpers/auth";
 import { heicHeader, pdfBytes, tinyJpeg, tinyPng } from "../fixtures/images";
 
-const server = setupServer();
-let sent: ReturnType<typeof captureMail>;
-let dataDir: string;
+const app = setupTestApp({ seed: true, tempDataDir: true });
 let ip = 0;
 
-beforeAll(async () => {
-  dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-intake-"));
-  process.env.DATA_DIR = dataDir;
-  resetEnvForTests();
-  await createTestDatabase();
-  await seedDemo();
-  server.listen({ onUnhandledRequest: "error" });
-  sent = captureMail(server);
-}, 120_000);
-afterAll(async () => {
-  server.close();
-  await closeTestDatabase();
-  rmSync(dataDir, { recursive: true, force: true });
-});
 
 const bike450 = stableUuid("bike:mx-450-4t");
 
@@ -70,7 +51,7 @@ async function counts() {
   const [files] = await db.select({ n: count() }).from(uploads);
   let onDisk: string[] = [];
   try {
-    onDisk = readdirSync(path.join(dataDir, "uploads"));
+    onDisk = readdirSync(path.join(app.dataDir, "uploads"));
   } catch {
     // No upload yet.
   }
@@ -104,7 +85,7 @@ describe("POST /api/requests, valid", () => {
 
     const audit = await listAuditForRequest(body.id);
     expect(audit.map((a) => a.action)).toEqual(["request.submitted", "email.sent"]);
-    const mail = sent.at(-1)!;
+    const mail = app.sent.at(-1)!;
     expect(mail.to).toEqual(["test.rider@example.test"]);
     expect(mail.text).toContain(body.statusUrl);
   });
@@ -126,7 +107,7 @@ describe("POST /api/requests, valid", () => {
     ]);
     for (const row of rows) {
       expect(row.storageKey).toMatch(/^[0-9a-f-]{36}\.(png|jpg)$/);
-      const onDisk = readFileSync(path.join(dataDir, "uploads", row.storageKey));
+      const onDisk = readFileSync(path.join(app.dataDir, "uploads", row.storageKey));
       // SHA-256 by WebCrypto (FIPS 180-4), a second implementation beside the one that stored it.
       const digest = Buffer.from(await crypto.subtle.digest("SHA-256", onDisk)).toString("hex");
       expect(row.sha256).toBe(digest);

@@ -1,12 +1,8 @@
 // The rider's side after submitting: a status token or the rider's own session opens the request and
 // nothing else; the rider answers the tuner's question; the sag follow-up is judged at once; photos
 // reach only staff and the request's rider.
-import { mkdtempSync, rmSync } from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import { and, eq } from "drizzle-orm";
-import { setupServer } from "msw/node";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { describe, expect, it } from "vitest";
 import { POST as submit } from "@/app/api/requests/route";
 import { POST as answer } from "@/app/api/status/[id]/answer/route";
 import { POST as sag } from "@/app/api/status/[id]/sag/route";
@@ -15,35 +11,18 @@ import { getDb } from "@/db/client";
 import { recommendationVersions, requestMessages, sagReports, setupRequests, uploads } from "@/db/schema";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { findRequestForViewer, loadRiderStatus } from "@/db/queries/status";
-import { seedDemo, stableUuid } from "@/db/seed-demo";
+import { stableUuid } from "@/db/seed-demo";
 import { resolveAuthSecret } from "@/lib/auth/secret";
-import { resetEnvForTests } from "@/lib/env";
 import { demoStatusToken } from "@/lib/requests/token";
 import { sagVerdict, type Recommendation, type SizingInput } from "@/lib/sizing";
-import { closeTestDatabase, createTestDatabase } from "../helpers/db";
-import { captureMail, cookieFrom, ORIGIN, signInStaff, signInWithEmailLink } from "../helpers/auth";
+import { setupTestApp } from "../helpers/app";
+import { cookieFrom, ORIGIN, signInStaff, signInWithEmailLink } from "../helpers/auth";
 import { tinyPng } from "../fixtures/images";
 
-const server = setupServer();
-let sent: ReturnType<typeof captureMail>;
-let dataDir: string;
+const app = setupTestApp({ seed: true, tempDataDir: true });
 const id = (key: string) => stableUuid(`request:${key}`);
 const token = (key: string) => demoStatusToken(resolveAuthSecret(), id(key));
 
-beforeAll(async () => {
-  dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-status-"));
-  process.env.DATA_DIR = dataDir;
-  resetEnvForTests();
-  await createTestDatabase();
-  await seedDemo();
-  server.listen({ onUnhandledRequest: "error" });
-  sent = captureMail(server);
-}, 120_000);
-afterAll(async () => {
-  server.close();
-  await closeTestDatabase();
-  rmSync(dataDir, { recursive: true, force: true });
-});
 
 const params = (value: string) => ({ params: Promise.resolve({ id: value }) });
 let ip = 0;
@@ -107,10 +86,10 @@ describe("POST /api/status/:id/answer", () => {
   });
 
   it("a signed-in rider answers without a token; another rider's session sees nothing", async () => {
-    const other = await signInWithEmailLink("jesper.dunmore@example.test", sent);
+    const other = await signInWithEmailLink("jesper.dunmore@example.test", app.sent);
     expect((await postTo(answer, id("r08"), { body: "Mostly seated." }, other.cookie)).status).toBe(404);
     expect((await postTo(answer, id("r08"), { body: "Mostly seated." })).status).toBe(401);
-    const own = await signInWithEmailLink("lotte.brightwater@example.test", sent);
+    const own = await signInWithEmailLink("lotte.brightwater@example.test", app.sent);
     expect((await postTo(answer, id("r08"), { body: "Mostly seated, about half." }, own.cookie)).status).toBe(201);
   });
 });
@@ -189,9 +168,9 @@ describe("GET /api/uploads/:id", () => {
 
     expect((await get(`?token=${token("r09")}`)).status).toBe(404);
     expect((await get("")).status).toBe(401);
-    const otherRider = await signInWithEmailLink("dario.lindqvist@example.test", sent);
+    const otherRider = await signInWithEmailLink("dario.lindqvist@example.test", app.sent);
     expect((await get("", otherRider.cookie)).status).toBe(404);
-    const ownRider = await signInWithEmailLink("photo.rider@example.test", sent);
+    const ownRider = await signInWithEmailLink("photo.rider@example.test", app.sent);
     expect((await get("", ownRider.cookie)).status).toBe(200);
     const staff = cookieFrom(await signInStaff("tuner@sagwise.test", "sagwise-demo"));
     expect((await get("", staff)).status).toBe(200);
