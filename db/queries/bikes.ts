@@ -2,6 +2,7 @@
 // bikeClass/forkKind/rearWheelTravelMm/name/slug are copied from it so lists and filters agree.
 import { and, asc, eq, ilike, isNotNull, isNull, ne, or, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
+import { containsPattern } from "./like";
 import { bikeModels } from "@/db/schema";
 import type { BikeModelValues } from "@/lib/validations/bike";
 
@@ -27,7 +28,7 @@ export async function listBikeModels(query: { q?: string; retired?: "hide" | "sh
   if (query.retired === "hide" || query.retired === undefined) where.push(isNull(bikeModels.retiredAt));
   if (query.retired === "only") where.push(isNotNull(bikeModels.retiredAt));
   if (query.q) {
-    const like = `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const like = containsPattern(query.q);
     where.push(or(ilike(bikeModels.name, like), ilike(bikeModels.bikeClass, like), ilike(bikeModels.slug, like))!);
   }
   return db

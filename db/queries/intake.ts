@@ -2,6 +2,7 @@
 // transaction that stores the request, its photos, recommendation version 1 and its status link.
 import { and, asc, eq, ilike, isNull, or, sql } from "drizzle-orm";
 import { getDb } from "@/db/client";
+import { containsPattern } from "./like";
 import { auditEvents, bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { createStatusLink } from "./status-links";
 import { bikeSpecSchema, type BikeSpecInput, type Recommendation, type SizingInput } from "@/lib/sizing";
@@ -11,7 +12,7 @@ export async function listActiveBikes(q?: string) {
   const db = await getDb();
   const conditions = [isNull(bikeModels.retiredAt)];
   if (q) {
-    const pattern = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const pattern = containsPattern(q);
     conditions.push(or(ilike(bikeModels.name, pattern), ilike(bikeModels.bikeClass, pattern))!);
   }
   const rows = await db

@@ -1,5 +1,6 @@
 import { and, asc, count, desc, eq, gte, isNull, like, lt, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
+import { containsPattern } from "./like";
 import { REQUEST_STATUSES, setupRequests, user, type RequestStatus } from "@/db/schema";
 import type { QueueQuery } from "@/lib/validations/queue";
 
@@ -72,7 +73,7 @@ function queueConditions(query: QueueQuery, callerId?: string): SQL | undefined 
   if (query.to) conditions.push(lt(setupRequests.createdAt, new Date(Date.parse(`${query.to}T00:00:00Z`) + DAY_MS)));
   if (query.q) {
     // search_text is lower-cased and trigram-indexed; LIKE wildcards typed by the user are literal.
-    const pattern = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    const pattern = containsPattern(query.q.toLowerCase());
     conditions.push(like(setupRequests.searchText, pattern));
   }
   return conditions.length ? and(...conditions) : undefined;
