@@ -5,7 +5,7 @@ import { NextResponse } from "next/server";
 import { findSheetRequest, findSheetVersion } from "@/db/queries/sheet";
 import { statusTokenOpens } from "@/db/queries/status-links";
 import { HttpError, withErrors } from "@/lib/api/respond";
-import { AuthError, getSessionUser } from "@/lib/auth/guard";
+import { AuthError, getSessionUser, publicRoute } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { renderSetupSheet, sheetFileName } from "@/lib/pdf";
 import { buildSheetData } from "@/lib/pdf/load-sheet";
@@ -18,7 +18,9 @@ const forbidden = (error: string) => NextResponse.json({ error }, { status: 403 
 
 type Viewer = "staff" | "rider";
 
-export const GET = withErrors(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
+// Public on purpose: a rider's private link (token) opens it without a session; the checks below
+// decide between staff, token holder and the rider's own session.
+export const GET = publicRoute(withErrors(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   const { id } = await params;
   const query = sheetQuerySchema.parse(Object.fromEntries(new URL(request.url).searchParams));
 
@@ -63,4 +65,4 @@ export const GET = withErrors(async (request: Request, { params }: { params: Pro
       "x-content-type-options": "nosniff",
     },
   });
-});
+}));
