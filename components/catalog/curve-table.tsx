@@ -38,10 +38,10 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
             <tr key={f.id}>
               <td className="pr-2 tabular-nums">{i + 1}</td>
               <td className="pr-2 py-1">
-                <Field id={`curve-${i}-y`} label={`Point ${i + 1} wheel travel (mm)`} className="[&>label]:sr-only" inputMode="decimal" error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)} {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)} />
+                <Field id={`curve-${i}-y`} label={`Point ${i + 1} wheel travel (mm)`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)} {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)} />
               </td>
               <td className="pr-2 py-1">
-                <Field id={`curve-${i}-r`} label={`Point ${i + 1} leverage ratio`} className="[&>label]:sr-only" inputMode="decimal" error={errorAt(errors, `${LIST}.${i}.ratio`)} {...register(`${LIST}.${i}.ratio`, pointOptions)} />
+                <Field id={`curve-${i}-r`} label={`Point ${i + 1} leverage ratio`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.ratio`)} {...register(`${LIST}.${i}.ratio`, pointOptions)} />
               </td>
               <td>
                 <Button variant="ghost" aria-label={`Remove point ${i + 1}`} disabled={fields.length <= 2} onClick={() => remove(i)}>
