@@ -1,30 +1,23 @@
 "use client";
 
-// Create or edit a catalog model. Validated live with the same bikeModelSchema the server uses.
+// Create or edit a catalog model: react-hook-form checked with the same bikeModelSchema the server uses.
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useMemo, useState } from "react";
+import { useState } from "react";
+import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import type { BikeSpecInput } from "@/lib/sizing";
-import { bikeModelSchema } from "@/lib/validations/bike";
+import { applyServerErrors, errorAt, toNumber } from "@/components/ui/apply-server-errors";
+import { bikeModelSchema, type BikeModelInput, type BikeModelValues } from "@/lib/validations/bike";
 import { AIR_FIELDS, CLICKERS, FORK_FIELDS, FORK_KIND_LABELS, MASS_FIELDS, REAR_FIELDS, type NumField } from "./bike-fields";
 import { CurveTable } from "./curve-table";
-import { callApi, getIn, issuesByPath, setIn } from "./form-utils";
+import { callApi } from "./form-utils";
 import { LeveragePreview } from "./leverage-preview";
-import { NumInput } from "./num-input";
 
-export interface BikeFormValues {
-  name: string;
-  slug?: string;
-  bikeClass: string;
-  yearFrom?: number | null;
-  yearTo?: number | null;
-  notes?: string | null;
-  spec: BikeSpecInput;
-}
+export type BikeFormValues = BikeModelInput;
 
 /** Optional groups left fully empty are absent, not half-filled objects the schema would refuse. */
-function withoutEmptyOptionals(m: BikeFormValues): BikeFormValues {
+export function withoutEmptyOptionals(m: BikeFormValues): BikeFormValues {
   const spec = { ...m.spec, fork: { ...m.spec.fork } };
   const empty = (o: object | undefined) => !o || Object.values(o).every((v) => v === undefined);
   if (empty(spec.riderMassRangeKg)) delete spec.riderMassRangeKg;
@@ -32,66 +25,67 @@ function withoutEmptyOptionals(m: BikeFormValues): BikeFormValues {
   return { ...m, spec };
 }
 
+// The browser-side variant of the shared schema: the same bikeModelSchema, after dropping empty groups.
+const schemaResolver = zodResolver(bikeModelSchema);
+const bikeResolver: Resolver<BikeModelInput, unknown, BikeModelValues> = (values, context, options) =>
+  schemaResolver(withoutEmptyOptionals(values), context, options);
+
+// Fields whose change moves a cross-field check shown on another field.
+const DEPS: Record<string, Path<BikeModelInput>[]> = {
+  "spec.rear.wheelTravelMm": ["spec.rear.shockStrokeMm"],
+  yearFrom: ["yearTo"],
+};
+const SERVER_FIELDS = ["name", "slug", "bikeClass", "yearFrom", "yearTo", "notes", "spec"];
+
 const section = "flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4";
 
 export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string }) {
   const router = useRouter();
-  const [model, setModel] = useState<BikeFormValues>(initial);
-  const [submitted, setSubmitted] = useState(false);
-  const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-
-  const payload = useMemo(() => withoutEmptyOptionals(model), [model]);
-  const parsed = useMemo(() => bikeModelSchema.safeParse(payload), [payload]);
-  const clientErrors = submitted && !parsed.success ? issuesByPath(parsed.error) : {};
-  const errors = { ...clientErrors, ...serverErrors };
-  const update = (path: string, value: unknown) => {
-    setModel((m) => setIn(m, path, value));
-    setServerErrors((e) => Object.fromEntries(Object.entries(e).filter(([k]) => k !== path)));
-  };
+  const { control, register, handleSubmit, getValues, setError, formState } = useForm<BikeModelInput, unknown, BikeModelValues>({
+    resolver: bikeResolver,
+    defaultValues: initial,
+  });
+  const errors = formState.errors;
+  const [forkKind, curve, wheelTravelMm, shockStrokeMm, rateNmm, preloadMm] = useWatch({
+    control,
+    name: ["spec.fork.kind", "spec.rear.leverageCurve", "spec.rear.wheelTravelMm", "spec.rear.shockStrokeMm", "spec.rear.stockRateNmm", "spec.rear.preloadMinMm"],
+  });
   const num = ([path, label, hint]: NumField) => (
-    <NumInput key={path} id={path} label={label} hint={hint} value={getIn(model, path) as number | undefined} onChange={(v) => update(path, v)} error={errors[path]} />
+    <Field key={path} id={path} label={label} hint={hint} inputMode="decimal" error={errorAt(errors, path)} {...register(path as Path<BikeModelInput>, { setValueAs: toNumber(), deps: DEPS[path] })} />
   );
-  const fork = model.spec.fork;
 
-  async function save(event: React.FormEvent) {
-    event.preventDefault();
-    setSubmitted(true);
-    setMessage(null);
-    if (!parsed.success) {
-      setMessage("Some fields need attention: see the messages beside them.");
-      return;
-    }
-    setSaving(true);
-    const result = await callApi<{ id: string }>(id ? `/api/shop/catalog/${id}` : "/api/shop/catalog", id ? "PUT" : "POST", payload);
-    setSaving(false);
-    if (!result.ok) {
-      setServerErrors(result.fields);
-      setMessage(result.error);
-      return;
-    }
-    setMessage("Saved.");
-    router.push(`/shop/catalog/${result.data.id}`);
-    router.refresh();
-  }
+  const save = handleSubmit(
+    async () => {
+      setMessage(null);
+      // The values as typed (minus empty groups), as before: the server parses them with the same schema.
+      const payload = withoutEmptyOptionals(getValues());
+      const result = await callApi<{ id: string }>(id ? `/api/shop/catalog/${id}` : "/api/shop/catalog", id ? "PUT" : "POST", payload);
+      if (!result.ok) return setMessage([result.error, ...applyServerErrors(setError, result.fields, { fields: SERVER_FIELDS })].join(" "));
+      setMessage("Saved.");
+      router.push(`/shop/catalog/${result.data.id}`);
+      router.refresh();
+    },
+    () => setMessage("Some fields need attention: see the messages beside them."),
+  );
 
   return (
     <form onSubmit={save} noValidate aria-label="Bike model" className="flex flex-col gap-5">
       <section className={section} aria-labelledby="bike-identity">
         <h2 id="bike-identity" className="font-semibold">Model</h2>
         <div className="grid gap-4 sm:grid-cols-2">
-          <Field id="name" label="Name" value={model.name} onChange={(e) => update("name", e.target.value)} error={errors.name} />
-          <Field id="bikeClass" label="Class" hint="Lower-case with dashes, e.g. mx-450-4t" value={model.bikeClass} onChange={(e) => update("bikeClass", e.target.value)} error={errors.bikeClass} />
-          <Field id="slug" label="Slug (optional)" hint="Made from the name when empty" value={model.slug ?? ""} onChange={(e) => update("slug", e.target.value)} error={errors.slug} />
+          <Field id="name" label="Name" error={errors.name?.message} {...register("name")} />
+          <Field id="bikeClass" label="Class" hint="Lower-case with dashes, e.g. mx-450-4t" error={errors.bikeClass?.message} {...register("bikeClass")} />
+          <Field id="slug" label="Slug (optional)" hint="Made from the name when empty" error={errors.slug?.message} {...register("slug")} />
           <div className="grid grid-cols-2 gap-2">
-            <NumInput id="yearFrom" label="First year" value={model.yearFrom} onChange={(v) => update("yearFrom", v ?? null)} error={errors.yearFrom} />
-            <NumInput id="yearTo" label="Last year" value={model.yearTo} onChange={(v) => update("yearTo", v ?? null)} error={errors.yearTo} />
+            <Field id="yearFrom" label="First year" inputMode="numeric" error={errors.yearFrom?.message} {...register("yearFrom", { setValueAs: toNumber(null), deps: ["yearTo"] })} />
+            <Field id="yearTo" label="Last year" inputMode="numeric" error={errors.yearTo?.message} {...register("yearTo", { setValueAs: toNumber(null) })} />
           </div>
         </div>
         <label className="flex flex-col gap-1 text-sm font-medium text-stone-800">
           Notes
-          <textarea className="min-h-20 rounded-lg border border-stone-300 px-3 py-2 text-base font-normal" value={model.notes ?? ""} onChange={(e) => update("notes", e.target.value)} />
+          <textarea className="min-h-20 rounded-lg border border-stone-300 px-3 py-2 text-base font-normal" aria-invalid={errors.notes ? true : undefined} {...register("notes")} />
+          {errors.notes ? <span className="text-red-700">{errors.notes.message}</span> : null}
         </label>
       </section>
 
@@ -104,14 +98,8 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
         <h2 id="bike-rear" className="font-semibold">Rear suspension</h2>
         <div className="grid gap-4 sm:grid-cols-3">{REAR_FIELDS.map(num)}</div>
         <div className="grid gap-4 lg:grid-cols-[minmax(0,22rem)_1fr]">
-          <CurveTable curve={model.spec.rear.leverageCurve} onChange={(c) => update("spec.rear.leverageCurve", c)} errors={errors} />
-          <LeveragePreview
-            curve={model.spec.rear.leverageCurve}
-            wheelTravelMm={model.spec.rear.wheelTravelMm}
-            shockStrokeMm={model.spec.rear.shockStrokeMm}
-            rateNmm={model.spec.rear.stockRateNmm}
-            preloadMm={model.spec.rear.preloadMinMm}
-          />
+          <CurveTable control={control} register={register} getValues={getValues} errors={errors} />
+          <LeveragePreview curve={curve} wheelTravelMm={wheelTravelMm} shockStrokeMm={shockStrokeMm} rateNmm={rateNmm} preloadMm={preloadMm} />
         </div>
       </section>
 
@@ -119,13 +107,13 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
         <h2 id="bike-fork" className="font-semibold">Fork</h2>
         <label className="flex max-w-sm flex-col gap-1 text-sm font-medium text-stone-800">
           Fork spring
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base" value={fork.kind} onChange={(e) => update("spec.fork.kind", e.target.value)}>
+          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base" {...register("spec.fork.kind", { deps: ["spec.fork.air"] as Path<BikeModelInput>[] })}>
             {Object.entries(FORK_KIND_LABELS).map(([k, label]) => <option key={k} value={k}>{label}</option>)}
           </select>
         </label>
-        <div className="grid gap-4 sm:grid-cols-3">{FORK_FIELDS.filter(([p]) => fork.kind !== "air" || !/stockRate|Preload/.test(p)).map(num)}</div>
-        {fork.kind === "air" ? <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div> : null}
-        {errors["spec.fork.air"] ? <p className="text-sm font-medium text-red-700">{errors["spec.fork.air"]}</p> : null}
+        <div className="grid gap-4 sm:grid-cols-3">{FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}</div>
+        {forkKind === "air" ? <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div> : null}
+        {errorAt(errors, "spec.fork.air") ? <p className="text-sm font-medium text-red-700">{errorAt(errors, "spec.fork.air")}</p> : null}
       </section>
 
       <section className={section} aria-labelledby="bike-clickers">
@@ -142,7 +130,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
 
       {message ? <p role="alert" className={`rounded-lg p-3 text-sm font-medium ${message === "Saved." ? "bg-pine-50 text-pine-900" : "bg-red-50 text-red-800"}`}>{message}</p> : null}
       <div className="flex gap-3">
-        <Button type="submit" disabled={saving}>{saving ? "Saving…" : id ? "Save changes" : "Add bike"}</Button>
+        <Button type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? "Saving…" : id ? "Save changes" : "Add bike"}</Button>
       </div>
     </form>
   );

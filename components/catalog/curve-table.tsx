@@ -1,14 +1,26 @@
 "use client";
 
-import type { LeveragePoint } from "@/lib/sizing";
+import { useFieldArray, type Control, type FieldErrors, type UseFormGetValues, type UseFormRegister } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { NumInput } from "./num-input";
+import { Field } from "@/components/ui/field";
+import { errorAt, toNumber } from "@/components/ui/apply-server-errors";
+import type { BikeModelInput, BikeModelValues } from "@/lib/validations/bike";
 
-/** The leverage-ratio curve as an editable table of points. */
-export function CurveTable({ curve, onChange, errors }: { curve: LeveragePoint[]; onChange: (c: LeveragePoint[]) => void; errors: Record<string, string> }) {
-  const set = (i: number, key: keyof LeveragePoint, v: number | undefined) =>
-    onChange(curve.map((p, j) => (j === i ? { ...p, [key]: v as number } : p)));
-  const listError = errors["spec.rear.leverageCurve"];
+const LIST = "spec.rear.leverageCurve" as const;
+// Any point moves the curve's integral, which the schema checks against the stroke.
+const pointOptions = { setValueAs: toNumber(), deps: "spec.rear.shockStrokeMm" as const };
+
+interface Props {
+  control: Control<BikeModelInput, unknown, BikeModelValues>;
+  register: UseFormRegister<BikeModelInput>;
+  getValues: UseFormGetValues<BikeModelInput>;
+  errors: FieldErrors<BikeModelInput>;
+}
+
+/** The leverage-ratio curve as an editable table of points (a field array of the bike form). */
+export function CurveTable({ control, register, getValues, errors }: Props) {
+  const { fields, append, remove } = useFieldArray({ control, name: LIST });
+  const listError = errorAt(errors, LIST);
   return (
     <fieldset className="flex flex-col gap-2">
       <legend className="text-sm font-semibold text-stone-800">Leverage-ratio curve (wheel travel per shock travel)</legend>
@@ -22,17 +34,17 @@ export function CurveTable({ curve, onChange, errors }: { curve: LeveragePoint[]
           </tr>
         </thead>
         <tbody>
-          {curve.map((p, i) => (
-            <tr key={i}>
+          {fields.map((f, i) => (
+            <tr key={f.id}>
               <td className="pr-2 tabular-nums">{i + 1}</td>
               <td className="pr-2 py-1">
-                <NumInput id={`curve-${i}-y`} label={`Point ${i + 1} wheel travel (mm)`} className="[&>label]:sr-only" value={p.wheelTravelMm} onChange={(v) => set(i, "wheelTravelMm", v)} error={errors[`spec.rear.leverageCurve.${i}.wheelTravelMm`]} />
+                <Field id={`curve-${i}-y`} label={`Point ${i + 1} wheel travel (mm)`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)} {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)} />
               </td>
               <td className="pr-2 py-1">
-                <NumInput id={`curve-${i}-r`} label={`Point ${i + 1} leverage ratio`} className="[&>label]:sr-only" value={p.ratio} onChange={(v) => set(i, "ratio", v)} error={errors[`spec.rear.leverageCurve.${i}.ratio`]} />
+                <Field id={`curve-${i}-r`} label={`Point ${i + 1} leverage ratio`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.ratio`)} {...register(`${LIST}.${i}.ratio`, pointOptions)} />
               </td>
               <td>
-                <Button variant="ghost" aria-label={`Remove point ${i + 1}`} disabled={curve.length <= 2} onClick={() => onChange(curve.filter((_, j) => j !== i))}>
+                <Button variant="ghost" aria-label={`Remove point ${i + 1}`} disabled={fields.length <= 2} onClick={() => remove(i)}>
                   Remove
                 </Button>
               </td>
@@ -44,10 +56,10 @@ export function CurveTable({ curve, onChange, errors }: { curve: LeveragePoint[]
       <Button
         variant="secondary"
         className="self-start"
-        disabled={curve.length >= 64}
+        disabled={fields.length >= 64}
         onClick={() => {
-          const last = curve[curve.length - 1];
-          onChange([...curve, { wheelTravelMm: (last?.wheelTravelMm ?? 0) + 50, ratio: last?.ratio ?? 2 }]);
+          const last = getValues(LIST).at(-1);
+          append({ wheelTravelMm: (Number.isFinite(last?.wheelTravelMm) ? last!.wheelTravelMm : 0) + 50, ratio: Number.isFinite(last?.ratio) ? last!.ratio : 2 });
         }}
       >
         Add point

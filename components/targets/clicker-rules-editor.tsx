@@ -2,10 +2,14 @@
 
 // The clicker rules table: trigger (complaint, terrain or a large spring change) → clicker, change,
 // reason. Saved as a whole (the order is kept); "reset" restores the engine's default rules.
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { Controller, useFieldArray, useForm } from "react-hook-form";
+import type { z } from "zod";
 import { Button } from "@/components/ui/button";
-import { callApi, issuesByPath } from "@/components/catalog/form-utils";
+import { applyServerErrors, errorAt, toNumber } from "@/components/ui/apply-server-errors";
+import { callApi } from "@/components/catalog/form-utils";
 import { CLICKER_IDS, COMPLAINTS, TERRAINS, type ClickerRule } from "@/lib/sizing";
 import { clickerRulesSchema } from "@/lib/validations/targets";
 
@@ -26,35 +30,38 @@ function triggerFrom(key: string, old: Trigger): Trigger {
 
 const cell = "min-h-11 rounded-lg border border-stone-300 bg-white px-2 text-sm";
 
+type Schema = typeof clickerRulesSchema;
+const NEW_RULE: ClickerRule = { trigger: { kind: "complaint", complaint: "bottoming" }, clicker: "forkCompression", change: -1, reason: "" };
+
 export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   const router = useRouter();
-  const [rules, setRules] = useState<ClickerRule[]>(initial);
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const { control, register, handleSubmit, setError, reset, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+    resolver: zodResolver(clickerRulesSchema),
+    defaultValues: { rules: initial },
+  });
+  const { fields, append, remove } = useFieldArray({ control, name: "rules" });
   const [message, setMessage] = useState<string | null>(null);
-  // Bumped on reset so the uncontrolled "change" inputs show the restored numbers.
-  const [version, setVersion] = useState(0);
-  const set = (i: number, patch: Partial<ClickerRule>) => setRules((rs) => rs.map((r, j) => (j === i ? { ...r, ...patch } : r)));
+  const err = (path: string) => errorAt(formState.errors, path);
 
-  async function save() {
-    const parsed = clickerRulesSchema.safeParse({ rules });
-    if (!parsed.success) {
-      setErrors(issuesByPath(parsed.error));
-      return setMessage("Some rules need attention.");
-    }
-    const r = await callApi("/api/shop/targets/rules", "PUT", { rules });
-    if (!r.ok) return (setErrors(r.fields), setMessage(r.error));
-    setErrors({});
-    setMessage("Rules saved.");
-    router.refresh();
-  }
-  async function reset() {
+  const save = handleSubmit(
+    async (values) => {
+      const r = await callApi("/api/shop/targets/rules", "PUT", values);
+      if (!r.ok) return setMessage([r.error, ...applyServerErrors(setError, r.fields, { fields: ["rules"] })].join(" "));
+      setMessage("Rules saved.");
+      router.refresh();
+    },
+    () => setMessage("Some rules need attention."),
+  );
+  async function resetRules() {
     const r = await callApi<{ rules: ClickerRule[] }>("/api/shop/targets/rules", "DELETE");
     if (!r.ok) return setMessage(r.error);
-    setRules(r.data.rules);
-    setVersion((v) => v + 1);
-    setErrors({});
+    reset({ rules: r.data.rules });
     setMessage("Back to the engine's default rules.");
   }
+  const problem = (path: string) => {
+    const text = err(path);
+    return { invalid: text ? true : undefined, note: text ? <p className="text-xs text-red-700">{text}</p> : null };
+  };
 
   return (
     <section aria-labelledby="clicker-rules" className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
@@ -63,40 +70,52 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
           <thead><tr className="text-stone-600"><th scope="col">When</th><th scope="col">Clicker</th><th scope="col">Change</th><th scope="col">Reason shown to the rider</th><th scope="col"><span className="sr-only">Remove</span></th></tr></thead>
-          <tbody key={version}>
-            {rules.map((r, i) => (
-              <tr key={i} className="align-top">
-                <td className="py-1 pr-2">
-                  <select aria-label={`Rule ${i + 1} trigger`} className={cell} value={triggerKey(r.trigger)} onChange={(e) => set(i, { trigger: triggerFrom(e.target.value, r.trigger) })}>
-                    <optgroup label="Complaint">{COMPLAINTS.map((c) => <option key={c} value={`complaint:${c}`}>{c}</option>)}</optgroup>
-                    <optgroup label="Terrain">{TERRAINS.map((t) => <option key={t} value={`terrain:${t}`}>{t}</option>)}</optgroup>
-                    <optgroup label="Spring change">{RATE_TRIGGERS.map((t) => <option key={t} value={`rate:${t}`}>{t.replace("-", " spring ")}</option>)}</optgroup>
-                  </select>
-                </td>
-                <td className="py-1 pr-2">
-                  <select aria-label={`Rule ${i + 1} clicker`} className={cell} value={r.clicker} onChange={(e) => set(i, { clicker: e.target.value as ClickerRule["clicker"] })}>
-                    {CLICKER_IDS.map((c) => <option key={c} value={c}>{c}</option>)}
-                  </select>
-                </td>
-                <td className="py-1 pr-2">
-                  <input aria-label={`Rule ${i + 1} change`} aria-invalid={errors[`rules.${i}.change`] ? true : undefined} className={`${cell} w-20`} inputMode="decimal" defaultValue={r.change} onChange={(e) => set(i, { change: Number(e.target.value) })} />
-                  {errors[`rules.${i}.change`] ? <p className="text-xs text-red-700">{errors[`rules.${i}.change`]}</p> : null}
-                </td>
-                <td className="py-1 pr-2">
-                  <input aria-label={`Rule ${i + 1} reason`} aria-invalid={errors[`rules.${i}.reason`] ? true : undefined} className={`${cell} w-full min-w-64`} value={r.reason} onChange={(e) => set(i, { reason: e.target.value })} />
-                  {errors[`rules.${i}.reason`] ? <p className="text-xs text-red-700">{errors[`rules.${i}.reason`]}</p> : null}
-                </td>
-                <td className="py-1"><Button variant="ghost" aria-label={`Remove rule ${i + 1}`} onClick={() => setRules((rs) => rs.filter((_, j) => j !== i))}>Remove</Button></td>
-              </tr>
-            ))}
+          <tbody>
+            {fields.map((f, i) => {
+              const change = problem(`rules.${i}.change`);
+              const reason = problem(`rules.${i}.reason`);
+              return (
+                <tr key={f.id} className="align-top">
+                  <td className="py-1 pr-2">
+                    <Controller
+                      control={control}
+                      name={`rules.${i}.trigger`}
+                      render={({ field }) => (
+                        <select aria-label={`Rule ${i + 1} trigger`} className={cell} value={triggerKey(field.value)} onChange={(e) => field.onChange(triggerFrom(e.target.value, field.value))} onBlur={field.onBlur} ref={field.ref}>
+                          <optgroup label="Complaint">{COMPLAINTS.map((c) => <option key={c} value={`complaint:${c}`}>{c}</option>)}</optgroup>
+                          <optgroup label="Terrain">{TERRAINS.map((t) => <option key={t} value={`terrain:${t}`}>{t}</option>)}</optgroup>
+                          <optgroup label="Spring change">{RATE_TRIGGERS.map((t) => <option key={t} value={`rate:${t}`}>{t.replace("-", " spring ")}</option>)}</optgroup>
+                        </select>
+                      )}
+                    />
+                    {problem(`rules.${i}.trigger`).note}
+                  </td>
+                  <td className="py-1 pr-2">
+                    <select aria-label={`Rule ${i + 1} clicker`} className={cell} {...register(`rules.${i}.clicker`)}>
+                      {CLICKER_IDS.map((c) => <option key={c} value={c}>{c}</option>)}
+                    </select>
+                  </td>
+                  <td className="py-1 pr-2">
+                    <input aria-label={`Rule ${i + 1} change`} aria-invalid={change.invalid} className={`${cell} w-20`} inputMode="decimal" {...register(`rules.${i}.change`, { setValueAs: toNumber() })} />
+                    {change.note}
+                  </td>
+                  <td className="py-1 pr-2">
+                    <input aria-label={`Rule ${i + 1} reason`} aria-invalid={reason.invalid} className={`${cell} w-full min-w-64`} {...register(`rules.${i}.reason`)} />
+                    {reason.note}
+                  </td>
+                  <td className="py-1"><Button variant="ghost" aria-label={`Remove rule ${i + 1}`} onClick={() => remove(i)}>Remove</Button></td>
+                </tr>
+              );
+            })}
           </tbody>
         </table>
       </div>
       <div className="flex flex-wrap gap-2">
-        <Button variant="secondary" onClick={() => setRules((rs) => [...rs, { trigger: { kind: "complaint", complaint: "bottoming" }, clicker: "forkCompression", change: -1, reason: "" }])}>Add rule</Button>
-        <Button onClick={save}>Save rules</Button>
-        <Button variant="secondary" onClick={reset}>Reset to default rules</Button>
+        <Button variant="secondary" onClick={() => append(NEW_RULE)}>Add rule</Button>
+        <Button onClick={save} disabled={formState.isSubmitting}>Save rules</Button>
+        <Button variant="secondary" onClick={resetRules}>Reset to default rules</Button>
       </div>
+      {err("rules") ? <p className="text-sm font-medium text-red-700">{err("rules")}</p> : null}
       {message ? <p role="status" className="text-sm">{message}</p> : null}
     </section>
   );

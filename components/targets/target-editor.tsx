@@ -2,11 +2,16 @@
 
 // One row of setup targets (discipline × skill): sag targets as % of travel with mm for a reference
 // bike, rider rear share, rate and bottoming factors; save, reset to the engine's defaults, preview.
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
+import { Controller, useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
 import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { applyServerErrors, toNumber } from "@/components/ui/apply-server-errors";
 import { NumInput } from "@/components/catalog/num-input";
-import { callApi, getIn, issuesByPath, setIn } from "@/components/catalog/form-utils";
+import { callApi } from "@/components/catalog/form-utils";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 import type { Discipline, SkillLevel } from "@/lib/sizing";
 import { targetRowValuesSchema } from "@/lib/validations/targets";
@@ -23,39 +28,37 @@ const SAG_FIELDS: [key: keyof TargetRowValues["sag"], label: string, end: "rear"
 
 const pct = (f: number | undefined) => (f === undefined ? undefined : Math.round(f * 10000) / 100);
 
+type Schema = typeof targetRowValuesSchema;
+const number = { setValueAs: toNumber() };
+
 export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: Discipline; skill: SkillLevel; saved: TargetRowValues; bikes: PreviewBike[] }) {
   const router = useRouter();
-  const [values, setValues] = useState<TargetRowValues>(saved);
-  const [errors, setErrors] = useState<Record<string, string>>({});
+  const { control, register, handleSubmit, setError, reset, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+    resolver: zodResolver(targetRowValuesSchema),
+    defaultValues: saved,
+  });
+  const values = useWatch({ control }) as TargetRowValues;
+  const errors = formState.errors;
   const [message, setMessage] = useState<string | null>(null);
   const [bikeId, setBikeId] = useState(bikes[0]?.id ?? "");
   const bike = bikes.find((b) => b.id === bikeId);
-  const set = (path: string, v: number | undefined) => setValues((cur) => setIn(cur, path, v));
 
-  async function save() {
-    const parsed = targetRowValuesSchema.safeParse(values);
-    if (!parsed.success) {
-      setErrors(issuesByPath(parsed.error));
-      return setMessage("Some values need attention.");
-    }
-    const result = await callApi("/api/shop/targets", "PUT", { discipline, skill, values });
-    if (!result.ok) {
-      setErrors(Object.fromEntries(Object.entries(result.fields).map(([k, m]) => [k.replace(/^values\./, ""), m])));
-      return setMessage(result.error);
-    }
-    setErrors({});
-    setMessage("Saved.");
-    router.refresh();
-  }
-
-  async function reset() {
-    const result = await callApi<{ values: TargetRowValues }>("/api/shop/targets/reset", "POST", { discipline, skill });
-    if (result.ok) {
-      setValues(result.data.values);
-      setErrors({});
-      setMessage("Back to the engine's defaults.");
+  const save = handleSubmit(
+    async (row) => {
+      const result = await callApi("/api/shop/targets", "PUT", { discipline, skill, values: row });
+      if (!result.ok) return setMessage([result.error, ...applyServerErrors(setError, result.fields, { prefix: "values." })].join(" "));
+      setMessage("Saved.");
       router.refresh();
-    }
+    },
+    () => setMessage("Some values need attention."),
+  );
+
+  async function resetRow() {
+    const result = await callApi<{ values: TargetRowValues }>("/api/shop/targets/reset", "POST", { discipline, skill });
+    if (!result.ok) return setMessage(result.error);
+    reset(result.data.values);
+    setMessage("Back to the engine's defaults.");
+    router.refresh();
   }
 
   return (
@@ -68,28 +71,37 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
         </select>
       </label>
       <div className="grid gap-4 sm:grid-cols-3">
-        {SAG_FIELDS.map(([key, label, end]) => {
-          const f = getIn(values, `sag.${key}`) as number | undefined;
-          const travel = end === "rear" ? bike?.rearTravelMm : bike?.forkTravelMm;
-          return (
-            <NumInput
-              key={key}
-              id={`sag-${key}`}
-              label={`${label} (% of travel)`}
-              value={pct(f)}
-              onChange={(v) => set(`sag.${key}`, v === undefined ? undefined : v / 100)}
-              hint={f !== undefined && travel ? `${(f * travel).toFixed(0)} mm on ${travel} mm of ${end} travel` : undefined}
-              error={errors[`sag.${key}`]}
-            />
-          );
-        })}
-        <NumInput id="riderRearShare" label="Rider weight on the rear wheel (0–1)" value={values.riderRearShare} onChange={(v) => set("riderRearShare", v)} error={errors.riderRearShare} />
-        <NumInput id="rateFactor" label="Rate factor (× the sag rate)" value={values.rateFactor} onChange={(v) => set("rateFactor", v)} error={errors.rateFactor} />
-        <NumInput id="bottomingFactor" label="Bottoming factor (× stock)" value={values.bottomingFactor} onChange={(v) => set("bottomingFactor", v)} error={errors.bottomingFactor} />
+        {SAG_FIELDS.map(([key, label, end]) => (
+          // Shown in % of travel, kept as the fraction the schema checks.
+          <Controller
+            key={key}
+            control={control}
+            name={`sag.${key}`}
+            rules={{ deps: SAG_FIELDS.filter(([k]) => k !== key).map(([k]) => `sag.${k}` as const) }}
+            render={({ field, fieldState }) => {
+              const travel = end === "rear" ? bike?.rearTravelMm : bike?.forkTravelMm;
+              const f = Number.isFinite(field.value) ? field.value : undefined;
+              // NaN (text that is no number) goes back as NaN, so NumInput keeps what was typed.
+              return (
+                <NumInput
+                  id={`sag-${key}`}
+                  label={`${label} (% of travel)`}
+                  value={pct(field.value)}
+                  onChange={(v) => field.onChange(v === undefined ? undefined : v / 100)}
+                  hint={f !== undefined && travel ? `${(f * travel).toFixed(0)} mm on ${travel} mm of ${end} travel` : undefined}
+                  error={fieldState.error?.message}
+                />
+              );
+            }}
+          />
+        ))}
+        <Field id="riderRearShare" label="Rider weight on the rear wheel (0–1)" inputMode="decimal" error={errors.riderRearShare?.message} {...register("riderRearShare", number)} />
+        <Field id="rateFactor" label="Rate factor (× the sag rate)" inputMode="decimal" error={errors.rateFactor?.message} {...register("rateFactor", number)} />
+        <Field id="bottomingFactor" label="Bottoming factor (× stock)" inputMode="decimal" error={errors.bottomingFactor?.message} {...register("bottomingFactor", number)} />
       </div>
       <div className="flex flex-wrap gap-2">
-        <Button onClick={save}>Save row</Button>
-        <Button variant="secondary" onClick={reset}>Reset to defaults</Button>
+        <Button onClick={save} disabled={formState.isSubmitting}>Save row</Button>
+        <Button variant="secondary" onClick={resetRow}>Reset to defaults</Button>
       </div>
       {message ? <p role="status" className="text-sm">{message}</p> : null}
       {bike ? <TargetPreview discipline={discipline} skill={skill} values={values} bike={bike} /> : null}

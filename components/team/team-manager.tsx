@@ -4,9 +4,8 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
 import { callApi } from "@/components/catalog/form-utils";
-import { inviteSchema } from "@/lib/validations/team";
+import { InviteForm, type InviteMessage } from "./invite-form";
 
 export interface Member {
   id: string;
@@ -24,22 +23,8 @@ export interface OpenInvite {
 
 export function TeamManager({ members, invites, selfId }: { members: Member[]; invites: OpenInvite[]; selfId: string }) {
   const router = useRouter();
-  const [email, setEmail] = useState("");
-  const [role, setRole] = useState<"tuner" | "admin">("tuner");
-  const [fields, setFields] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const [message, setMessage] = useState<InviteMessage | null>(null);
 
-  async function invite(e: React.FormEvent) {
-    e.preventDefault();
-    const parsed = inviteSchema.safeParse({ email, role });
-    if (!parsed.success) return setFields({ email: parsed.error.issues[0]?.message ?? "Check the address" });
-    const r = await callApi<{ email: string }>("/api/shop/team", "POST", parsed.data);
-    if (!r.ok) return (setFields(r.fields), setMessage({ ok: false, text: r.error }));
-    setFields({});
-    setEmail("");
-    setMessage({ ok: true, text: `Invitation sent to ${r.data.email}. The link works for 7 days.` });
-    router.refresh();
-  }
   async function change(id: string, body: { role?: string; active?: boolean }) {
     const r = await callApi(`/api/shop/team/${id}`, "PATCH", body);
     setMessage(r.ok ? { ok: true, text: "Saved." } : { ok: false, text: r.error });
@@ -48,17 +33,12 @@ export function TeamManager({ members, invites, selfId }: { members: Member[]; i
 
   return (
     <div className="flex flex-col gap-5">
-      <form onSubmit={invite} noValidate aria-label="Invite to the team" className="flex flex-wrap items-end gap-3 rounded-xl border border-stone-200 bg-white p-4">
-        <Field id="invite-email" label="E-mail" type="email" value={email} onChange={(e) => setEmail(e.target.value)} error={fields.email} className="min-w-64" />
-        <label className="flex flex-col gap-1 text-sm font-medium">
-          Role
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={role} onChange={(e) => setRole(e.target.value as "tuner" | "admin")}>
-            <option value="tuner">Tuner</option>
-            <option value="admin">Admin</option>
-          </select>
-        </label>
-        <Button type="submit">Send invitation</Button>
-      </form>
+      <InviteForm
+        onResult={(m) => {
+          setMessage(m);
+          if (m.ok) router.refresh();
+        }}
+      />
       {message ? <p role={message.ok ? "status" : "alert"} className={`rounded-lg p-3 text-sm ${message.ok ? "bg-pine-50" : "bg-red-50 text-red-800"}`}>{message.text}</p> : null}
       <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
         <table className="w-full text-left text-sm">

@@ -1,20 +1,30 @@
 "use client";
 
-import { useState } from "react";
-import { NumInput } from "@/components/catalog/num-input";
-import { issuesByPath } from "@/components/catalog/form-utils";
-import { DEFAULT_SHEAR_MODULUS_MPA, END_TYPES, coilGeometrySchema, type EndType } from "@/lib/validations/tools";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { Field } from "@/components/ui/field";
+import { toNumber } from "@/components/ui/apply-server-errors";
+import { DEFAULT_SHEAR_MODULUS_MPA, END_TYPES, coilGeometrySchema } from "@/lib/validations/tools";
 import { CalcCard, Result } from "./calc-card";
 import { coilReport } from "./spring-math";
 
+type Schema = typeof coilGeometrySchema;
+type NumKey = Exclude<keyof z.input<Schema>, "endType">;
+// Cross-field checks (OD against wire, coils against end type) are shown on the dependent field.
+const DEPS: Partial<Record<NumKey, NumKey[]>> = { wireDiameterMm: ["outerDiameterMm"] };
+
 export function CoilSpringTool() {
-  const [v, setV] = useState<Record<string, unknown>>({ endType: "squared-ground", shearModulusMpa: DEFAULT_SHEAR_MODULUS_MPA, loadN: 0 });
-  const parsed = coilGeometrySchema.safeParse(v);
-  const errors = parsed.success ? {} : issuesByPath(parsed.error);
-  const touched = (k: string) => v[k] !== undefined;
+  const { register, control, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+    resolver: zodResolver(coilGeometrySchema),
+    mode: "onChange",
+    defaultValues: { endType: "squared-ground", shearModulusMpa: DEFAULT_SHEAR_MODULUS_MPA, loadN: 0 },
+  });
+  // The results read the live values through the same schema; errors show once a field is changed.
+  const parsed = coilGeometrySchema.safeParse(useWatch({ control }));
   const report = parsed.success ? coilReport(parsed.data) : null;
-  const n = (k: string, label: string, hint?: string) => (
-    <NumInput id={`coil-${k}`} label={label} hint={hint} value={v[k] as number | undefined} onChange={(x) => setV((o) => ({ ...o, [k]: x }))} error={touched(k) ? errors[k] : undefined} />
+  const n = (k: NumKey, label: string, hint?: string) => (
+    <Field id={`coil-${k}`} label={label} hint={hint} inputMode="decimal" error={formState.errors[k]?.message} {...register(k, { setValueAs: toNumber(), deps: DEPS[k] })} />
   );
   return (
     <CalcCard
@@ -29,7 +39,7 @@ export function CoilSpringTool() {
         {n("totalCoils", "Total coils")}
         <label className="flex flex-col gap-1 text-sm font-medium">
           End type
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={v.endType as string} onChange={(e) => setV((o) => ({ ...o, endType: e.target.value as EndType }))}>
+          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("endType", { deps: ["totalCoils"] })}>
             {Object.entries(END_TYPES).map(([k, t]) => <option key={k} value={k}>{t.label}</option>)}
           </select>
         </label>

@@ -1,19 +1,29 @@
 "use client";
 
-import { useState } from "react";
-import { NumInput } from "@/components/catalog/num-input";
-import { issuesByPath } from "@/components/catalog/form-utils";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useForm, useWatch } from "react-hook-form";
+import type { z } from "zod";
+import { Field } from "@/components/ui/field";
+import { toNumber } from "@/components/ui/apply-server-errors";
 import { loadTestSchema } from "@/lib/validations/tools";
 import { CalcCard, Result } from "./calc-card";
 import { loadTestRate } from "./spring-math";
 
+type Schema = typeof loadTestSchema;
+type NumKey = Exclude<keyof z.input<Schema>, "forceUnit">;
+// The two-point checks land on the second length and second force: re-check them on any change.
+const DEPS: Record<NumKey, NumKey[]> = { length1Mm: ["length2Mm", "force2"], force1: ["force2"], length2Mm: ["force2"], force2: [] };
+
 export function LoadTestTool() {
-  const [v, setV] = useState<Record<string, unknown>>({ forceUnit: "N" });
-  const parsed = loadTestSchema.safeParse(v);
-  const errors = parsed.success ? {} : issuesByPath(parsed.error);
+  const { register, control, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+    resolver: zodResolver(loadTestSchema),
+    mode: "onChange",
+    defaultValues: { forceUnit: "N" },
+  });
+  const parsed = loadTestSchema.safeParse(useWatch({ control }));
   const rate = parsed.success ? loadTestRate(parsed.data) : null;
-  const n = (k: string, label: string) => (
-    <NumInput id={`lt-${k}`} label={label} value={v[k] as number | undefined} onChange={(x) => setV((o) => ({ ...o, [k]: x }))} error={v[k] !== undefined ? errors[k] : undefined} />
+  const n = (k: NumKey, label: string) => (
+    <Field id={`lt-${k}`} label={label} inputMode="decimal" error={formState.errors[k]?.message} {...register(k, { setValueAs: toNumber(), deps: DEPS[k] })} />
   );
   return (
     <CalcCard id="load-test-tool" title="Rate from a two-point load test" formula={<>k = (F₂ − F₁) / (L₁ − L₂), the slope between two points on the spring tester, lengths shortening as force rises.</>} source="Hooke's law for a linear spring (Shigley, Mechanical Engineering Design, §10-2); points taken well clear of coil bind and of the first few mm, common practice.">
@@ -24,7 +34,7 @@ export function LoadTestTool() {
         {n("force2", "Force at L₂")}
         <label className="flex flex-col gap-1 text-sm font-medium">
           Force unit
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={v.forceUnit as string} onChange={(e) => setV((o) => ({ ...o, forceUnit: e.target.value }))}>
+          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("forceUnit")}>
             <option value="N">N</option>
             <option value="kgf">kgf</option>
             <option value="lbf">lbf</option>
