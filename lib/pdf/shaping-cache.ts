@@ -1,0 +1,66 @@
+// Text shaping (fontkit's layout: Inter's contextual alternates, kerning) is the single most
+// expensive step of a sheet render, about half of it. Its result depends only on the font, the
+// string and the features, and most of every sheet is the same text (cautions, sag steps, labels,
+// chart ticks), so each loaded font keeps the runs it has shaped and gives them again, identical,
+// on later renders. react-pdf copies what it changes (positions are scaled into new objects, glyph
+// arrays are sliced or concatenated), so a run handed out twice is never altered in between.
+import { Font } from "@react-pdf/renderer";
+
+/** Per font; a run is a few hundred bytes, and the static text of a sheet is about 160 runs. */
+export const SHAPING_CACHE_LIMIT = 4000;
+
+type Layout = (text: string, features?: unknown, script?: string, language?: string, direction?: string) => unknown;
+interface ShapingFont {
+  layout: Layout;
+  [CACHED]?: Map<string, unknown>;
+}
+interface FontSourceLike {
+  data: unknown;
+  load(): Promise<void>;
+}
+
+const CACHED = Symbol("sagwise.shapingCache");
+
+function featureKey(features: unknown): string {
+  if (features === undefined || features === null) return "";
+  if (Array.isArray(features)) return features.length === 0 ? "" : `[${features.join(",")}]`;
+  // fontkit adds its defaults to a features object it is given, so the key is taken before the call.
+  return JSON.stringify(features);
+}
+
+/** Makes a loaded fontkit font reuse its shaped runs; calling it again on the same font does nothing. */
+export function cacheShaping(font: ShapingFont): Map<string, unknown> {
+  const existing = font[CACHED];
+  if (existing) return existing;
+  const cache = new Map<string, unknown>();
+  const layout = font.layout.bind(font);
+  font.layout = (text, features, script, language, direction) => {
+    if (typeof text !== "string") return layout(text, features, script, language, direction);
+    const key = `${featureKey(features)}\u0000${script ?? ""}\u0000${language ?? ""}\u0000${direction ?? ""}\u0000${text}`;
+    const hit = cache.get(key);
+    if (hit !== undefined) {
+      // Least recently used goes first once full: the sheet's own text stays, one-off notes leave.
+      cache.delete(key);
+      cache.set(key, hit);
+      return hit;
+    }
+    const run = layout(text, features, script, language, direction);
+    if (cache.size >= SHAPING_CACHE_LIMIT) cache.delete(cache.keys().next().value!);
+    cache.set(key, run);
+    return run;
+  };
+  font[CACHED] = cache;
+  return cache;
+}
+
+/** Loads every face of the given families (once per process) and turns on the shaping cache. */
+export async function prepareShaping(families: readonly string[]): Promise<void> {
+  const registered = Font.getRegisteredFonts() as Record<string, { sources: FontSourceLike[] }>;
+  for (const family of families) {
+    for (const source of registered[family]?.sources ?? []) {
+      await source.load();
+      // Checked on every render: a font loaded anew (after Font.reset) is a new object without a cache.
+      if (source.data && typeof (source.data as ShapingFont).layout === "function") cacheShaping(source.data as ShapingFont);
+    }
+  }
+}
