@@ -6,8 +6,13 @@
 // arrays are sliced or concatenated), so a run handed out twice is never altered in between.
 import { Font } from "@react-pdf/renderer";
 
-/** Per font; a run is a few hundred bytes, and the static text of a sheet is about 160 runs. */
-export const SHAPING_CACHE_LIMIT = 4000;
+/**
+ * Per font, in characters of kept runs (a shaped character is about 80 bytes, so a few MB at most);
+ * all the text of one sheet is under 5,000 characters.
+ */
+export const SHAPING_CACHE_CHARS = 50_000;
+/** Longer runs are one-off text (a tuner's long note): shaped every time, never kept. */
+export const SHAPING_CACHE_MAX_RUN = 500;
 
 type Layout = (text: string, features?: unknown, script?: string, language?: string, direction?: string) => unknown;
 interface ShapingFont {
@@ -33,9 +38,10 @@ export function cacheShaping(font: ShapingFont): Map<string, unknown> {
   const existing = font[CACHED];
   if (existing) return existing;
   const cache = new Map<string, unknown>();
+  let chars = 0;
   const layout = font.layout.bind(font);
   font.layout = (text, features, script, language, direction) => {
-    if (typeof text !== "string") return layout(text, features, script, language, direction);
+    if (typeof text !== "string" || text.length > SHAPING_CACHE_MAX_RUN) return layout(text, features, script, language, direction);
     const key = `${featureKey(features)}\u0000${script ?? ""}\u0000${language ?? ""}\u0000${direction ?? ""}\u0000${text}`;
     const hit = cache.get(key);
     if (hit !== undefined) {
@@ -45,8 +51,14 @@ export function cacheShaping(font: ShapingFont): Map<string, unknown> {
       return hit;
     }
     const run = layout(text, features, script, language, direction);
-    if (cache.size >= SHAPING_CACHE_LIMIT) cache.delete(cache.keys().next().value!);
+    // The text is the tail of its key, so a key's length stands in for the run's size.
+    for (const oldest of cache.keys()) {
+      if (chars + key.length <= SHAPING_CACHE_CHARS) break;
+      cache.delete(oldest);
+      chars -= oldest.length;
+    }
     cache.set(key, run);
+    chars += key.length;
     return run;
   };
   font[CACHED] = cache;

@@ -9,7 +9,7 @@ import { renderSetupSheet } from "@/lib/pdf";
 import { demoSheetData } from "@/lib/pdf/demo-data";
 import { SHEET_FONT, registerSheetFonts } from "@/lib/pdf/fonts";
 import { SetupSheet } from "@/lib/pdf/setup-sheet";
-import { SHAPING_CACHE_LIMIT, cacheShaping } from "@/lib/pdf/shaping-cache";
+import { SHAPING_CACHE_CHARS, SHAPING_CACHE_MAX_RUN, cacheShaping } from "@/lib/pdf/shaping-cache";
 
 function fakeFont() {
   const calls: unknown[][] = [];
@@ -53,18 +53,34 @@ describe("shaping cache on a font", () => {
     expect(calls).toHaveLength(1);
   });
 
-  it("drops the least recently used run once full", () => {
+  it("drops the least recently used runs once full", () => {
     const { font, calls } = fakeFont();
     const cache = cacheShaping(font);
-    for (let i = 0; i < SHAPING_CACHE_LIMIT; i++) font.layout(`run ${i}`);
-    font.layout("run 0"); // used again: now the most recent
-    font.layout("one more");
-    expect(cache.size).toBe(SHAPING_CACHE_LIMIT);
+    // Each key is the text and four separators: 100 runs of 496 characters fill it exactly.
+    const run = (i: number) => `${String(i).padStart(3, "0")} `.padEnd(496, "x");
+    const fit = SHAPING_CACHE_CHARS / 500;
+    for (let i = 0; i < fit; i++) font.layout(run(i));
+    expect(cache.size).toBe(fit);
+    font.layout(run(0)); // used again: now the most recent
+    font.layout(run(fit)); // one more: the oldest, run 1, makes room
+    expect(cache.size).toBe(fit);
     const before = calls.length;
-    font.layout("run 0");
+    font.layout(run(0));
+    font.layout(run(2));
     expect(calls.length).toBe(before);
-    font.layout("run 1"); // the oldest, dropped for "one more"
+    font.layout(run(1));
     expect(calls.length).toBe(before + 1);
+  });
+
+  it("never keeps a run longer than the limit (a long note is shaped each time)", () => {
+    const { font, calls } = fakeFont();
+    const cache = cacheShaping(font);
+    const note = "Ride two sessions, then re-check race sag. ".repeat(20);
+    expect(note.length).toBeGreaterThan(SHAPING_CACHE_MAX_RUN);
+    font.layout(note);
+    font.layout(note);
+    expect(calls).toHaveLength(2);
+    expect(cache.size).toBe(0);
   });
 });
 
