@@ -1,6 +1,9 @@
 // Setup sheet benchmark: median time to render one sheet (invented data, generic bike class) against
 // a baseline measured in the same run, a one-line react-pdf document with the same fonts. Target:
 // ≤ 300 ms per sheet on the reference machine. Prints only; never asserts on time.
+// After the warm-up the shaping cache (lib/pdf/shaping-cache.ts) holds every run of the sheet, as a
+// running server does for the fixed text of every sheet; a sheet with new figures and names shapes
+// those few runs again, so it takes somewhat longer than this median.
 // Run: npx tsx bench/sheet.ts
 import { Document, Page, Text, renderToBuffer } from "@react-pdf/renderer";
 import { createElement as h } from "react";
