@@ -141,13 +141,5 @@ export function TextAreaField({ id, label, register, error, hint, ...rest }: Tex
   );
 }
 
-/** Reads a nested error message by dotted path from react-hook-form's errors object. */
-export function errorAt(errors: unknown, path: string): string | undefined {
-  let node: unknown = errors;
-  for (const key of path.split(".")) {
-    if (!node || typeof node !== "object") return undefined;
-    node = (node as Record<string, unknown>)[key];
-  }
-  const message = node && typeof node === "object" ? (node as { message?: unknown }).message : undefined;
-  return typeof message === "string" ? message : undefined;
-}
+/** Nested error messages by dotted path: the one reader shared with the shop's forms. */
+export { errorAt } from "@/components/ui/apply-server-errors";
