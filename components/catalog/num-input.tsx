@@ -1,6 +1,7 @@
 "use client";
 
 import { useState } from "react";
+import { describedByFor } from "@/components/ui/field";
 
 interface NumInputProps {
   id: string;
@@ -24,7 +25,7 @@ export function NumInput({ id, label, value, onChange, error, hint, step = "any"
     const parsed = text.trim() === "" ? undefined : Number(text.trim().replace(",", "."));
     if (!Object.is(parsed, value ?? undefined)) setText(value === undefined || value === null ? "" : String(value));
   }
-  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ");
+  const describedBy = describedByFor(id, hint, error);
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={id} className="text-sm font-medium text-stone-800">{label}</label>
@@ -35,7 +36,7 @@ export function NumInput({ id, label, value, onChange, error, hint, step = "any"
         step={step}
         value={text}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy || undefined}
+        aria-describedby={describedBy}
         onChange={(e) => {
           setText(e.target.value);
           const t = e.target.value.trim().replace(",", ".");

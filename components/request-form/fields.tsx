@@ -2,15 +2,9 @@
 // its unit, and a text area. Every input has a label; errors are tied with aria-describedby.
 import type { InputHTMLAttributes, ReactNode, TextareaHTMLAttributes } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
+import { ErrorText, FieldNotes, describedByFor } from "@/components/ui/field";
 
-export function ErrorText({ id, message }: { id: string; message?: string }) {
-  if (!message) return null;
-  return (
-    <p id={id} role="alert" className="text-sm font-medium text-red-700">
-      {message}
-    </p>
-  );
-}
+export { ErrorText };
 
 interface ChoiceGroupProps {
   name: string;
@@ -77,7 +71,7 @@ interface MeasureFieldProps extends Omit<InputHTMLAttributes<HTMLInputElement>, 
 }
 
 export function MeasureField({ id, label, register, error, hint, unit, ...input }: MeasureFieldProps) {
-  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ");
+  const describedBy = describedByFor(id, hint, error);
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-medium text-stone-800">
@@ -90,19 +84,14 @@ export function MeasureField({ id, label, register, error, hint, unit, ...input 
           inputMode="decimal"
           autoComplete="off"
           aria-invalid={error ? true : undefined}
-          aria-describedby={describedBy || undefined}
+          aria-describedby={describedBy}
           className="min-h-11 w-full min-w-0 rounded-lg border border-stone-300 bg-white px-3 py-2 text-base aria-[invalid=true]:border-red-600"
           {...input}
           {...register}
         />
         {unit}
       </div>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-stone-600">
-          {hint}
-        </p>
-      ) : null}
-      <ErrorText id={`${id}-error`} message={error} />
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }
@@ -116,7 +105,7 @@ interface TextAreaFieldProps extends Omit<TextareaHTMLAttributes<HTMLTextAreaEle
 }
 
 export function TextAreaField({ id, label, register, error, hint, ...rest }: TextAreaFieldProps) {
-  const describedBy = [hint ? `${id}-hint` : null, error ? `${id}-error` : null].filter(Boolean).join(" ");
+  const describedBy = describedByFor(id, hint, error);
   return (
     <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-sm font-medium text-stone-800">
@@ -126,17 +115,12 @@ export function TextAreaField({ id, label, register, error, hint, ...rest }: Tex
         id={id}
         rows={4}
         aria-invalid={error ? true : undefined}
-        aria-describedby={describedBy || undefined}
+        aria-describedby={describedBy}
         className="w-full rounded-lg border border-stone-300 bg-white px-3 py-2 text-base aria-[invalid=true]:border-red-600"
         {...rest}
         {...register}
       />
-      {hint ? (
-        <p id={`${id}-hint`} className="text-sm text-stone-600">
-          {hint}
-        </p>
-      ) : null}
-      <ErrorText id={`${id}-error`} message={error} />
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }
