@@ -13,12 +13,17 @@ export function RateBasisInput({ value, onChange, used }: { value: RateBasis | "
         onChange={(e) => onChange(e.target.value as RateBasis | "")}
       >
         <option value="">Shop default{used && !value ? ` (${RATE_BASIS_LABELS[used].split(" — ")[0]})` : ""}</option>
-        {RATE_BASES.map((b) => (
-          <option key={b} value={b}>
-            {RATE_BASIS_LABELS[b]}
-          </option>
-        ))}
+        <RateBasisOptions />
       </select>
     </label>
   );
+}
+
+/** One option per basis, in the shop's words; shared with the setup-targets editor. */
+export function RateBasisOptions() {
+  return RATE_BASES.map((b) => (
+    <option key={b} value={b}>
+      {RATE_BASIS_LABELS[b]}
+    </option>
+  ));
 }

@@ -13,8 +13,8 @@ import { applyServerErrors, toNumber } from "@/components/ui/apply-server-errors
 import { NumInput } from "@/components/catalog/num-input";
 import { callApi } from "@/components/catalog/form-utils";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
-import { RATE_BASES, type Discipline, type SkillLevel } from "@/lib/sizing";
-import { RATE_BASIS_LABELS } from "@/components/request-form/labels";
+import type { Discipline, SkillLevel } from "@/lib/sizing";
+import { RateBasisOptions } from "@/components/review/rate-basis-input";
 import { targetRowValuesSchema } from "@/lib/validations/targets";
 import { TargetPreview, type PreviewBike } from "./target-preview";
 
@@ -102,11 +102,7 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
         <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
           How the spring rate is found
           <select id="rateBasis" className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("rateBasis", { setValueAs: (v) => v || undefined })}>
-            {RATE_BASES.map((b) => (
-              <option key={b} value={b}>
-                {RATE_BASIS_LABELS[b]}
-              </option>
-            ))}
+            <RateBasisOptions />
           </select>
         </label>
       </div>

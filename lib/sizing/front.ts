@@ -1,5 +1,5 @@
 import type { BikeSpec } from "./bike-schema";
-import type { FrontResult, SizingWarning } from "./output-schema";
+import type { FrontResult } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { sprungLegsOf } from "./bike-schema";
 import {
@@ -15,7 +15,8 @@ import {
   springVolumeMm3,
   type CoilFork,
 } from "./fork";
-import { evaluateCandidate, idealToOrder, selectNearest, selectRate, type EndModel } from "./selection";
+import type { EndModel } from "./selection";
+import { chooseByBasis } from "./basis-choice";
 import { airSpringChargeForLoad, airSpringForce, airSpringPositivePressure, airSpringRate, type AirSpring } from "./air";
 import { firstCrossing } from "./solve";
 import { naturalFrequencyOf } from "./frequency";
@@ -93,26 +94,27 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const m0 = modelAt(h0);
 
   const sagOnlyRateNmm = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm).rateNmm;
-  const windowIdeal = idealToOrder(sagOnlyRateNmm * c.rateFactor, m0, W.raceN, t.raceSagMm, limits);
-  const windowPreload = forkPreloadForSag(fk, windowIdeal.rateNmm, h0, W.raceN, t.raceSagMm);
-  const preferStaticMm = c.rateFactor === 1 && !windowIdeal.limitedBy ? mid : m0.solveSag(windowIdeal.rateNmm, windowPreload, W.staticN).sagMm;
-  const windowSel = selectRate(m0, c.stockRatesNmm, windowIdeal.rateNmm, W, t, limits, preferStaticMm);
   const freq = matchForkFrequency(fk, h0, stockRate, c.referenceLoads.frontRaceN, W.raceN, t.raceSagMm, loads.cosRake, c.rateFactor);
-  const freqIdeal = freq.rateNmm !== null ? idealToOrder(freq.rateNmm, m0, W.raceN, t.raceSagMm, limits) : null;
-  const freqSel = freqIdeal ? selectNearest(m0, c.stockRatesNmm, freqIdeal.rateNmm, W, t, limits) : null;
-  const basis = freqIdeal ? c.basis : "sag-window";
-  const ideal = basis === "ride-frequency" && freqIdeal ? freqIdeal : windowIdeal;
+  const choice = chooseByBasis({
+    m: m0,
+    loads: W,
+    targets: t,
+    limits,
+    rateFactor: c.rateFactor,
+    sagOnlyRateNmm,
+    preferStaticFor: (wi) =>
+      c.rateFactor === 1 && !wi.limitedBy ? mid : m0.solveSag(wi.rateNmm, forkPreloadForSag(fk, wi.rateNmm, h0, W.raceN, t.raceSagMm), W.staticN).sagMm,
+    freq,
+    basis: c.basis,
+    stockRatesNmm: c.stockRatesNmm,
+    overrideRateNmm: ov?.rateNmm,
+  });
+  const { basis, ideal, sel } = choice;
   const idealRateNmm = ideal.rateNmm;
   const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
-  const sel =
-    ov?.rateNmm !== undefined
-      ? { chosen: evaluateCandidate(m0, ov.rateNmm, W, t, limits), source: "override" as const }
-      : basis === "ride-frequency" && freqSel
-        ? freqSel
-        : windowSel;
   const k = sel.chosen.rateNmm;
   reasons.push(`Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; rates are per leg, ${fk.sprungLegs} sprung.`);
-  basisReasons("front", basis, freq, freqIdeal?.rateNmm ?? null, windowIdeal.rateNmm, sagOnlyRateNmm, t, mid, c.rateFactor, bike.referenceRiderMassKg, reasons);
+  basisReasons("front", choice, freq, sagOnlyRateNmm, t, mid, c.rateFactor, bike.referenceRiderMassKg, reasons);
   limitNotes("FRONT", "front", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * c.rateFactor, idealPreloadMm, t, mid, warnings, reasons, basis);
   describeSource("FRONT", "fork spring", sel.source, k, idealRateNmm, warnings, reasons);
 
@@ -155,7 +157,7 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const race = solveForkSag(fk, k, preloadMm, h, W.raceN);
   const stat = solveForkSag(fk, k, preloadMm, h, W.staticN);
   const clamped = ov?.preloadMm === undefined && preloadMm !== neededMm;
-  sagWarnings("FRONT", "front", race, stat, t, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : windowSel.chosen.rateNmm });
+  sagWarnings("FRONT", "front", race, stat, t, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
 
   const neighbours = [h - OIL_LEVEL_STEP_MM, h, h + OIL_LEVEL_STEP_MM].filter((x) => x >= f.oilLevelMinMm && x <= f.oilLevelMaxMm && hasAir(x));
   if (!neighbours.includes(h)) neighbours.splice(0, 0, h);
@@ -189,14 +191,7 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     wheelRateAtSagNmm: wheelRate,
     sprungMassKg,
     naturalFrequencyHz: naturalFrequencyOf(wheelRate, sprungMassKg),
-    rateBasis: {
-      used: basis,
-      rideFrequency:
-        freqIdeal && freqSel
-          ? { idealRateNmm: freqIdeal.rateNmm, chosenRateNmm: freqSel.chosen.rateNmm, referenceFrequencyHz: freq.referenceFrequencyHz, targetFrequencyHz: freq.targetFrequencyHz }
-          : null,
-      sagWindow: { idealRateNmm: windowIdeal.rateNmm, chosenRateNmm: windowSel.chosen.rateNmm },
-    },
+    rateBasis: choice.result,
     springVolumeMm3: springVolumeMm3(fk, k),
     bottomPressureMpaAbs: forkBottomPressureMpa(fk, k, h, FAST),
     negativeChamber: null,

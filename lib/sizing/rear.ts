@@ -3,7 +3,8 @@ import type { Loads } from "./loads";
 import type { RearResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { twoSagRate, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
-import { evaluateCandidate, idealToOrder, selectNearest, selectRate, type EndModel, type IdealToOrder, type Limits, type SagTargetsMm } from "./selection";
+import type { EndModel, IdealToOrder, Limits, SagTargetsMm } from "./selection";
+import { chooseByBasis, type BasisChoice } from "./basis-choice";
 import { matchRearFrequency, type FrequencyMatch } from "./rate-basis";
 import type { RateBasis } from "./vocab";
 import { naturalFrequencyOf } from "./frequency";
@@ -43,30 +44,30 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
 
   // Both bases, always: the one used sizes the spring, the other is shown beside it.
   const sagOnlyRateNmm = twoSagRate(L, W.staticN, W.raceN, mid, targets.raceSagMm);
-  const windowIdeal = idealToOrder(sagOnlyRateNmm * rateFactor, m, W.raceN, targets.raceSagMm, limits);
-  const windowPreload = preloadForSag(L, windowIdeal.rateNmm, W.raceN, targets.raceSagMm);
-  const preferStaticMm =
-    rateFactor === 1 && !windowIdeal.limitedBy ? mid : solveSag(L, windowIdeal.rateNmm, windowPreload, W.staticN, r.wheelTravelMm).sagMm;
-  const windowSel = selectRate(m, c.stockRatesNmm, windowIdeal.rateNmm, W, targets, limits, preferStaticMm);
   const freq = matchRearFrequency(L, r.stockRateNmm, c.referenceLoads.rearRaceN, W.raceN, targets.raceSagMm, rateFactor);
-  const freqIdeal = freq.rateNmm !== null ? idealToOrder(freq.rateNmm, m, W.raceN, targets.raceSagMm, limits) : null;
-  const freqSel = freqIdeal ? selectNearest(m, c.stockRatesNmm, freqIdeal.rateNmm, W, targets, limits) : null;
-  const basis = freqIdeal ? c.basis : "sag-window";
-  const ideal = basis === "ride-frequency" && freqIdeal ? freqIdeal : windowIdeal;
+  const choice = chooseByBasis({
+    m,
+    loads: W,
+    targets,
+    limits,
+    rateFactor,
+    sagOnlyRateNmm,
+    // With a rate factor of 1 and no limit this is the window's middle; otherwise where the ideal puts it.
+    preferStaticFor: (wi) =>
+      rateFactor === 1 && !wi.limitedBy ? mid : solveSag(L, wi.rateNmm, preloadForSag(L, wi.rateNmm, W.raceN, targets.raceSagMm), W.staticN, r.wheelTravelMm).sagMm,
+    freq,
+    basis: c.basis,
+    stockRatesNmm: c.stockRatesNmm,
+    overrideRateNmm: ov?.rateNmm,
+  });
+  const { basis, ideal, sel } = choice;
   const idealRateNmm = ideal.rateNmm;
   const idealPreloadMm = preloadForSag(L, idealRateNmm, W.raceN, targets.raceSagMm);
-
-  const sel =
-    ov?.rateNmm !== undefined
-      ? { chosen: evaluateCandidate(m, ov.rateNmm, W, targets, limits), source: "override" as const }
-      : basis === "ride-frequency" && freqSel
-        ? freqSel
-        : windowSel;
   const k = sel.chosen.rateNmm;
   reasons.push(
     `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone.`,
   );
-  basisReasons("rear", basis, freq, freqIdeal?.rateNmm ?? null, windowIdeal.rateNmm, sagOnlyRateNmm, targets, mid, rateFactor, bike.referenceRiderMassKg, reasons);
+  basisReasons("rear", choice, freq, sagOnlyRateNmm, targets, mid, rateFactor, bike.referenceRiderMassKg, reasons);
   limitNotes("REAR", "rear", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * rateFactor, idealPreloadMm, targets, mid, warnings, reasons, basis);
   describeSource("REAR", "shock spring", sel.source, k, idealRateNmm, warnings, reasons);
 
@@ -79,7 +80,7 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
   const race = solveSag(L, k, preloadMm, W.raceN, r.wheelTravelMm);
   const stat = solveSag(L, k, preloadMm, W.staticN, r.wheelTravelMm);
   const clamped = ov?.preloadMm === undefined && !sel.chosen.preloadOk;
-  sagWarnings("REAR", "rear", race, stat, targets, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : windowSel.chosen.rateNmm });
+  sagWarnings("REAR", "rear", race, stat, targets, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
 
   const forceCurve = [];
   for (let i = 0; i < CURVE_POINTS; i++) {
@@ -105,24 +106,15 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
     wheelRateAtSagNmm: wheelRate,
     sprungMassKg,
     naturalFrequencyHz: naturalFrequencyOf(wheelRate, sprungMassKg),
-    rateBasis: {
-      used: basis,
-      rideFrequency:
-        freqIdeal && freqSel
-          ? { idealRateNmm: freqIdeal.rateNmm, chosenRateNmm: freqSel.chosen.rateNmm, referenceFrequencyHz: freq.referenceFrequencyHz, targetFrequencyHz: freq.targetFrequencyHz }
-          : null,
-      sagWindow: { idealRateNmm: windowIdeal.rateNmm, chosenRateNmm: windowSel.chosen.rateNmm },
-    },
+    rateBasis: choice.result,
   };
 }
 
 /** Say how the ideal came about under the basis used, and what the other basis asks for. */
 export function basisReasons(
   end: "rear" | "front",
-  basis: RateBasis,
+  choice: BasisChoice,
   freq: FrequencyMatch,
-  freqIdealNmm: number | null,
-  windowIdealNmm: number,
   sagOnlyNmm: number,
   t: SagTargetsMm,
   staticMidMm: number,
@@ -131,6 +123,9 @@ export function basisReasons(
   reasons: string[],
 ): void {
   const End = end === "rear" ? "Rear" : "Front";
+  const { basis } = choice;
+  const freqIdealNmm = choice.result.rideFrequency?.idealRateNmm ?? null;
+  const windowIdealNmm = choice.windowIdeal.rateNmm;
   const factor = rateFactor !== 1 ? ` × ${fmt(rateFactor, 3)} for skill, style, discipline and jumps` : "";
   const freqText =
     freqIdealNmm !== null

@@ -78,12 +78,17 @@ export function selectRate(
     if (!best || Math.abs(c.static.sagMm - preferStaticMm) < Math.abs(best.static.sagMm - preferStaticMm)) best = c;
   }
   if (best) return { chosen: best, source: "stock", tried };
-  let nearest: Candidate | undefined;
-  for (const c of tried)
-    if (!nearest || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(nearest.rateNmm / idealRateNmm)))
-      nearest = c;
+  const nearest = nearestByRatio(tried, idealRateNmm);
   if (nearest) return { chosen: nearest, source: "stock-nearest", tried };
   return { chosen: evaluateCandidate(m, idealRateNmm, loads, t, limits), source: "order", tried };
+}
+
+/** The candidate whose rate is nearest the ideal by ratio (shelf steps are roughly proportional). */
+function nearestByRatio(cs: readonly Candidate[], idealRateNmm: number): Candidate | undefined {
+  let best: Candidate | undefined;
+  for (const c of cs)
+    if (!best || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(best.rateNmm / idealRateNmm))) best = c;
+  return best;
 }
 
 export interface IdealToOrder {
@@ -124,15 +129,9 @@ export function selectNearest(
   limits: Limits,
 ): Selection {
   const tried = stockRatesNmm.map((k) => evaluateCandidate(m, k, loads, t, limits));
-  const nearestOf = (cs: Candidate[]) => {
-    let best: Candidate | undefined;
-    for (const c of cs)
-      if (!best || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(best.rateNmm / idealRateNmm))) best = c;
-    return best;
-  };
-  const fit = nearestOf(tried.filter((c) => c.preloadOk));
+  const fit = nearestByRatio(tried.filter((c) => c.preloadOk), idealRateNmm);
   if (fit) return { chosen: fit, source: "stock", tried };
-  const nearest = nearestOf(tried);
+  const nearest = nearestByRatio(tried, idealRateNmm);
   if (nearest) return { chosen: nearest, source: "stock-nearest", tried };
   return { chosen: evaluateCandidate(m, idealRateNmm, loads, t, limits), source: "order", tried };
 }
