@@ -25,6 +25,14 @@ export const clickerRangeSchema = z
       ctx.addIssue({ code: "custom", path: ["stock"], message: "Stock position must lie within min..max" });
   });
 
+/** Fitted from the shop's sag reports on this model (calibration.ts): sprung masses and rider share. */
+export const calibrationParametersSchema = z.object({
+  rearSprungKg: z.number().positive().max(300),
+  frontSprungKg: z.number().positive().max(300),
+  riderRearShare: z.number().min(0.3).max(0.95),
+});
+export type CalibrationParameters = z.output<typeof calibrationParametersSchema>;
+
 export const bikeSpecSchema = z
   .object({
     /** Ready-to-ride mass, fluids and fuel in. */
@@ -83,6 +91,8 @@ export const bikeSpecSchema = z
         })
         .optional(),
     }),
+    /** Applied by the admin from the shop's sag reports; replaces the weight-split loads. */
+    calibration: calibrationParametersSchema.extend({ reports: z.number().int().min(1).max(100_000) }).optional(),
     clickers: z.object({
       forkCompression: clickerRangeSchema,
       forkRebound: clickerRangeSchema,

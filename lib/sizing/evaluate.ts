@@ -60,8 +60,12 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
       field: "rider.massKg",
     });
   reasons.push(
-    `Rider ${fmt(rt.riderMassWithGearKg, 1)} kg with gear${inp.rider.gearIncluded ? " (as given)" : ` (${inp.rider.massKg} kg + ${inp.shop.gearMassKg} kg gear)`}, ${fmt(rt.riderRearShare * 100, 0)} % on the rear in the sag stance.`,
+    `Rider ${fmt(rt.riderMassWithGearKg, 1)} kg with gear${inp.rider.gearIncluded ? " (as given)" : ` (${inp.rider.massKg} kg + ${inp.shop.gearMassKg} kg gear)`}, ${fmt(loads.riderRearShare * 100, 0)} % on the rear in the sag stance.`,
   );
+  if (bike.calibration)
+    reasons.push(
+      `Loads calibrated from ${bike.calibration.reports} sag report${bike.calibration.reports === 1 ? "" : "s"} on this model: ${fmt(bike.calibration.rearSprungKg, 1)} kg sprung at the rear and ${fmt(bike.calibration.frontSprungKg, 1)} kg at the front with the bike alone.`,
+    );
 
   const basis = ov.rateBasis ?? rt.rateBasis;
   const common = { bike, loads, referenceLoads, rateFactor: rt.rateFactor, basis, warnings, reasons };
@@ -118,7 +122,8 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
     input: inp,
     resolved: {
       riderMassWithGearKg: rt.riderMassWithGearKg,
-      riderRearShare: rt.riderRearShare,
+      riderRearShare: loads.riderRearShare,
+      calibration: bike.calibration ? { reports: bike.calibration.reports } : undefined,
       rateFactor: rt.rateFactor,
       bottomingFactor: rt.bottomingFactor,
       rateBasis: basis,

@@ -60,4 +60,14 @@ export {
 } from "./units";
 export { naturalFrequencyHz } from "./frequency";
 export { sagVerdict, measuredSagSchema, type SagVerdict } from "./verdict";
+export {
+  fitCalibration,
+  catalogParameters,
+  calibrationReportSchema,
+  MIN_CALIBRATION_REPORTS,
+  MAX_CALIBRATION_SCATTER,
+  type CalibrationReport,
+  type CalibrationFit,
+} from "./calibration";
+export { calibrationParametersSchema, type CalibrationParameters } from "./bike-schema";
 export * as sizingDefaults from "./defaults";

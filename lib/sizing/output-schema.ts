@@ -129,6 +129,8 @@ export const recommendationSchema = z.object({
     rateFactor: num,
     bottomingFactor: num,
     rateBasis: rateBasisSchema.optional(),
+    /** Loads from a calibration fitted to this many of the shop's sag reports on the model. */
+    calibration: z.object({ reports: num }).optional(),
     loads: z.object({ rearStaticN: num, rearRaceN: num, frontStaticN: num, frontRaceN: num }),
     frequencyRatioWindow: z.object({ min: num, max: num }),
   }),
