@@ -2,3 +2,4 @@
 export * from "./tables/auth";
 export * from "./tables/shop";
 export * from "./tables/requests";
+export * from "./tables/calibration";
