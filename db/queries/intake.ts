@@ -5,6 +5,7 @@ import { getDb } from "@/db/client";
 import { containsPattern } from "./like";
 import { auditEvents, bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { createStatusLink } from "./status-links";
+import { specCalibrationFor } from "./calibrations";
 import { bikeSpecSchema, type BikeSpecInput, type Recommendation, type SizingInput } from "@/lib/sizing";
 
 /** The active catalog (retired models hidden), optionally filtered by a name or class fragment. */
@@ -41,14 +42,18 @@ export interface CatalogBike {
   spec: BikeSpecInput;
 }
 
-/** A model the rider picked, only if it is still in the active catalog. */
+/**
+ * A model the rider picked, only if it is still in the active catalog, with the calibration the
+ * admin applied to it (if any) in place of whatever the stored spec says.
+ */
 export async function findActiveBike(id: string): Promise<CatalogBike | null> {
   const db = await getDb();
   const [row] = await db
     .select({ id: bikeModels.id, name: bikeModels.name, bikeClass: bikeModels.bikeClass, spec: bikeModels.spec })
     .from(bikeModels)
     .where(and(eq(bikeModels.id, id), isNull(bikeModels.retiredAt)));
-  return row ? { ...row, spec: bikeSpecSchema.parse(row.spec) } : null;
+  if (!row) return null;
+  return { ...row, spec: { ...bikeSpecSchema.parse(row.spec), calibration: await specCalibrationFor(row.id) } };
 }
 
 /**
@@ -64,7 +69,8 @@ export async function findNearestGenericBike(rearWheelTravelMm: number): Promise
     .where(isNull(bikeModels.retiredAt))
     .orderBy(sql`case when ${bikeModels.isTypical} then 0 else 1 end`, asc(distance), asc(bikeModels.slug))
     .limit(1);
-  return row ? { ...row, spec: bikeSpecSchema.parse(row.spec) } : null;
+  // Not this model's bike: its calibration (fitted to that model's own reports) does not apply.
+  return row ? { ...row, spec: { ...bikeSpecSchema.parse(row.spec), calibration: undefined } } : null;
 }
 
 export interface NewSetupRequest {

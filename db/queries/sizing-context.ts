@@ -4,6 +4,7 @@
 import { and, asc, eq, gt } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { bikeModels, clickerRules, setupTargets, shopSettings, springStock } from "@/db/schema";
+import { specCalibrationFor } from "./calibrations";
 import type { ShopSizingContext, TargetRowValues } from "@/lib/requests/sizing-input";
 import {
   bikeSpecSchema,
@@ -22,7 +23,8 @@ export async function loadBikeSpec(bikeModelId: string): Promise<{ name: string;
     .from(bikeModels)
     .where(eq(bikeModels.id, bikeModelId));
   if (!row) return null;
-  return { name: row.name, bikeClass: row.bikeClass, spec: bikeSpecSchema.parse(row.spec) };
+  // The admin's applied calibration, not whatever the stored spec says, sets the loads.
+  return { name: row.name, bikeClass: row.bikeClass, spec: { ...bikeSpecSchema.parse(row.spec), calibration: await specCalibrationFor(bikeModelId) } };
 }
 
 export async function loadShopSizingContext(
