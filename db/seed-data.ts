@@ -38,6 +38,8 @@ export interface DemoRequest {
   question?: string;
   answer?: string;
   declineReason?: string;
+  /** The rider reported sag this many days after approval (readings: DEMO_CALIBRATION_TRUTH). */
+  sagReportDaysAfter?: number;
   answers: RequestAnswersInput;
 }
 
@@ -134,4 +136,25 @@ export const DEMO_REQUESTS: DemoRequest[] = [
     { discipline: "desert", terrain: ["sand", "rocky"], jumpSize: "medium", hoursPerMonth: 12 },
     { complaints: ["wallows"] },
     { tuner: "tuner2@sagwise.test", declineReason: "The fork has been converted to a cartridge we do not service; we can size the shock only." }),
+  // Sag reports on one model, for the calibration page: riders of many weights on the 125 class.
+  ...[
+    ["c01", 75, "Wren Halloway", "wren.halloway@example.test", 56, "novice"],
+    ["c02", 68, "Baptiste Oduya", "baptiste.oduya@example.test", 64, "intermediate"],
+    ["c03", 61, "Sunniva Kettleby", "sunniva.kettleby@example.test", 71, "advanced"],
+    ["c04", 54, "Idris Marlowe-Penn", "idris.mp@example.test", 79, "intermediate"],
+    ["c05", 47, "Noor Castellanos", "noor.castellanos@example.test", 87, "expert"],
+    ["c06", 40, "Emrys Tolliver", "emrys.tolliver@example.test", 96, "intermediate"],
+  ].map(([key, daysAgo, name, email, massKg, skill]) =>
+    request(key as string, "approved", daysAgo as number, "mx-125-2t",
+      { name: name as string, email: email as string, weight: kg(massKg as number), gearIncluded: false, skill: skill as Rider["skill"], style: "moderate" },
+      { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 10 },
+      { complaints: [] },
+      { tuner: "tuner@sagwise.test", sagReportDaysAfter: 6 })),
 ];
+
+/**
+ * The demo's 125 class is really this much heavier than its catalog entry (sprung mass per end,
+ * bike alone): the seeded sag readings are what riders would measure on such a bike, so the
+ * calibration page has something to fit. Invented.
+ */
+export const DEMO_CALIBRATION_TRUTH = { bikeClass: "mx-125-2t", extraRearSprungKg: 3, extraFrontSprungKg: 2 } as const;

@@ -9,6 +9,7 @@ import {
   clickerRules,
   recommendationVersions,
   requestMessages,
+  sagReports,
   setupRequests,
   setupTargets,
   shopSettings,
@@ -25,14 +26,19 @@ import {
   DISCIPLINES,
   SKILL_LEVELS,
   bikeSpecSchema,
+  catalogParameters,
+  evaluateSetup,
   recommend,
+  sagVerdict,
   sizingDefaults,
   type BikeSpecInput,
+  type Recommendation,
+  type SizingInput,
 } from "@/lib/sizing";
 import { requestAnswersSchema } from "@/lib/validations/request";
 import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
-import { DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, stableUuid, type DemoRequest } from "./seed-data";
+import { DEMO_CALIBRATION_TRUTH, DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, stableUuid, type DemoRequest } from "./seed-data";
 
 export { stableUuid };
 
@@ -117,6 +123,37 @@ async function seedCatalog(db: AppDb): Promise<Map<string, { id: string; name: s
   return bikes;
 }
 
+/**
+ * The sag a rider would read (whole mm) on the springs and settings of `output`, on a bike whose
+ * real sprung masses are DEMO_CALIBRATION_TRUTH's: the engine's own force law with those loads
+ * (the recommendation's settings given back as overrides, so only the loads change).
+ */
+function demoSagReading(input: SizingInput, output: Recommendation) {
+  const catalog = catalogParameters(input.bike);
+  const truth = {
+    ...catalog,
+    rearSprungKg: catalog.rearSprungKg + DEMO_CALIBRATION_TRUTH.extraRearSprungKg,
+    frontSprungKg: catalog.frontSprungKg + DEMO_CALIBRATION_TRUTH.extraFrontSprungKg,
+  };
+  const real = evaluateSetup(
+    { ...input, bike: { ...input.bike, calibration: { ...truth, reports: 1 } } },
+    {
+      rear: { rateNmm: output.rear.chosenRate.nMm, preloadMm: output.rear.preloadMm },
+      front: { rateNmm: output.front.chosenRate?.nMm, preloadMm: output.front.preloadMm ?? undefined, oilLevelMm: output.front.oilLevelMm ?? undefined },
+    },
+  );
+  const end = (p: { staticSagMm: number; raceSagMm: number }) => ({ static: Math.round(p.staticSagMm), race: Math.round(p.raceSagMm) });
+  const given = { rear: end(real.rear.predicted), front: end(real.front.predicted) };
+  const mm = {
+    rear: { freeMm: null, staticMm: given.rear.static, raceMm: given.rear.race },
+    front: { freeMm: null, staticMm: given.front.static, raceMm: given.front.race },
+  };
+  const verdict = Object.fromEntries(
+    (["front", "rear"] as const).map((e) => [e, sagVerdict({ input, recommendation: output, end: e, measured: { staticSagMm: mm[e].staticMm, raceSagMm: mm[e].raceMm } })]),
+  );
+  return { measured: { asGiven: { unit: "mm", ...given }, mm }, verdict };
+}
+
 async function seedRequest(
   db: AppDb,
   demo: DemoRequest,
@@ -196,6 +233,18 @@ async function seedRequest(
         detail: { version: 1 },
         createdAt: approvedAt,
       });
+    }
+    if (approved && demo.sagReportDaysAfter !== undefined) {
+      const reportedAt = new Date(approvedAt.getTime() + demo.sagReportDaysAfter * 86_400_000);
+      const sagReportId = stableUuid(`sag:${demo.key}`);
+      await tx.insert(sagReports).values({
+        id: sagReportId,
+        requestId: id,
+        versionId: stableUuid(`version:${demo.key}:1`),
+        ...demoSagReading(input, output),
+        createdAt: reportedAt,
+      });
+      events.push({ requestId: id, actorLabel: "rider", action: "sag.reported", detail: { sagReportId, version: 1 }, createdAt: reportedAt });
     }
     await tx.insert(auditEvents).values(events);
     if (demo.question && tuner) {
