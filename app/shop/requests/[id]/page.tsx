@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { AnswersPanel } from "@/components/review/answers-panel";
 import { EmailsPanel, MessagesPanel, PhotosPanel, SagReportsPanel } from "@/components/review/activity-panels";
 import { AuditTimeline } from "@/components/review/audit-timeline";
+import { CalibrationNote } from "@/components/review/calibration-note";
 import { RecommendationEditor } from "@/components/review/recommendation-editor";
 import { VersionPicker, sheetLinkFor } from "@/components/review/version-picker";
 import { VersionView } from "@/components/review/version-view";
@@ -49,6 +50,7 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         <p className="text-stone-700">
           {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {day.format(detail.createdAt)}
         </p>
+        {shown ? <CalibrationNote output={shown.output as Recommendation} /> : null}
         {detail.status === "declined" && detail.declineReason ? (
           <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm"><span className="font-semibold">Declined:</span> {detail.declineReason}</p>
         ) : null}
