@@ -1,5 +1,5 @@
 // The demo seed: complete, invented, and idempotent; and the staff queue over it.
-import { count, sql } from "drizzle-orm";
+import { count, eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as listRequests } from "@/app/api/requests/route";
 import { getDb } from "@/db/client";
@@ -22,6 +22,8 @@ const TABLES = {
   recommendationVersions: schema.recommendationVersions,
   requestMessages: schema.requestMessages,
   auditEvents: schema.auditEvents,
+  sagReports: schema.sagReports,
+  bikeCalibrations: schema.bikeCalibrations,
 };
 
 async function countAll() {
@@ -79,6 +81,24 @@ describe("demo seed", () => {
     expect(versions.filter((v) => v.state === "approved")).toHaveLength(
       DEMO_REQUESTS.filter((r) => r.status === "approved").length,
     );
+  });
+
+  it("gives one catalog model at least five sag reports, each on its approved version", async () => {
+    const db = await getDb();
+    const rows = await db
+      .select({ model: schema.setupRequests.bikeModelId, state: schema.recommendationVersions.state, measured: schema.sagReports.measured })
+      .from(schema.sagReports)
+      .innerJoin(schema.setupRequests, eq(schema.setupRequests.id, schema.sagReports.requestId))
+      .innerJoin(schema.recommendationVersions, eq(schema.recommendationVersions.id, schema.sagReports.versionId));
+    const perModel = new Map<string | null, number>();
+    for (const r of rows) perModel.set(r.model, (perModel.get(r.model) ?? 0) + 1);
+    expect(Math.max(...perModel.values())).toBeGreaterThanOrEqual(5);
+    expect(rows.every((r) => r.state === "approved")).toBe(true);
+    // Read like a rider reads a tape: whole millimetres.
+    for (const r of rows) {
+      const mm = (r.measured as { mm: Record<string, { staticMm: number; raceMm: number }> }).mm;
+      for (const end of Object.values(mm)) expect(Number.isInteger(end.staticMm) && Number.isInteger(end.raceMm)).toBe(true);
+    }
   });
 
   it("changes nothing when run a second time", async () => {
