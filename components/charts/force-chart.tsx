@@ -39,7 +39,10 @@ export function ForceChart({ spec, title, id }: { spec: ChartSpec; title: string
         </g>
         <line x1={g.plot.left} x2={g.plot.left} y1={g.plot.top} y2={g.plot.bottom} stroke="#78716c" />
         <line x1={g.plot.left} x2={g.plot.right} y1={g.plot.bottom} y2={g.plot.bottom} stroke="#78716c" />
-        {g.series.map((s) => (
+        {g.series.flatMap((s) =>
+          (s.dots ?? []).map((p, i) => <circle key={`${s.id}${i}`} cx={p.x} cy={p.y} r={4} fill={s.emphasis === "main" ? "#b45309" : "#a8a29e"} />),
+        )}
+        {g.series.filter((s) => !s.dots).map((s) => (
           <path
             key={s.id}
             d={s.d}
@@ -60,7 +63,7 @@ export function ForceChart({ spec, title, id }: { spec: ChartSpec; title: string
       </svg>
       <figcaption className="text-sm text-stone-700">
         <span className="font-medium">{title}.</span>{" "}
-        {g.series.map((s) => `${s.emphasis === "main" ? "solid" : "dashed"}: ${s.label}`).join("; ")}.
+        {g.series.map((s) => `${s.dots ? "dots" : s.emphasis === "main" ? "solid" : "dashed"}: ${s.label}`).join("; ")}.
       </figcaption>
     </figure>
   );

@@ -14,6 +14,8 @@ export interface ChartSeries {
   points: ChartPoint[];
   /** The main series is drawn solid; others (e.g. neighbouring oil levels) dashed. */
   emphasis: "main" | "secondary";
+  /** Separate readings (e.g. measured sag) are drawn as dots, not joined by a line. */
+  dots?: boolean;
 }
 
 export interface ChartMarker {
@@ -25,7 +27,7 @@ export interface ChartGeometry {
   width: number;
   height: number;
   plot: { left: number; top: number; right: number; bottom: number };
-  series: { id: string; label: string; emphasis: "main" | "secondary"; d: string }[];
+  series: { id: string; label: string; emphasis: "main" | "secondary"; d: string; dots?: { x: number; y: number }[] }[];
   xTicks: { value: number; position: number }[];
   yTicks: { value: number; position: number }[];
   markers: { label: string; position: number }[];
@@ -65,12 +67,11 @@ export function forceChartGeometry(spec: ChartSpec): ChartGeometry {
     width,
     height,
     plot: { left: MARGIN.left, top: MARGIN.top, right: width - MARGIN.right, bottom: height - MARGIN.bottom },
-    series: spec.series.map((s) => ({
-      id: s.id,
-      label: s.label,
-      emphasis: s.emphasis,
-      d: path.digits(2)(s.points) ?? "",
-    })),
+    series: spec.series.map((s) =>
+      s.dots
+        ? { id: s.id, label: s.label, emphasis: s.emphasis, d: "", dots: s.points.map((p) => ({ x: round(x(p.x)), y: round(y(p.y)) })) }
+        : { id: s.id, label: s.label, emphasis: s.emphasis, d: path.digits(2)(s.points) ?? "" },
+    ),
     xTicks: x.ticks(6).map((value) => ({ value, position: round(x(value)) })),
     yTicks: y.ticks(5).map((value) => ({ value, position: round(y(value)) })),
     markers: (spec.markers ?? [])
