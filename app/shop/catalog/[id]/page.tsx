@@ -14,7 +14,7 @@ export const dynamic = "force-dynamic";
 
 export default async function BikePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  await requireRole(STAFF_ROLES, { page: `/shop/catalog/${id}` });
+  const user = await requireRole(STAFF_ROLES, { page: `/shop/catalog/${id}` });
   if (!z.uuid().safeParse(id).success) notFound();
   const model = await getBikeModel(id);
   if (!model) notFound();
@@ -25,6 +25,11 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
         <h1 className="text-2xl font-bold">{model.name}</h1>
         <BikeActions id={model.id} retired={Boolean(model.retiredAt)} />
       </div>
+      {user.role === "admin" ? (
+        <Link href={`/shop/catalog/${model.id}/calibration`} className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">
+          Calibration from sag reports
+        </Link>
+      ) : null}
       {model.retiredAt ? (
         <p className="rounded-lg bg-stone-100 p-3 text-sm">
           Retired on {model.retiredAt.toISOString().slice(0, 10)}: riders no longer see it in the picker; requests that used it
