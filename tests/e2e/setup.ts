@@ -59,6 +59,8 @@ export default async function setup(project: TestProject) {
     MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
     // The browser tests run on the embedded database even when the shell points at PostgreSQL.
     DATABASE_URL: "",
+    // The browser tests send X-Forwarded-For as one proxy in front would (tests/e2e/browser.ts).
+    TRUST_PROXY_HOPS: "1",
   };
 
   const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "inherit" });
