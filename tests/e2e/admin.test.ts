@@ -79,8 +79,9 @@ describe("admin catalog", () => {
     await invite.getByRole("button", { name: "Send invitation" }).click();
     await expect.poll(() => page.getByRole("status").first().textContent()).toContain(`Invitation sent to ${email}`);
 
-    const messages = await mailFor(mailUrl, email);
-    expect(messages).toHaveLength(1);
+    // The outbox worker sends it just after the answer: wait for it to arrive.
+    let messages: Awaited<ReturnType<typeof mailFor>> = [];
+    await expect.poll(async () => (messages = await mailFor(mailUrl, email)).length).toBe(1);
     const link = /href="([^"]*\/invite\/[^"]+)"/.exec(messages[0]?.html ?? "")?.[1];
     expect(link, "the e-mail carries the invitation link").toBeTruthy();
 

@@ -66,8 +66,9 @@ describe("rider", () => {
     await rider.getByRole("button", { name: /sign-in link/ }).click();
     await expect.poll(() => page.getByRole("status").textContent()).toContain(email);
 
-    const messages = await mailFor(mailUrl, email);
-    expect(messages).toHaveLength(1);
+    // The outbox worker sends it just after the answer: wait for it to arrive.
+    let messages: Awaited<ReturnType<typeof mailFor>> = [];
+    await expect.poll(async () => (messages = await mailFor(mailUrl, email)).length).toBe(1);
     const html = messages[0]?.html ?? "";
     const link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(html)?.[1]?.replaceAll("&amp;", "&");
     expect(link, "the e-mail carries the sign-in link").toBeTruthy();

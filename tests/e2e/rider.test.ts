@@ -236,7 +236,8 @@ describe("accessibility of the public pages (axe-core)", () => {
     await rider.getByLabel(/E-mail/).fill(email);
     await rider.getByRole("button", { name: /sign-in link/ }).click();
     await expect.poll(() => page.getByRole("status").textContent()).toContain(email);
-    const [mail] = await mailFor(mailUrl, email);
+    let mail: Awaited<ReturnType<typeof mailFor>>[number] | undefined;
+    await expect.poll(async () => (mail = (await mailFor(mailUrl, email))[0])).toBeTruthy();
     const link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(mail?.html ?? "")?.[1]?.replaceAll("&amp;", "&");
     await page.goto(link!);
     await page.waitForURL(`${baseUrl}/my-requests`);

@@ -61,7 +61,7 @@ describe("shop workspace", () => {
 
     await page.getByRole("button", { name: /Save and approve/ }).click();
     await expect.poll(() => page.getByRole("status").filter({ hasText: "approved" }).first().textContent(), { timeout: 20_000 }).toContain(
-      "Version 1 approved. The rider was e-mailed the sheet link.",
+      "Version 1 approved. The rider is being e-mailed the sheet link (see E-mails below).",
     );
     await expect.poll(() => page.locator("header").getByText("Approved", { exact: true }).count()).toBe(1);
     await expect.poll(() => page.getByRole("link", { name: "Version 1: Approved" }).count()).toBe(1);
