@@ -4,10 +4,11 @@ import { z } from "zod";
 import { listActiveBikes } from "@/db/queries/intake";
 import { withErrors } from "@/lib/api/respond";
 import { publicRoute } from "@/lib/auth/guard";
+import { text } from "@/lib/validations/text";
 
 export const dynamic = "force-dynamic";
 
-const querySchema = z.object({ q: z.string().trim().max(60, "Keep the search under 60 characters").optional() });
+const querySchema = z.object({ q: text().trim().max(60, "Keep the search under 60 characters").optional() });
 
 export const GET = publicRoute(
   withErrors(async (request: Request) => {
