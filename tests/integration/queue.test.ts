@@ -164,16 +164,17 @@ describe("GET /api/requests over 10,000 requests", () => {
     expect(byNumber.body.items.map((r) => r.id)).toEqual([0, 4, 8, 12, 16, 20, 24, 28, 32, 36].map((i) => rows[i]!.id));
   });
 
-  it("counts every request per status (12 demo requests plus the bulk rows)", async () => {
+  it("counts every request per status (18 demo requests plus the bulk rows)", async () => {
     expect((await list({ pageSize: 1 })).body.counts).toBeUndefined();
     const { body } = await list({ pageSize: 1, counts: 1 });
-    expect(body.total).toBe(N + 12);
-    // Demo (db/seed-data.ts): 3 submitted, 3 in review, 2 waiting, 3 approved, 1 declined.
+    expect(body.total).toBe(N + 18);
+    // Demo (db/seed-data.ts): 3 submitted, 3 in review, 2 waiting, 9 approved (6 of them the 125's
+    // with sag reports), 1 declined.
     expect(body.counts).toEqual({
       submitted: 2000 + 3,
       in_review: 2000 + 3,
       waiting_for_rider: 2000 + 2,
-      approved: 2000 + 3,
+      approved: 2000 + 9,
       declined: 2000 + 1,
     });
   });
