@@ -3,7 +3,8 @@
 // an atomically created lock folder (`<dataDir>.lock`) whose mtime the holder refreshes every
 // second. A holder that dies, even by SIGKILL, stops refreshing, so its lock goes stale after
 // LOCK_STALE_MS and the next process takes it; no pid is trusted (a pid can be reused). Next to it,
-// `<dataDir>.lock-owner` says who holds it, for the error message only.
+// `<dataDir>.lock-owner` says who holds it, for the error message only. The refresh runs on the
+// event loop: a holder that blocks it for longer than the stale time loses the lock and stops.
 import { hostname } from "node:os";
 import { lstatSync, readFileSync, rmSync, unlinkSync, writeFileSync } from "node:fs";
 import lockfile from "proper-lockfile";

@@ -2,7 +2,7 @@
 // that says who holds the folder and how to recover; a holder killed with SIGKILL does not keep the
 // folder (the next process opens it within the stale time); a pid, reused or not, fools nothing.
 // Real child processes (tsx), loopback only, each bounded by a timeout.
-import { spawn, spawnSync } from "node:child_process";
+import { spawn } from "node:child_process";
 import { mkdtempSync, rmSync, utimesSync, writeFileSync, mkdirSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
@@ -43,11 +43,17 @@ describe("data-folder lock", () => {
       const script = `import("./db/client.ts").then(m => m.openPglite(${JSON.stringify(dataDir)}, { waitMs: 500 }))
         .then(() => { console.log("opened"); process.exit(0); })
         .catch((e) => { console.error(e.message); process.exit(3); });`;
-      const child = spawnSync("npx", ["tsx", "--eval", script], { encoding: "utf8", timeout: 60_000 });
-      expect(child.status).toBe(3);
-      expect(child.stderr).toContain(`in use by process ${process.pid} on ${os.hostname()}`);
-      expect(child.stderr).toContain("Stop that process");
-      expect(child.stderr).toContain(`delete ${dataDir}.lock`);
+      // Spawned without blocking: this process must keep refreshing its lock meanwhile.
+      const child = spawn("npx", ["tsx", "--eval", script], { stdio: ["ignore", "ignore", "pipe"] });
+      let stderr = "";
+      child.stderr.on("data", (c: Buffer) => (stderr += c.toString()));
+      const timer = setTimeout(() => child.kill("SIGKILL"), 60_000);
+      const status = await new Promise((resolve) => child.on("exit", resolve));
+      clearTimeout(timer);
+      expect(status).toBe(3);
+      expect(stderr).toContain(`in use by process ${process.pid} on ${os.hostname()}`);
+      expect(stderr).toContain("Stop that process");
+      expect(stderr).toContain(`delete ${dataDir}.lock`);
     } finally {
       await first.close();
     }
