@@ -117,7 +117,7 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
  * Freezes the current draft: earlier approved versions become superseded, the request is approved,
  * and the rider gets the sheet link (the PDF is rendered on demand by the sheet route).
  */
-export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number) {
+export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number, acknowledged: readonly string[] = []) {
   const db = await getDb();
   const { version, revised, mail } = await db.transaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
@@ -128,6 +128,12 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
       throw new HttpError(409, `Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
       throw new HttpError(409, `Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+    // Sanity warnings (lib/sizing/README.md, "Sanity limits") hold approval until the tuner acknowledges each.
+    const missing = acknowledgementCodes(latest.output).filter((c) => !acknowledged.includes(c));
+    if (missing.length)
+      throw new HttpError(409, `Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
+        acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
+      });
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
     const superseded = await tx
       .update(recommendationVersions)
@@ -148,6 +154,7 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
         superseded: superseded.map((s) => s.version),
         // Approving over a critical warning is the tuner's call (the screen asks to confirm); keep it on record.
         criticalWarnings: criticalCodes(latest.output),
+        acknowledgedWarnings: acknowledgementCodes(latest.output),
       }),
     );
     await recordAudit(events, tx);
@@ -161,6 +168,11 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
   });
   kickOutbox();
   return { version, revised, mail };
+}
+
+function acknowledgementCodes(output: unknown): string[] {
+  const warnings = (output as { warnings?: { code: string; requiresAcknowledgement?: boolean }[] } | null)?.warnings ?? [];
+  return [...new Set(warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code))];
 }
 
 function criticalCodes(output: unknown): string[] {

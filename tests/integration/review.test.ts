@@ -246,6 +246,26 @@ describe("ask, decline, assign", () => {
     expect(approvals[0]!.detail).toMatchObject({ version: 1, superseded: [], criticalWarnings: [] });
   });
 
+  it("a sanity warning holds approval until the tuner acknowledges it (lib/sizing/README.md, sanity limits)", async () => {
+    const id = stableUuid("request:r04"); // 450 class, in review
+    // k·p/LR(0) = 60·25/3.05 ≈ 492 N holds the ≈ 408 N static rear load: static sag 0 on a coil end.
+    const saved = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { rateNmm: 60, preloadMm: 25 } } });
+    expect(saved.status).toBe(200);
+    const out = saved.body.output as Recommendation;
+    const codes = out.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code);
+    expect(codes).toContain("REAR_STATIC_SAG_ZERO");
+    const refused = await call(approve, id, "POST", {});
+    expect(refused.status).toBe(409);
+    expect(refused.body.fields?.acknowledgedWarnings).toContain("REAR_STATIC_SAG_ZERO");
+    expect((await listVersions(id))[0]).toMatchObject({ state: "draft" });
+    const partial = await call(approve, id, "POST", { acknowledgedWarnings: codes.slice(1) });
+    expect(partial.status).toBe(409); // the first code is missing
+    const ok = await call(approve, id, "POST", { acknowledgedWarnings: codes });
+    expect(ok.status).toBe(200);
+    const approvals = (await listAuditForRequest(id)).filter((e) => e.action === "recommendation.approved");
+    expect(approvals.at(-1)!.detail).toMatchObject({ acknowledgedWarnings: codes });
+  });
+
   it("answers 404 for an unknown or malformed id", async () => {
     expect((await call(getDetail, stableUuid("request:none"), "GET")).status).toBe(404);
     expect((await call(getDetail, "not-a-uuid", "GET")).status).toBe(404);
