@@ -14,6 +14,7 @@ import { overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
 import { ClickerInputs, FrontInputs, RearInputs } from "./figure-inputs";
 import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
+import { RateBasisInput } from "./rate-basis-input";
 import { ResultsTable } from "./results-table";
 import { ReasonsList, SafetyNote, WarningsList } from "./warnings-list";
 import { postJson } from "./post-json";
@@ -85,10 +86,11 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       if (dirty) version = await save();
       if (version === null) return;
       if (action === "approve") {
-        const r = await postJson(`/api/requests/${requestId}/approve`, "POST", { version });
+        const acknowledgedWarnings = acknowledged && shown ? shown.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code) : [];
+        const r = await postJson(`/api/requests/${requestId}/approve`, "POST", { version, acknowledgedWarnings });
         if (!r.ok) return setMessage({ kind: "error", text: r.error });
-        const email = (r.body as { email: string }).email;
-        setMessage({ kind: "ok", text: `Version ${version} approved. ${email === "sent" ? "The rider was e-mailed the sheet link." : "The e-mail to the rider FAILED: see E-mails below."}` });
+        // The e-mail is queued with the approval and goes out at once; E-mails below shows how it went.
+        setMessage({ kind: "ok", text: `Version ${version} approved. The rider is being e-mailed the sheet link (see E-mails below).` });
       } else setMessage({ kind: "ok", text: `Saved as draft version ${version}.` });
       router.refresh();
     } finally {
@@ -97,7 +99,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   }
 
   const r = shown;
-  const critical = r.warnings.filter((w) => w.severity === "critical");
+  // Critical warnings and sanity limits both need the tuner's tick; the server refuses unticked sanity limits.
+  const critical = r.warnings.filter((w) => w.severity === "critical" || w.requiresAcknowledgement);
   return (
     <section aria-labelledby="adjust-heading" className="flex flex-col gap-4">
       <h2 id="adjust-heading" className="text-xl font-semibold">Adjust version {latest.version}{frozen ? " (approved)" : " (draft)"}</h2>
@@ -113,6 +116,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
         <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={(e) => { e.preventDefault(); void run("save"); }}>
+          <RateBasisInput value={values.rateBasis} onChange={(rateBasis) => set({ rateBasis })} used={r.resolved.rateBasis} />
           <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} />
           <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
@@ -126,7 +130,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             <label className="flex items-start gap-2 rounded-lg border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
               <input type="checkbox" className="mt-1 size-5" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
               <span>
-                This setup has {critical.length} critical warning{critical.length === 1 ? "" : "s"} (see the list). I have checked them
+                This setup has {critical.length} warning{critical.length === 1 ? "" : "s"} to check (see the list). I have checked them
                 against the manufacturer&apos;s manual and approve anyway.
               </span>
             </label>

@@ -1,6 +1,6 @@
 // Staff accounts (admins and tuners) for the team page.
 import { and, asc, count, eq, inArray, isNull, or } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Executor } from "@/db/client";
 import { user } from "@/db/schema";
 
 export async function listStaff() {
@@ -21,8 +21,8 @@ export async function getStaffMember(id: string) {
   return row ?? null;
 }
 
-export async function findUserByEmail(email: string) {
-  const db = await getDb();
+export async function findUserByEmail(email: string, executor?: Executor) {
+  const db = executor ?? (await getDb());
   const [row] = await db.select({ id: user.id, role: user.role }).from(user).where(eq(user.email, email.toLowerCase()));
   return row ?? null;
 }

@@ -1,18 +1,19 @@
 // The tuner's workflow steps on a request. Each runs in one transaction: the request row is locked,
 // the status change is a guarded `update … where status in (allowed)` (so a race cannot approve
-// twice), and the audit events are written in the same transaction. Rider e-mails go out after the
-// commit through notifyRider (which records and audits them and never throws on a failed send).
+// twice), and the audit events are written in the same transaction. Rider e-mails are queued in that
+// transaction too (notifyRider, the outbox) and sent by the outbox worker once it has committed.
 import { and, eq, inArray } from "drizzle-orm";
-import { getDb, type AppDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import { recommendationVersions, requestMessages, setupRequests, type RequestStatus } from "@/db/schema";
 import { HttpError } from "@/lib/api/respond";
 import type { SessionUser } from "@/lib/auth/guard";
+import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { ALLOWED_FROM, conflictMessage, type WorkflowAction } from "@/lib/review/transitions";
 import { recordAudit, type AuditInsert } from "./audit";
 import { getLatestVersion, hasEarlierApproval } from "./versions";
 
-export type Tx = Parameters<Parameters<AppDb["transaction"]>[0]>[0];
+export type { Tx };
 export type Actor = Pick<SessionUser, "id" | "name">;
 
 /** Locks the request row for this transaction; 404 if there is none. */
@@ -69,27 +70,31 @@ export async function startReview(requestId: string, actor: Actor): Promise<void
 
 export async function askRider(requestId: string, question: string, actor: Actor) {
   const db = await getDb();
-  await db.transaction(async (tx) => {
+  const mail = await db.transaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("ask", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.ask, "waiting_for_rider", actor);
     await tx.insert(requestMessages).values({ requestId, author: "tuner", authorUserId: actor.id, body: question });
     events.push(auditBy(actor, requestId, "request.question_asked", { question }));
     await recordAudit(events, tx);
+    return notifyRider(tx, requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
   });
-  return notifyRider(requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
+  kickOutbox();
+  return mail;
 }
 
 export async function declineRequest(requestId: string, reason: string, actor: Actor) {
   const db = await getDb();
-  await db.transaction(async (tx) => {
+  const mail = await db.transaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("decline", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.decline, "declined", actor, { declineReason: reason });
     events.push(auditBy(actor, requestId, "request.declined", { reason }));
     await recordAudit(events, tx);
+    return notifyRider(tx, requestId, { kind: "request-declined", reason }, { actor: { userId: actor.id, label: actor.name } });
   });
-  return notifyRider(requestId, { kind: "request-declined", reason }, { actor: { userId: actor.id, label: actor.name } });
+  kickOutbox();
+  return mail;
 }
 
 export async function assignRequest(requestId: string, tuner: { id: string; name: string } | null, actor: Actor) {
@@ -112,9 +117,9 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
  * Freezes the current draft: earlier approved versions become superseded, the request is approved,
  * and the rider gets the sheet link (the PDF is rendered on demand by the sheet route).
  */
-export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number) {
+export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number, acknowledged: readonly string[] = []) {
   const db = await getDb();
-  const { version, revised } = await db.transaction(async (tx) => {
+  const { version, revised, mail } = await db.transaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("approve", req.status);
     const latest = await getLatestVersion(requestId, tx);
@@ -123,6 +128,12 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
       throw new HttpError(409, `Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
       throw new HttpError(409, `Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+    // Sanity warnings (lib/sizing/README.md, "Sanity limits") hold approval until the tuner acknowledges each.
+    const missing = acknowledgementCodes(latest.output).filter((c) => !acknowledged.includes(c));
+    if (missing.length)
+      throw new HttpError(409, `Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
+        acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
+      });
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
     const superseded = await tx
       .update(recommendationVersions)
@@ -143,17 +154,25 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
         superseded: superseded.map((s) => s.version),
         // Approving over a critical warning is the tuner's call (the screen asks to confirm); keep it on record.
         criticalWarnings: criticalCodes(latest.output),
+        acknowledgedWarnings: acknowledgementCodes(latest.output),
       }),
     );
     await recordAudit(events, tx);
-    return { version: latest.version, revised };
+    const mail = await notifyRider(
+      tx,
+      requestId,
+      { kind: "sheet-ready", version: latest.version, tunerName: actor.name, revised },
+      { actor: { userId: actor.id, label: actor.name } },
+    );
+    return { version: latest.version, revised, mail };
   });
-  const mail = await notifyRider(
-    requestId,
-    { kind: "sheet-ready", version, tunerName: actor.name, revised },
-    { actor: { userId: actor.id, label: actor.name } },
-  );
+  kickOutbox();
   return { version, revised, mail };
+}
+
+function acknowledgementCodes(output: unknown): string[] {
+  const warnings = (output as { warnings?: { code: string; requiresAcknowledgement?: boolean }[] } | null)?.warnings ?? [];
+  return [...new Set(warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code))];
 }
 
 function criticalCodes(output: unknown): string[] {

@@ -2,14 +2,14 @@
 // admin's invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
 import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { findInviteByTokenHash, insertInvite, markInviteAccepted } from "@/db/queries/invites";
+import { getDb, type Tx } from "@/db/client";
+import { findInviteByTokenHash, insertInvite, lockInvite, markInviteAccepted } from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
 import { countActiveAdmins, findUserByEmail, getStaffMember } from "@/db/queries/team";
 import { account, user } from "@/db/schema";
 import { HttpError } from "@/lib/api/respond";
 import { appBaseUrl } from "@/lib/env";
-import { sendTemplateEmail, type SendMailOptions } from "@/lib/mail";
+import { kickOutbox, queueTemplateEmail } from "@/lib/mail";
 import type { Role } from "./roles";
 import { getAuth } from "./server";
 
@@ -20,6 +20,19 @@ interface StaffAccount {
   password: string;
 }
 
+/** better-auth's own hash of a password, so its sign-in verifies it. */
+async function hashPassword(password: string): Promise<string> {
+  return (await (await getAuth()).$context).password.hash(password);
+}
+
+/** Inserts the user and its password account in the caller's transaction. */
+async function insertStaffUser(tx: Tx, input: Omit<StaffAccount, "password">, passwordHash: string): Promise<string> {
+  const id = randomUUID();
+  await tx.insert(user).values({ id, email: input.email, name: input.name, role: input.role, emailVerified: true });
+  await tx.insert(account).values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: passwordHash });
+  return id;
+}
+
 /** Creates the account if its e-mail is new; returns the user id and whether it was created. */
 export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string; created: boolean }> {
   const db = await getDb();
@@ -27,19 +40,8 @@ export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string
   const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, email)).limit(1);
   if (existing[0]) return { id: existing[0].id, created: false };
 
-  const ctx = await (await getAuth()).$context;
-  const hash = await ctx.password.hash(input.password);
-  const id = randomUUID();
-  await db.transaction(async (tx) => {
-    await tx.insert(user).values({ id, email, name: input.name, role: input.role, emailVerified: true });
-    await tx.insert(account).values({
-      id: randomUUID(),
-      userId: id,
-      accountId: id,
-      providerId: "credential",
-      password: hash,
-    });
-  });
+  const hash = await hashPassword(input.password);
+  const id = await db.transaction((tx) => insertStaffUser(tx, { ...input, email }, hash));
   return { id, created: true };
 }
 
@@ -57,28 +59,36 @@ export const hashInviteToken = (token: string) => createHash("sha256").update(to
 export async function inviteStaff(
   input: { email: string; role: "tuner" | "admin" },
   inviter: { id: string; name: string },
-  options: { mail?: SendMailOptions } = {},
 ) {
   const email = input.email.toLowerCase();
   const existing = await findUserByEmail(email);
   if (existing && existing.role !== "rider")
     throw new HttpError(409, "This person is already on the team.", { email: "Already a staff member" });
   const token = randomBytes(32).toString("base64url");
-  const invite = await insertInvite({
-    id: randomUUID(),
-    email,
-    role: input.role,
-    tokenHash: hashInviteToken(token),
-    invitedById: inviter.id,
-    expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
-  });
   const url = new URL(`/invite/${token}`, appBaseUrl()).toString();
-  const mail = await sendTemplateEmail(
-    "staff-invite",
-    { url, role: input.role, inviterName: inviter.name, shopName: await getShopName() },
-    { to: email },
-    options.mail,
-  );
+  const db = await getDb();
+  // The invitation and its e-mail are stored together: neither exists without the other.
+  const { invite, mail } = await db.transaction(async (tx) => {
+    const invite = await insertInvite(
+      {
+        id: randomUUID(),
+        email,
+        role: input.role,
+        tokenHash: hashInviteToken(token),
+        invitedById: inviter.id,
+        expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
+      },
+      tx,
+    );
+    const mail = await queueTemplateEmail(
+      tx,
+      "staff-invite",
+      { url, role: input.role, inviterName: inviter.name, shopName: await getShopName(tx) },
+      { to: email },
+    );
+    return { invite, mail };
+  });
+  kickOutbox();
   return { id: invite.id, email, role: input.role, expiresAt: invite.expiresAt, mailStatus: mail.status };
 }
 
@@ -91,26 +101,37 @@ export async function openInvite(token: string) {
   return invite;
 }
 
-/** Creates the staff account from an invitation; the caller then signs the person in. */
+/**
+ * Creates the staff account from an invitation; the caller then signs the person in. One
+ * transaction: the invitation row is locked, the account is created (or a rider's account promoted)
+ * and the invitation marked used together, so a failure leaves the invitation open and two people
+ * racing on one link cannot both get an account.
+ */
 export async function acceptInvite(input: { token: string; name: string; password: string }) {
-  const invite = await openInvite(input.token);
-  const existing = await findUserByEmail(invite.email);
-  if (existing && existing.role !== "rider")
-    throw new HttpError(409, "An account with this e-mail already exists. Sign in instead.");
-  if (!(await markInviteAccepted(invite.id))) throw new HttpError(409, "This invitation has already been used.");
-  const role = invite.role === "admin" ? "admin" : "tuner";
-  if (existing) {
-    // A rider who becomes staff keeps their account; the role changes and a password is set.
-    const db = await getDb();
-    const hash = await (await (await getAuth()).$context).password.hash(input.password);
-    await db.transaction(async (tx) => {
+  const opened = await openInvite(input.token);
+  const role = opened.role === "admin" ? "admin" : "tuner";
+  // Hashed before the transaction: it is slow on purpose and needs no lock.
+  const hash = await hashPassword(input.password);
+  const db = await getDb();
+  const id = await db.transaction(async (tx) => {
+    const invite = await lockInvite(tx, opened.id);
+    if (!invite || invite.acceptedAt) throw new HttpError(409, "This invitation has already been used.");
+    const existing = await findUserByEmail(invite.email, tx);
+    if (existing && existing.role !== "rider")
+      throw new HttpError(409, "An account with this e-mail already exists. Sign in instead.");
+    let userId: string;
+    if (existing) {
+      // A rider who becomes staff keeps their account; the role changes and a password is set.
       await tx.update(user).set({ role, name: input.name, updatedAt: new Date() }).where(eq(user.id, existing.id));
       await tx.insert(account).values({ id: randomUUID(), userId: existing.id, accountId: existing.id, providerId: "credential", password: hash });
-    });
-    return { id: existing.id, email: invite.email, role };
-  }
-  const created = await ensureStaffUser({ email: invite.email, name: input.name, role, password: input.password });
-  return { id: created.id, email: invite.email, role };
+      userId = existing.id;
+    } else {
+      userId = await insertStaffUser(tx, { email: invite.email, name: input.name, role }, hash);
+    }
+    if (!(await markInviteAccepted(invite.id, tx))) throw new HttpError(409, "This invitation has already been used.");
+    return userId;
+  });
+  return { id, email: opened.email, role };
 }
 
 /** Refuses a change that would leave the shop with no admin who can sign in (409). */

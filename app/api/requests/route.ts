@@ -8,7 +8,6 @@ import { HttpError, withErrors } from "@/lib/api/respond";
 import { createLimiter } from "@/lib/api/rate-limit";
 import { publicRoute, requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import { notifyRider } from "@/lib/notify";
 import { submitSetupRequest } from "@/lib/requests/intake";
 import { statusPath } from "@/lib/requests/token";
 import { MAX_PHOTO_BYTES, MAX_PHOTOS, PhotoError, displayName, type IncomingPhoto } from "@/lib/storage";
@@ -86,12 +85,7 @@ export const POST = publicRoute(
       if (error instanceof PhotoError) throw bad(error.field, error.message, error.status);
       throw error;
     }
-    // The request is committed: a failed e-mail is recorded and retried, never undoes it.
-    try {
-      await notifyRider(created.id, { kind: "request-received" }, { statusToken: created.statusToken });
-    } catch (error) {
-      console.error("[requests] confirmation e-mail could not be queued", created.id, error);
-    }
+    // Committed with its confirmation e-mail queued; the outbox worker sends it (no waiting here).
     return NextResponse.json({ id: created.id, statusUrl: statusPath(created.statusToken) }, { status: 201 });
   }),
 );

@@ -1,5 +1,6 @@
 // POST /api/requests/[id]/approve (staff): freezes the current draft version and e-mails the rider
-// the sheet link. Body (optional): { version } to refuse approving a draft the tuner has not seen.
+// the sheet link. Body (optional): { version } to refuse approving a draft the tuner has not seen,
+// { acknowledgedWarnings } the codes of the sanity warnings the tuner has checked.
 import { NextResponse } from "next/server";
 import { approveRecommendation } from "@/db/queries/workflow";
 import { withErrors } from "@/lib/api/respond";
@@ -13,6 +14,6 @@ export const POST = withErrors(async (request: Request, context: IdContext) => {
   const id = await requestIdFrom(context);
   // The body is optional: an empty POST approves whatever draft is current.
   const body = request.headers.get("content-length") === "0" || !request.body ? {} : await jsonBody(request, approveSchema);
-  const { version, revised, mail } = await approveRecommendation(id, actor, body.version);
+  const { version, revised, mail } = await approveRecommendation(id, actor, body.version, body.acknowledgedWarnings ?? []);
   return NextResponse.json({ version, revised, email: mail.status });
 });
