@@ -1,11 +1,12 @@
 // Two app instances on one PostgreSQL server, as in the README's deployment: separate processes
 // (tests/helpers/instance-server.ts), each with its own pool, limiters and S3 client, sharing the
 // database and a bucket on a local S3-compatible fake (s3rver, started here on loopback).
-// The rate limit holds across them and a photo uploaded through one is served by the other.
+// The rate limit holds across them, a photo uploaded through one is served by the other, and an
+// e-mail in the shared outbox is sent once when both instances' senders run at the same moment.
 // PostgreSQL only: the embedded database (PGlite) is one process by design.
 import { spawn, type ChildProcess } from "node:child_process";
 import { mkdtempSync, readdirSync, rmSync, existsSync } from "node:fs";
-import { request as httpRequest } from "node:http";
+import { createServer, request as httpRequest, type Server } from "node:http";
 import os from "node:os";
 import path from "node:path";
 import { eq } from "drizzle-orm";
@@ -30,6 +31,9 @@ const BUCKET = "sagwise-photos";
 let s3: S3rver | undefined;
 let s3Dir = "";
 const instances: { child: ChildProcess; port: number; dataDir: string }[] = [];
+// A stand-in for the e-mail API on loopback: records every message it is asked to send.
+let mailApi: Server | undefined;
+const delivered: { to: string[]; subject: string }[] = [];
 
 function startInstance(env: NodeJS.ProcessEnv): Promise<{ child: ChildProcess; port: number; dataDir: string }> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-instance-"));
@@ -64,6 +68,14 @@ function send(port: number, method: string, url: string, options: { headers?: Re
   });
 }
 
+const RIDER_ANSWERS = {
+  rider: { name: "Two Instance Rider", email: "two.instances@example.test", weight: { value: 75, unit: "kg" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+  riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 6 },
+  bike: { modelId: stableUuid("bike:mx-450-4t"), year: 2022 },
+  feel: { complaints: ["bottoming"] },
+  review: { consent: true },
+};
+
 async function multipart(answers: unknown, photo: Uint8Array) {
   const form = new FormData();
   form.set("answers", JSON.stringify(answers));
@@ -77,6 +89,17 @@ describe.skipIf(!onPostgres)(`two instances on one PostgreSQL (${onPostgres ? "r
     s3Dir = mkdtempSync(path.join(os.tmpdir(), "sagwise-s3-"));
     s3 = new S3rver({ address: "127.0.0.1", port: 0, silent: true, directory: s3Dir, configureBuckets: [{ name: BUCKET, configs: [] }] });
     const { port: s3Port } = await s3.run();
+    mailApi = createServer((req, res) => {
+      let body = "";
+      req.on("data", (c: Buffer) => (body += c));
+      req.on("end", () => {
+        const message = JSON.parse(body || "{}") as { to?: string | string[]; subject?: string };
+        delivered.push({ to: ([] as string[]).concat(message.to ?? []), subject: message.subject ?? "" });
+        res.writeHead(200, { "content-type": "application/json" }).end(JSON.stringify({ id: `msg_${delivered.length}` }));
+      });
+    });
+    await new Promise<void>((resolve) => mailApi!.listen(0, "127.0.0.1", resolve));
+    const mailPort = (mailApi.address() as { port: number }).port;
     const env = {
       ...process.env,
       DATABASE_URL: testDatabaseUrl(),
@@ -88,8 +111,7 @@ describe.skipIf(!onPostgres)(`two instances on one PostgreSQL (${onPostgres ? "r
       S3_SECRET_ACCESS_KEY: "S3RVER",
       S3_FORCE_PATH_STYLE: "true",
       TRUST_PROXY_HOPS: "0",
-      // E-mail goes nowhere reachable: a refused connection on loopback, recorded as a failed send.
-      RESEND_BASE_URL: "http://127.0.0.1:9",
+      RESEND_BASE_URL: `http://127.0.0.1:${mailPort}`,
     };
     instances.push(...(await Promise.all([startInstance(env), startInstance(env)])));
   }, 120_000);
@@ -100,6 +122,7 @@ describe.skipIf(!onPostgres)(`two instances on one PostgreSQL (${onPostgres ? "r
       rmSync(dataDir, { recursive: true, force: true });
     }
     await s3?.close();
+    await new Promise((resolve) => (mailApi ? mailApi.close(resolve) : resolve(undefined)));
     if (s3Dir) rmSync(s3Dir, { recursive: true, force: true });
   });
 
@@ -140,5 +163,24 @@ describe.skipIf(!onPostgres)(`two instances on one PostgreSQL (${onPostgres ? "r
       statuses.push(response.status);
     }
     expect(statuses).toEqual([400, 400, 400, 400, 400, 400, 400, 400, 429, 429]);
+  });
+
+  it("an outbox message is sent once when both instances' senders run together", async () => {
+    const [a, b] = instances;
+    const riders = Array.from({ length: 6 }, (_, i) => `outbox.once.${i}@example.test`);
+    for (const [i, email] of riders.entries()) {
+      const target = i % 2 === 0 ? a! : b!;
+      const response = await send(target.port, "POST", "/api/requests", {
+        headers: { "content-type": "application/json" },
+        body: Buffer.from(JSON.stringify({ ...RIDER_ANSWERS, rider: { ...RIDER_ANSWERS.rider, email } })),
+        from: `127.0.0.${10 + i}`,
+      });
+      expect(response.status, response.body.toString()).toBe(201);
+    }
+    // Both senders claim from the same table at once, a few rounds, until nothing is left.
+    for (let round = 0; round < 3; round++) {
+      await Promise.all([send(a!.port, "POST", "/__drain"), send(b!.port, "POST", "/__drain")]);
+    }
+    for (const email of riders) expect(delivered.filter((m) => m.to.includes(email)), email).toHaveLength(1);
   });
 });
