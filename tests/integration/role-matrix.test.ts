@@ -54,6 +54,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/shop/catalog": staff,
   "GET /api/shop/catalog/[id]": staff,
   "PUT /api/shop/catalog/[id]": staff,
+  "GET /api/shop/catalog/[id]/calibration": adminOnly,
+  "POST /api/shop/catalog/[id]/calibration": adminOnly,
   "POST /api/shop/catalog/[id]/duplicate": staff,
   "POST /api/shop/catalog/[id]/retire": staff,
   "GET /api/shop/catalog/csv": staff,
