@@ -37,7 +37,8 @@ const delivered: { to: string[]; subject: string }[] = [];
 
 function startInstance(env: NodeJS.ProcessEnv): Promise<{ child: ChildProcess; port: number; dataDir: string }> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-instance-"));
-  const child = spawn("npx", ["tsx", "tests/helpers/instance-server.ts"], { env: { ...env, DATA_DIR: dataDir }, stdio: ["ignore", "pipe", "pipe"] });
+  // Its own process group, so the teardown ends npx, tsx and the server together.
+  const child = spawn("npx", ["tsx", "tests/helpers/instance-server.ts"], { env: { ...env, DATA_DIR: dataDir }, stdio: ["ignore", "pipe", "pipe"], detached: true });
   return new Promise((resolve, reject) => {
     let out = "";
     const timer = setTimeout(() => reject(new Error(`instance did not start: ${out}`)), 60_000);
@@ -118,7 +119,7 @@ describe.skipIf(!onPostgres)(`two instances on one PostgreSQL (${onPostgres ? "r
 
   afterAll(async () => {
     for (const { child, dataDir } of instances) {
-      child.kill("SIGTERM");
+      if (child.pid) process.kill(-child.pid, "SIGTERM");
       rmSync(dataDir, { recursive: true, force: true });
     }
     await s3?.close();
