@@ -21,7 +21,7 @@ test.describe("calibration from sag reports", () => {
     await page.getByRole("link", { name: "Calibration from sag reports" }).click();
     await expect(page).toHaveURL(`/shop/catalog/${MODEL}/calibration`);
     await expect(page.getByRole("heading", { name: "Sag reports (6)" })).toBeVisible();
-    await expect(page.getByText("The catalog's values")).toBeVisible();
+    await expect(page.getByText("The catalog's values", { exact: true })).toBeVisible();
     const loads = page.getByRole("table", { name: "Loads: catalog, fitted and applied" });
     await expect(loads.getByRole("columnheader", { name: "Fitted from 6 reports" })).toBeVisible();
     await expect(page.getByRole("img", { name: /Rear race sag against rider mass/ })).toBeVisible();
@@ -32,7 +32,7 @@ test.describe("calibration from sag reports", () => {
     await expect(confirm).toContainText("Recommendations already made keep theirs");
     await confirm.getByRole("button", { name: "Cancel" }).click();
     await expect(confirm).toHaveCount(0);
-    await expect(page.getByText("The catalog's values")).toBeVisible();
+    await expect(page.getByText("The catalog's values", { exact: true })).toBeVisible();
 
     await page.getByRole("button", { name: "Apply to this model" }).click();
     await page.getByRole("button", { name: "Yes, apply the fitted loads" }).click();
@@ -51,7 +51,7 @@ test.describe("calibration from sag reports", () => {
     await page.getByRole("button", { name: "Undo calibration" }).click();
     await page.getByRole("button", { name: "Yes, undo the calibration" }).click();
     await expect(page.getByRole("status").filter({ hasText: "Calibration undone" })).toBeVisible();
-    await expect(page.getByText("The catalog's values")).toBeVisible();
+    await expect(page.getByText("The catalog's values", { exact: true })).toBeVisible();
     await expect(page.getByText(/; undone .* by Mara Quillfeather\./)).toBeVisible();
 
     // The request made while calibrated keeps what made it.
