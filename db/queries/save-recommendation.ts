@@ -4,7 +4,7 @@
 import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { recommendationVersions } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { ConflictError, ValidationError } from "@/lib/errors";
 import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
 import { ALLOWED_FROM } from "@/lib/review/transitions";
 import { SizingInputError, evaluateSetup, type SetupOverrides, type SizingInput } from "@/lib/sizing";
@@ -19,7 +19,7 @@ function recompute(input: unknown, overrides: SetupOverrides) {
   } catch (error) {
     if (!(error instanceof SizingInputError)) throw error;
     const fields = Object.fromEntries(error.issues.map((i) => [i.path, i.message]));
-    throw new HttpError(400, "These figures cannot be used.", fields);
+    throw new ValidationError("These figures cannot be used.", fields);
   }
 }
 
@@ -30,9 +30,9 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     const req = await lockRequest(tx, requestId);
     assertCanStart("save", req.status);
     const latest = await getLatestVersion(requestId, tx);
-    if (!latest) throw new HttpError(409, "This request has no recommendation to adjust yet.");
+    if (!latest) throw new ConflictError("This request has no recommendation to adjust yet.");
     if (latest.version !== body.basedOnVersion)
-      throw new HttpError(409, `Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
+      throw new ConflictError(`Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
     const output = recompute(latest.input, overrides);
     const changes = diffOverrides(latest.overrides as SetupOverrides, overrides);
     const notesForRider = body.notesForRider || null;

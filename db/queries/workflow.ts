@@ -5,7 +5,7 @@
 import { and, eq, inArray } from "drizzle-orm";
 import { getDb, type AppDb } from "@/db/client";
 import { recommendationVersions, requestMessages, setupRequests, type RequestStatus } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import type { SessionUser } from "@/lib/auth/guard";
 import { notifyRider } from "@/lib/notify";
 import { ALLOWED_FROM, conflictMessage, type WorkflowAction } from "@/lib/review/transitions";
@@ -22,13 +22,13 @@ export async function lockRequest(tx: Tx, requestId: string) {
     .from(setupRequests)
     .where(eq(setupRequests.id, requestId))
     .for("update");
-  if (!row) throw new HttpError(404, "No such request.");
+  if (!row) throw new NotFoundError("No such request.");
   return row;
 }
 
 /** Throws 409 with the reason when `action` may not start from `status`. */
 export function assertCanStart(action: WorkflowAction, status: RequestStatus): void {
-  if (!ALLOWED_FROM[action].includes(status)) throw new HttpError(409, conflictMessage(action, status));
+  if (!ALLOWED_FROM[action].includes(status)) throw new ConflictError(conflictMessage(action, status));
 }
 
 export function auditBy(actor: Actor, requestId: string, action: string, detail: Record<string, unknown>): AuditInsert {
@@ -53,7 +53,7 @@ export async function moveStatus(
     .set({ status: to, updatedAt: new Date(), ...extra })
     .where(and(eq(setupRequests.id, requestId), eq(setupRequests.status, current), inArray(setupRequests.status, [...from])))
     .returning({ id: setupRequests.id });
-  if (updated.length === 0) throw new HttpError(409, "The request changed meanwhile. Reload and try again.");
+  if (updated.length === 0) throw new ConflictError("The request changed meanwhile. Reload and try again.");
   return current === to ? [] : [auditBy(actor, requestId, "request.status_changed", { from: current, to })];
 }
 
@@ -118,11 +118,11 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
     const req = await lockRequest(tx, requestId);
     assertCanStart("approve", req.status);
     const latest = await getLatestVersion(requestId, tx);
-    if (!latest) throw new HttpError(409, "There is no recommendation to approve yet.");
+    if (!latest) throw new ConflictError("There is no recommendation to approve yet.");
     if (latest.state !== "draft")
-      throw new HttpError(409, `Version ${latest.version} is already approved. Save a revision first, then approve it.`);
+      throw new ConflictError(`Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
-      throw new HttpError(409, `Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+      throw new ConflictError(`Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
     const superseded = await tx
       .update(recommendationVersions)
@@ -135,7 +135,7 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
       .set({ state: "approved", approvedById: actor.id, approvedAt: now, updatedAt: now })
       .where(and(eq(recommendationVersions.id, latest.id), eq(recommendationVersions.state, "draft")))
       .returning({ id: recommendationVersions.id });
-    if (frozen.length === 0) throw new HttpError(409, "This version was approved meanwhile. Reload the request.");
+    if (frozen.length === 0) throw new ConflictError("This version was approved meanwhile. Reload the request.");
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.approve, "approved", actor);
     events.push(
       auditBy(actor, requestId, "recommendation.approved", {

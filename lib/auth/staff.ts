@@ -7,7 +7,7 @@ import { findInviteByTokenHash, insertInvite, markInviteAccepted } from "@/db/qu
 import { getShopName } from "@/db/queries/settings";
 import { countActiveAdmins, findUserByEmail, getStaffMember } from "@/db/queries/team";
 import { account, user } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { appBaseUrl } from "@/lib/env";
 import { sendTemplateEmail, type SendMailOptions } from "@/lib/mail";
 import type { Role } from "./roles";
@@ -62,7 +62,7 @@ export async function inviteStaff(
   const email = input.email.toLowerCase();
   const existing = await findUserByEmail(email);
   if (existing && existing.role !== "rider")
-    throw new HttpError(409, "This person is already on the team.", { email: "Already a staff member" });
+    throw new ConflictError("This person is already on the team.", { email: "Already a staff member" });
   const token = randomBytes(32).toString("base64url");
   const invite = await insertInvite({
     id: randomUUID(),
@@ -82,12 +82,12 @@ export async function inviteStaff(
   return { id: invite.id, email, role: input.role, expiresAt: invite.expiresAt, mailStatus: mail.status };
 }
 
-/** The open invitation behind a token, or an HttpError saying why it cannot be used. */
+/** The open invitation behind a token, or a domain error saying why it cannot be used. */
 export async function openInvite(token: string) {
   const invite = await findInviteByTokenHash(hashInviteToken(token));
-  if (!invite) throw new HttpError(404, "This invitation link is not valid.");
-  if (invite.acceptedAt) throw new HttpError(409, "This invitation has already been used. Sign in instead.");
-  if (invite.expiresAt <= new Date()) throw new HttpError(409, "This invitation has expired. Ask the shop admin for a new one.");
+  if (!invite) throw new NotFoundError("This invitation link is not valid.");
+  if (invite.acceptedAt) throw new ConflictError("This invitation has already been used. Sign in instead.");
+  if (invite.expiresAt <= new Date()) throw new ConflictError("This invitation has expired. Ask the shop admin for a new one.");
   return invite;
 }
 
@@ -96,8 +96,8 @@ export async function acceptInvite(input: { token: string; name: string; passwor
   const invite = await openInvite(input.token);
   const existing = await findUserByEmail(invite.email);
   if (existing && existing.role !== "rider")
-    throw new HttpError(409, "An account with this e-mail already exists. Sign in instead.");
-  if (!(await markInviteAccepted(invite.id))) throw new HttpError(409, "This invitation has already been used.");
+    throw new ConflictError("An account with this e-mail already exists. Sign in instead.");
+  if (!(await markInviteAccepted(invite.id))) throw new ConflictError("This invitation has already been used.");
   const role = invite.role === "admin" ? "admin" : "tuner";
   if (existing) {
     // A rider who becomes staff keeps their account; the role changes and a password is set.
@@ -116,7 +116,7 @@ export async function acceptInvite(input: { token: string; name: string; passwor
 /** Refuses a change that would leave the shop with no admin who can sign in (409). */
 async function guardLastAdmin(target: { role: string; banned: boolean | null }) {
   if (target.role === "admin" && !target.banned && (await countActiveAdmins()) <= 1)
-    throw new HttpError(409, "The shop needs at least one active admin. Make someone else admin first.", {
+    throw new ConflictError("The shop needs at least one active admin. Make someone else admin first.", {
       role: "Last active admin",
     });
 }
@@ -127,7 +127,7 @@ export async function updateStaffMember(
   requestHeaders: Headers,
 ) {
   const target = await getStaffMember(targetId);
-  if (!target) throw new HttpError(404, "No such team member.");
+  if (!target) throw new NotFoundError("No such team member.");
   const auth = await getAuth();
   const demotes = change.role === "tuner" && target.role === "admin";
   const deactivates = change.active === false && !target.banned;

@@ -1,12 +1,9 @@
 // better-auth's own endpoints (sign-in, sign-out, magic link, admin). Public on purpose: better-auth
-// authenticates and authorises each of them itself.
+// authenticates and authorises each of them itself, and reads the body itself.
+import { route } from "@/lib/api/route";
 import { getAuth } from "@/lib/auth/server";
-import { publicRoute } from "@/lib/auth/guard";
 
-async function handle(request: Request): Promise<Response> {
-  const auth = await getAuth();
-  return auth.handler(request);
-}
+const handle = route({ access: "public" }, async ({ request }) => (await getAuth()).handler(request));
 
-export const GET = publicRoute(handle);
-export const POST = publicRoute(handle);
+export const GET = handle;
+export const POST = handle;
