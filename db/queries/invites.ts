@@ -26,14 +26,3 @@ export async function findInviteByTokenHash(tokenHash: string): Promise<StaffInv
   const [row] = await db.select().from(staffInvites).where(eq(staffInvites.tokenHash, tokenHash));
   return row ?? null;
 }
-
-/** Marks the invitation used; false when someone used it first. */
-export async function markInviteAccepted(id: string): Promise<boolean> {
-  const db = await getDb();
-  const rows = await db
-    .update(staffInvites)
-    .set({ acceptedAt: new Date() })
-    .where(and(eq(staffInvites.id, id), isNull(staffInvites.acceptedAt)))
-    .returning({ id: staffInvites.id });
-  return rows.length > 0;
-}

@@ -15,15 +15,11 @@ import {
 } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { bikeModels } from "./shop";
+// The status list lives beside its words, so validations need no database import (relative path:
+// drizzle-kit loads this file without the "@/" alias).
+import { REQUEST_STATUSES, type RequestStatus } from "../../lib/requests/status";
 
-export const REQUEST_STATUSES = [
-  "submitted",
-  "in_review",
-  "waiting_for_rider",
-  "approved",
-  "declined",
-] as const;
-export type RequestStatus = (typeof REQUEST_STATUSES)[number];
+export { REQUEST_STATUSES, type RequestStatus };
 
 export const setupRequests = pgTable(
   "setup_requests",

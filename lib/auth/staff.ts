@@ -1,12 +1,15 @@
 // Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and, later, the
 // admin's invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { findInviteByTokenHash, insertInvite, markInviteAccepted } from "@/db/queries/invites";
+import { findInviteByTokenHash, insertInvite } from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
-import { countActiveAdmins, findUserByEmail, getStaffMember } from "@/db/queries/team";
-import { account, user } from "@/db/schema";
+import {
+  acceptInviteWithAccount,
+  countActiveAdmins,
+  findUserByEmail,
+  getStaffMember,
+  insertStaffAccount,
+} from "@/db/queries/team";
 import { ConflictError, NotFoundError } from "@/lib/errors";
 import { appBaseUrl } from "@/lib/env";
 import { sendTemplateEmail, type SendMailOptions } from "@/lib/mail";
@@ -20,31 +23,17 @@ interface StaffAccount {
   password: string;
 }
 
+const hashPassword = async (password: string) => (await (await getAuth()).$context).password.hash(password);
+
 /** Creates the account if its e-mail is new; returns the user id and whether it was created. */
 export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string; created: boolean }> {
-  const db = await getDb();
-  const email = input.email.toLowerCase();
-  const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, email)).limit(1);
-  if (existing[0]) return { id: existing[0].id, created: false };
-
-  const ctx = await (await getAuth()).$context;
-  const hash = await ctx.password.hash(input.password);
-  const id = randomUUID();
-  await db.transaction(async (tx) => {
-    await tx.insert(user).values({ id, email, name: input.name, role: input.role, emailVerified: true });
-    await tx.insert(account).values({
-      id: randomUUID(),
-      userId: id,
-      accountId: id,
-      providerId: "credential",
-      password: hash,
-    });
-  });
+  const existing = await findUserByEmail(input.email);
+  if (existing) return { id: existing.id, created: false };
+  const id = await insertStaffAccount({ ...input, passwordHash: await hashPassword(input.password) });
   return { id, created: true };
 }
 
-
-// ---- Team administration (issue 7) ----
+// Team administration.
 // Invitations: a random token goes out by e-mail; only its SHA-256 is stored, so a database reader
 // cannot accept an invitation. Role changes and deactivation go through better-auth's admin plugin,
 // whose banUser deletes every session of the user at once.
@@ -91,26 +80,21 @@ export async function openInvite(token: string) {
   return invite;
 }
 
-/** Creates the staff account from an invitation; the caller then signs the person in. */
+/**
+ * Creates the staff account from an invitation, marking the invitation used in the same
+ * transaction; the caller then signs the person in.
+ */
 export async function acceptInvite(input: { token: string; name: string; password: string }) {
   const invite = await openInvite(input.token);
   const existing = await findUserByEmail(invite.email);
+  // A rider who becomes staff keeps their account; the role changes and a password is set.
   if (existing && existing.role !== "rider")
     throw new ConflictError("An account with this e-mail already exists. Sign in instead.");
-  if (!(await markInviteAccepted(invite.id))) throw new ConflictError("This invitation has already been used.");
   const role = invite.role === "admin" ? "admin" : "tuner";
-  if (existing) {
-    // A rider who becomes staff keeps their account; the role changes and a password is set.
-    const db = await getDb();
-    const hash = await (await (await getAuth()).$context).password.hash(input.password);
-    await db.transaction(async (tx) => {
-      await tx.update(user).set({ role, name: input.name, updatedAt: new Date() }).where(eq(user.id, existing.id));
-      await tx.insert(account).values({ id: randomUUID(), userId: existing.id, accountId: existing.id, providerId: "credential", password: hash });
-    });
-    return { id: existing.id, email: invite.email, role };
-  }
-  const created = await ensureStaffUser({ email: invite.email, name: input.name, role, password: input.password });
-  return { id: created.id, email: invite.email, role };
+  const account = { email: invite.email, name: input.name, role, passwordHash: await hashPassword(input.password) } as const;
+  const id = await acceptInviteWithAccount(invite.id, account, existing?.id);
+  if (!id) throw new ConflictError("This invitation has already been used.");
+  return { id, email: invite.email, role };
 }
 
 /** Refuses a change that would leave the shop with no admin who can sign in (409). */

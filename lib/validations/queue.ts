@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { REQUEST_STATUSES } from "@/db/schema";
+import { REQUEST_STATUSES } from "@/lib/requests/status";
 import { disciplineSchema } from "@/lib/sizing";
 
 export const QUEUE_SORTS = [

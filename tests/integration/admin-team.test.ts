@@ -6,7 +6,9 @@ import { GET as listTeam, POST as invite } from "@/app/api/shop/team/route";
 import { PATCH as patchMember } from "@/app/api/shop/team/[id]/route";
 import { POST as accept } from "@/app/api/invite/accept/route";
 import { GET as listCatalog } from "@/app/api/shop/catalog/route";
-import { findUserByEmail, listStaff } from "@/db/queries/team";
+import { insertInvite } from "@/db/queries/invites";
+import { acceptInviteWithAccount, findUserByEmail, listStaff } from "@/db/queries/team";
+import { eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { auditEvents, staffInvites } from "@/db/schema";
 import { seedDemo } from "@/db/seed-demo";
@@ -95,6 +97,25 @@ describe("invitations", () => {
 
     const again = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
     expect(again.status).toBe(409);
+  });
+
+  // Atomicity of a transaction (PostgreSQL documentation, "Transactions": all steps take effect or
+  // none): the invitation is marked used only together with the account it creates.
+  it("an account that cannot be created leaves the invitation open (same transaction)", async () => {
+    const inviteId = "0b6f3c1e-2d4a-4e8b-9c7d-5a1f2e3d4c5b";
+    await insertInvite({
+      id: inviteId,
+      email: "tuner@sagwise.test", // already has an account: creating another one violates the unique e-mail
+      role: "tuner",
+      tokenHash: hashInviteToken("atomic-accept-token"),
+      invitedById: await memberId("owner@sagwise.test"),
+      expiresAt: new Date(Date.now() + 3600_000),
+    });
+    const account = { email: "tuner@sagwise.test", name: "Twice", role: "tuner", passwordHash: "not-used" } as const;
+    await expect(acceptInviteWithAccount(inviteId, account)).rejects.toThrow();
+    const db = await getDb();
+    const [row] = await db.select().from(staffInvites).where(eq(staffInvites.id, inviteId));
+    expect(row!.acceptedAt).toBeNull();
   });
 
   it("an unknown token is a 404", async () => {

@@ -10,7 +10,7 @@ import { VersionView } from "@/components/review/version-view";
 import { AssignForm, WorkflowActions } from "@/components/review/workflow-actions";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getRequestDetail, listStaffMembers } from "@/db/queries/review";
-import { startReview } from "@/db/queries/workflow";
+import { startReview } from "@/lib/review/workflow";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import type { Recommendation, SetupOverrides, SizingInput } from "@/lib/sizing";

@@ -1,7 +1,7 @@
 // POST /api/requests/[id]/approve (staff): freezes the current draft version and e-mails the rider
 // the sheet link. Body (optional, an empty POST approves whatever draft is current): { version } to
 // refuse approving a draft the tuner has not seen.
-import { approveRecommendation } from "@/db/queries/workflow";
+import { approveRecommendation } from "@/lib/review/workflow";
 import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { approveSchema } from "@/lib/validations/review";

@@ -1,5 +1,5 @@
 // POST /api/requests/[id]/ask (staff): e-mails the rider a question; the request waits for the rider.
-import { askRider } from "@/db/queries/workflow";
+import { askRider } from "@/lib/review/workflow";
 import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { askRiderSchema } from "@/lib/validations/review";

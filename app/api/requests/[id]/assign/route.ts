@@ -1,6 +1,6 @@
 // POST /api/requests/[id]/assign (staff): assigns the request to a tuner (or none). Body: { tunerId }.
 import { findStaffMember } from "@/db/queries/review";
-import { assignRequest } from "@/db/queries/workflow";
+import { assignRequest } from "@/lib/review/workflow";
 import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { ValidationError } from "@/lib/errors";

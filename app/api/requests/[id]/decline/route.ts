@@ -1,5 +1,5 @@
 // POST /api/requests/[id]/decline (staff): declines with a reason that is e-mailed to the rider.
-import { declineRequest } from "@/db/queries/workflow";
+import { declineRequest } from "@/lib/review/workflow";
 import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { declineSchema } from "@/lib/validations/review";
