@@ -1,6 +1,6 @@
 // The e-mails of one request with how each went: a failed one stands out in words, colour and
 // border, with its attempts and the last error, so the tuner knows to reach the rider another way.
-import { listOutboundEmailsForRequest, type OutboundEmailRow } from "@/db/queries/outbound-emails";
+import type { OutboundEmailRow } from "@/db/queries/outbound-emails";
 import type { EmailStatus } from "@/db/schema";
 import { emailTemplates } from "@/emails";
 
@@ -43,7 +43,7 @@ function EmailItem({ mail }: { mail: OutboundEmailRow }) {
       {failed ? (
         <p role="alert" className="mt-2 text-sm text-red-900">
           Not delivered after {mail.attempts} {mail.attempts === 1 ? "attempt" : "attempts"}
-          {mail.lastError ? `: ${mail.lastError}` : "."} Reach the rider another way or send it again.
+          {mail.lastError ? `: ${mail.lastError}` : "."} Reach the rider another way.
         </p>
       ) : null}
     </li>
@@ -58,18 +58,5 @@ export function EmailStatusItems({ emails }: { emails: OutboundEmailRow[] }) {
         <EmailItem key={mail.id} mail={mail} />
       ))}
     </ul>
-  );
-}
-
-/** Server component: `<EmailStatusList requestId={id} />` on the request page. */
-export async function EmailStatusList({ requestId }: { requestId: string }) {
-  const emails = await listOutboundEmailsForRequest(requestId);
-  return (
-    <section aria-labelledby="request-emails-heading" className="flex flex-col gap-2">
-      <h2 id="request-emails-heading" className="text-lg font-semibold">
-        E-mails to the rider
-      </h2>
-      <EmailStatusItems emails={emails} />
-    </section>
   );
 }
