@@ -1,7 +1,15 @@
 // The invented demo scenario: an invented shop, its invented staff and riders. Any likeness to a
 // real shop or person is accidental. Bikes come from the engine's generic classes (typical values).
+import { createHash } from "node:crypto";
 import type { RequestStatus } from "@/db/schema";
 import type { RequestAnswersInput } from "@/lib/validations/request";
+
+/** A uuid derived from a name, so a demo row has the same id on every run. Kept here, beside the
+ * scenario and free of database imports, so the browser tests can name the seeded rows too. */
+export function stableUuid(name: string): string {
+  const h = createHash("sha256").update(`sagwise-demo:${name}`).digest("hex");
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-4${h.slice(13, 16)}-8${h.slice(17, 20)}-${h.slice(20, 32)}`;
+}
 
 export const DEMO_SHOP = {
   name: "Cinderline Suspension (demo)",

@@ -1,7 +1,6 @@
 // Loads the invented demo scenario (db/seed-data.ts). Every row has a stable key (settings id,
 // e-mail, slug, a name-derived uuid), and each insert skips what is already there, so running the
 // seed twice changes nothing.
-import { createHash } from "node:crypto";
 import { count, eq } from "drizzle-orm";
 import { getDb, type AppDb } from "@/db/client";
 import {
@@ -33,13 +32,9 @@ import {
 import { requestAnswersSchema } from "@/lib/validations/request";
 import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
-import { DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, type DemoRequest } from "./seed-data";
+import { DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, stableUuid, type DemoRequest } from "./seed-data";
 
-/** A uuid derived from a name, so a demo row has the same id on every run. */
-export function stableUuid(name: string): string {
-  const h = createHash("sha256").update(`sagwise-demo:${name}`).digest("hex");
-  return `${h.slice(0, 8)}-${h.slice(8, 12)}-4${h.slice(13, 16)}-8${h.slice(17, 20)}-${h.slice(20, 32)}`;
-}
+export { stableUuid };
 
 async function seedShop(db: AppDb) {
   await db.insert(shopSettings).values({ id: 1, ...DEMO_SHOP }).onConflictDoNothing();

@@ -1,25 +1,21 @@
 // Starts the mail fake and a seeded production server (`next start`, built beforehand by
-// `npm run build`) on free ports with a temporary DATA_DIR, and hands their URLs to the tests.
+// `npm run build`) on free ports with a temporary DATA_DIR. Their URLs reach the tests through the
+// environment (Playwright starts its workers after global setup, with this process's environment).
+// The returned function is Playwright's global teardown: it stops both and removes the data.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
 import net from "node:net";
 import os from "node:os";
 import path from "node:path";
-import type { TestProject } from "vitest/node";
-
-declare module "vitest" {
-  export interface ProvidedContext {
-    baseUrl: string;
-    mailUrl: string;
-  }
-}
+import { E2E_AUTH_SECRET, E2E_ENV } from "./env";
 
 function freePort(): Promise<number> {
   return new Promise((resolve, reject) => {
     const server = net.createServer();
+    server.on("error", reject);
     server.listen(0, "127.0.0.1", () => {
       const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject()));
+      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
     });
   });
 }
@@ -39,7 +35,17 @@ async function waitFor(url: string, child: ChildProcess, what: string) {
   throw new Error(`${what} did not answer at ${url}`);
 }
 
-export default async function setup(project: TestProject) {
+function stop(child: ChildProcess) {
+  if (!child.pid || child.exitCode !== null) return;
+  try {
+    // Detached: the negative pid reaches npx and the server it started.
+    process.kill(-child.pid, "SIGTERM");
+  } catch {
+    // Already gone.
+  }
+}
+
+export default async function globalSetup() {
   if (!existsSync(path.join(".next", "BUILD_ID"))) {
     throw new Error("No production build: run `npm run build` before `npm run test:e2e`.");
   }
@@ -52,7 +58,7 @@ export default async function setup(project: TestProject) {
     NODE_ENV: "production",
     PORT: String(appPort),
     DATA_DIR: dataDir,
-    BETTER_AUTH_SECRET: "e2e-secret-e2e-secret-e2e-secret-0123456789",
+    BETTER_AUTH_SECRET: E2E_AUTH_SECRET,
     BETTER_AUTH_URL: baseUrl,
     RESEND_BASE_URL: mailUrl,
     MAIL_FAKE_PORT: String(mailPort),
@@ -73,22 +79,20 @@ export default async function setup(project: TestProject) {
     child.stdout?.on("data", output(name));
     child.stderr?.on("data", (chunk: Buffer) => process.stderr.write(`[${name}] ${chunk}`));
   }
-  await waitFor(`${mailUrl}/emails`, mail, "mail fake");
-  await waitFor(`${baseUrl}/api/health`, app, "next start");
-
-  project.provide("baseUrl", baseUrl);
-  project.provide("mailUrl", mailUrl);
-
-  return () => {
-    for (const child of [app, mail]) {
-      if (child.pid && child.exitCode === null) {
-        try {
-          process.kill(-child.pid, "SIGTERM");
-        } catch {
-          // Already gone.
-        }
-      }
-    }
+  const teardown = () => {
+    stop(app);
+    stop(mail);
     rmSync(dataDir, { recursive: true, force: true });
   };
+  try {
+    await waitFor(`${mailUrl}/emails`, mail, "mail fake");
+    await waitFor(`${baseUrl}/api/health`, app, "next start");
+  } catch (error) {
+    teardown();
+    throw error;
+  }
+
+  process.env[E2E_ENV.baseUrl] = baseUrl;
+  process.env[E2E_ENV.mailUrl] = mailUrl;
+  return teardown;
 }
