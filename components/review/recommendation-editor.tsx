@@ -113,8 +113,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
         <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={(e) => { e.preventDefault(); void run("save"); }}>
-          <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} />
-          <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} />
+          <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} current={input.currentSprings?.shockRateNmm} />
+          <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} current={input.currentSprings?.forkRateNmm} />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
           <NotesInputs v={values} set={set} />
           {message ? (
