@@ -3,6 +3,7 @@
 import type { OutboundEmailRow } from "@/db/queries/outbound-emails";
 import type { EmailStatus } from "@/db/schema";
 import { emailTemplates } from "@/emails";
+import { formatDateTime } from "@/lib/format";
 
 const STATUS_TEXT: Record<EmailStatus, string> = { sent: "Sent", queued: "Sending", failed: "Failed" };
 const STATUS_CLASS: Record<EmailStatus, string> = {
@@ -15,8 +16,6 @@ function templateLabel(name: string): string {
   return (emailTemplates as Record<string, { description: string }>)[name]?.description ?? name;
 }
 
-// Server time in UTC, as the audit trail shows it: the same on every screen.
-const when = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
 function EmailItem({ mail }: { mail: OutboundEmailRow }) {
   const failed = mail.status === "failed";
@@ -35,7 +34,7 @@ function EmailItem({ mail }: { mail: OutboundEmailRow }) {
         <dd className="break-all">{mail.toAddress}</dd>
         <dt>{mail.sentAt ? "Sent" : "Created"}</dt>
         <dd>
-          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>{when(mail.sentAt ?? mail.createdAt)}</time>
+          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>{formatDateTime(mail.sentAt ?? mail.createdAt)}</time>
         </dd>
         <dt>Attempts</dt>
         <dd>{mail.attempts}</dd>

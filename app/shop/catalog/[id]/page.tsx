@@ -8,6 +8,7 @@ import { getBikeModel } from "@/db/queries/bikes";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import type { BikeSpecInput } from "@/lib/sizing";
+import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Bike model" };
 export const dynamic = "force-dynamic";
@@ -27,7 +28,7 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
       </div>
       {model.retiredAt ? (
         <p className="rounded-lg bg-stone-100 p-3 text-sm">
-          Retired on {model.retiredAt.toISOString().slice(0, 10)}: riders no longer see it in the picker; requests that used it
+          Retired on {formatDay(model.retiredAt)}: riders no longer see it in the picker; requests that used it
           still show it.
         </p>
       ) : null}

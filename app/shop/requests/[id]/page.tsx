@@ -14,12 +14,12 @@ import { startReview } from "@/lib/review/workflow";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import type { Recommendation, SetupOverrides, SizingInput } from "@/lib/sizing";
+import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Request" };
 export const dynamic = "force-dynamic";
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeZone: "UTC" });
 
 export default async function RequestPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
   const { id } = await params;
@@ -47,7 +47,7 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
           <StatusBadge status={detail.status} />
         </div>
         <p className="text-stone-700">
-          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {day.format(detail.createdAt)}
+          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {formatDay(detail.createdAt)}
         </p>
         {detail.status === "declined" && detail.declineReason ? (
           <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm"><span className="font-semibold">Declined:</span> {detail.declineReason}</p>

@@ -7,6 +7,7 @@ import { STAFF_ROLES } from "@/lib/auth/roles";
 import { TooLargeError, ValidationError } from "@/lib/errors";
 import { catalogToCsv, parseCatalogCsv } from "@/lib/validations/bike-csv";
 import { auditShop } from "../../_lib/audit";
+import { isoDay } from "@/lib/format";
 
 export const dynamic = "force-dynamic";
 
@@ -15,11 +16,10 @@ const MAX_BYTES = 2 * 1024 * 1024;
 
 export const GET = route({ access: STAFF_ROLES }, async () => {
   const csv = catalogToCsv(await listAllBikeModels());
-  const date = new Date().toISOString().slice(0, 10);
   return new Response(csv, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
-      "content-disposition": `attachment; filename="sagwise-catalog-${date}.csv"`,
+      "content-disposition": `attachment; filename="sagwise-catalog-${isoDay(new Date())}.csv"`,
     },
   });
 });
