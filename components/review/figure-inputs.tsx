@@ -3,6 +3,7 @@
 // Inputs of the adjust editor. Every input is empty when the engine's own choice stands; the
 // placeholder shows that choice.
 import { Field } from "@/components/ui/field";
+import { formatNumber } from "@/lib/format";
 import { RATE_UNITS, convertRate, type ClickerId, type RateUnit, type Recommendation } from "@/lib/sizing";
 import type { EditorValues, FieldErrors } from "./editor-state";
 import { CLICKER_LABELS } from "./figures";
@@ -28,7 +29,7 @@ function NumberInput(props: { id: string; label: string; value: string; engine: 
 }
 
 const threeUnits = (nMm: number) =>
-  `${nMm.toFixed(1)} N/mm (${convertRate(nMm, "N/mm", "kgf/mm").toFixed(2)} kgf/mm, ${convertRate(nMm, "N/mm", "lbf/in").toFixed(0)} lbf/in)`;
+  `${formatNumber(nMm, 1)} N/mm (${formatNumber(convertRate(nMm, "N/mm", "kgf/mm"), 2)} kgf/mm, ${formatNumber(convertRate(nMm, "N/mm", "lbf/in"), 0)} lbf/in)`;
 
 function RateInput(props: {
   id: string;

@@ -8,6 +8,7 @@ import { useMemo, useState } from "react";
 import { ForceChart } from "@/components/charts/force-chart";
 import { Button } from "@/components/ui/button";
 import { forkForceChart, rearForceChart } from "@/lib/charts/recommendation-charts";
+import { callApi, errorWithFields } from "@/lib/api-client";
 import { diffOverrides } from "@/lib/review/overrides-diff";
 import type { SetupOverrides, SizingInput } from "@/lib/sizing";
 import { overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
@@ -16,7 +17,8 @@ import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
 import { ResultsTable } from "./results-table";
 import { ReasonsList, SafetyNote, WarningsList } from "./warnings-list";
-import { postJson } from "./post-json";
+
+const NOT_SENT = "No connection to the server. Nothing was changed; try again.";
 
 export interface EditableVersion {
   version: number;
@@ -63,18 +65,18 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   };
 
   async function save(): Promise<number | null> {
-    const r = await postJson(`/api/requests/${requestId}/recommendation`, "PATCH", {
-      basedOnVersion: latest.version,
-      overrides,
-      notesForRider: values.notesForRider,
-      internalNotes: values.internalNotes,
-    });
+    const r = await callApi<{ version: number }>(
+      `/api/requests/${requestId}/recommendation`,
+      "PATCH",
+      { basedOnVersion: latest.version, overrides, notesForRider: values.notesForRider, internalNotes: values.internalNotes },
+      { offline: NOT_SENT },
+    );
     if (!r.ok) {
-      setServerErrors(Object.fromEntries(Object.entries(r.fields ?? {}).map(([k, m]) => [k.replace(/^overrides\./, ""), m])));
-      setMessage({ kind: "error", text: r.error });
+      setServerErrors(Object.fromEntries(Object.entries(r.fields).map(([k, m]) => [k.replace(/^overrides\./, ""), m])));
+      setMessage({ kind: "error", text: errorWithFields(r) });
       return null;
     }
-    return (r.body as { version: number }).version;
+    return r.data.version;
   }
 
   async function run(action: "save" | "approve") {
@@ -85,9 +87,9 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       if (dirty) version = await save();
       if (version === null) return;
       if (action === "approve") {
-        const r = await postJson(`/api/requests/${requestId}/approve`, "POST", { version });
-        if (!r.ok) return setMessage({ kind: "error", text: r.error });
-        const email = (r.body as { email: string }).email;
+        const r = await callApi<{ email: string }>(`/api/requests/${requestId}/approve`, "POST", { version }, { offline: NOT_SENT });
+        if (!r.ok) return setMessage({ kind: "error", text: errorWithFields(r) });
+        const email = r.data.email;
         setMessage({ kind: "ok", text: `Version ${version} approved. ${email === "sent" ? "The rider was e-mailed the sheet link." : "The e-mail to the rider FAILED: see E-mails below."}` });
       } else setMessage({ kind: "ok", text: `Saved as draft version ${version}.` });
       router.refresh();
