@@ -13,6 +13,15 @@ const envSchema = z.object({
   MAIL_FAKE_PORT: z.coerce.number().int().positive().default(4025),
   MAIL_FROM: z.string().min(3).default("Sagwise demo shop <setup@sagwise.test>"),
   DEMO_PASSWORD: z.string().min(8).default("sagwise-demo"),
+  // How many proxies in front of the app append to X-Forwarded-For (0: clients connect directly).
+  TRUST_PROXY_HOPS: z.coerce.number().int().min(0).max(10).default(0),
+  // Shared photo storage for several instances (S3-compatible); unset keeps DATA_DIR/uploads.
+  S3_BUCKET: z.string().min(3).optional(),
+  S3_ENDPOINT: z.string().url().optional(),
+  S3_REGION: z.string().min(1).default("us-east-1"),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1").optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;

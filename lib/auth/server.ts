@@ -6,15 +6,17 @@ import { nextCookies } from "better-auth/next-js";
 import { admin, magicLink } from "better-auth/plugins";
 import { getDb, type AppDb } from "@/db/client";
 import * as schema from "@/db/schema";
+import { CLIENT_HEADER } from "@/lib/api/client-address";
 import { appBaseUrl } from "@/lib/env";
 import { authRoles, accessControl } from "./roles";
 import { resolveAuthSecret } from "./secret";
 import { MAGIC_LINK_MINUTES, sendSignInLink } from "./sign-in-mail";
 
 function createAuth(db: AppDb) {
+  const baseURL = appBaseUrl();
   return betterAuth({
     appName: "Sagwise",
-    baseURL: appBaseUrl(),
+    baseURL,
     secret: resolveAuthSecret(),
     database: drizzleAdapter(db, { provider: "pg", schema }),
     emailAndPassword: {
@@ -22,6 +24,15 @@ function createAuth(db: AppDb) {
       // Staff accounts come from the seed or an admin's invitation, never from open sign-up.
       disableSignUp: true,
       minPasswordLength: 10,
+    },
+    advanced: {
+      // The auth route writes the address lib/api/client-address.ts decided on (socket or trusted
+      // proxy hop) into CLIENT_HEADER, replacing any client value; X-Forwarded-For is not read.
+      ipAddress: { ipAddressHeaders: [CLIENT_HEADER], ipv6Subnet: 64 },
+      // Session cookies: never readable by scripts, not sent on cross-site subrequests, and Secure
+      // whenever the app is served over https (BETTER_AUTH_URL).
+      useSecureCookies: baseURL.startsWith("https://"),
+      defaultCookieAttributes: { httpOnly: true, sameSite: "lax" },
     },
     session: { expiresIn: 60 * 60 * 24 * 7, updateAge: 60 * 60 * 24 },
     plugins: [

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { text } from "./text";
 
 export const emailSchema = z
   .string()
@@ -9,7 +10,7 @@ export const emailSchema = z
 
 export const staffSignInSchema = z.object({
   email: emailSchema,
-  password: z.string().min(1, "Enter your password"),
+  password: text().min(1, "Enter your password"),
 });
 
 export const riderLinkSchema = z.object({ email: emailSchema });

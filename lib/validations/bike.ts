@@ -1,6 +1,7 @@
 // A catalog bike model: the engine's own bikeSpecSchema for the physics (it refuses a leverage curve
 // whose integral misses the shock stroke, naming rear.shockStrokeMm), plus the columns the pages list.
 import { z } from "zod";
+import { text } from "./text";
 import { bikeSpecSchema } from "@/lib/sizing";
 export { STROKE_TOLERANCE_FRACTION, STROKE_TOLERANCE_MIN_MM } from "@/lib/sizing/bike-schema";
 
@@ -26,7 +27,7 @@ const optionalYear = z
 
 export const bikeModelSchema = z
   .object({
-    name: z.string().trim().min(2, "Name the model (at least 2 characters)").max(120),
+    name: text().trim().min(2, "Name the model (at least 2 characters)").max(120),
     slug: z
       .string()
       .trim()
@@ -42,7 +43,7 @@ export const bikeModelSchema = z
       .regex(slugPattern, "Use lower-case letters, digits and single dashes"),
     yearFrom: optionalYear,
     yearTo: optionalYear,
-    notes: z.string().trim().max(2000).nullable().optional(),
+    notes: text().trim().max(2000).nullable().optional(),
     spec: bikeSpecSchema,
   })
   .superRefine((b, ctx) => {
@@ -55,7 +56,7 @@ export type BikeModelInput = z.input<typeof bikeModelSchema>;
 export type BikeModelValues = z.output<typeof bikeModelSchema>;
 
 export const catalogQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
+  q: text().trim().max(100).optional(),
   retired: z.enum(["hide", "show", "only"]).default("hide"),
 });
 

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { REQUEST_STATUSES } from "@/lib/requests/status";
+import { text } from "./text";
 import { disciplineSchema } from "@/lib/sizing";
 
 export const QUEUE_SORTS = [
@@ -20,11 +21,11 @@ const day = (field: string) =>
 export const queueQuerySchema = z
   .object({
     status: z.enum(REQUEST_STATUSES, { message: "Unknown status" }).optional(),
-    q: z.string().trim().max(100, "Search is limited to 100 characters").optional(),
+    q: text().trim().max(100, "Search is limited to 100 characters").optional(),
     discipline: disciplineSchema.optional(),
-    bikeClass: z.string().trim().max(60, "Bike class is limited to 60 characters").optional(),
+    bikeClass: text().trim().max(60, "Bike class is limited to 60 characters").optional(),
     // A staff user id, "me" (the caller) or "unassigned".
-    tuner: z.string().trim().max(100, "Tuner is limited to 100 characters").optional(),
+    tuner: text().trim().max(100, "Tuner is limited to 100 characters").optional(),
     from: day("From"),
     to: day("To"),
     page: z.coerce.number().int("Page must be a whole number").min(1, "Page starts at 1").default(1),

@@ -2,6 +2,7 @@
 // browser and the request on the server; the answers are stored exactly as given (values with
 // their units) and converted to SI only for the engine (lib/requests/sizing-input.ts).
 import { z } from "zod";
+import { text } from "./text";
 import {
   complaintSchema,
   disciplineSchema,
@@ -24,9 +25,9 @@ const positive = (field: string, max: number) =>
     .max(max, `The ${field} looks too large`);
 
 export const riderStepSchema = z.object({
-  name: z.string().trim().min(2, "Enter your name").max(100, "Keep the name under 100 characters"),
+  name: text().trim().min(2, "Enter your name").max(100, "Keep the name under 100 characters"),
   email: emailSchema,
-  phone: z.string().trim().max(30, "Keep the phone number under 30 characters").optional(),
+  phone: text().trim().max(30, "Keep the phone number under 30 characters").optional(),
   weight: z.object({ value: positive("weight", 600), unit: massUnitSchema }),
   gearIncluded: z.boolean(),
   height: z.object({ value: positive("height", 250), unit: heightUnitSchema }).optional(),
@@ -45,10 +46,10 @@ const springRateSchema = z.object({ value: positive("spring rate", 400), unit: r
 
 export const bikeStepSchema = z
   .object({
-    modelId: z.string().uuid("Pick a bike from the list, or choose “not listed”").nullable(),
+    modelId: text().uuid("Pick a bike from the list, or choose “not listed”").nullable(),
     notListed: z
       .object({
-        description: z.string().trim().min(2, "Describe the bike (make, size, type)").max(120),
+        description: text().trim().min(2, "Describe the bike (make, size, type)").max(120),
         rearWheelTravel: z.object({ value: positive("rear wheel travel", 500), unit: lengthUnitSchema }),
         forkTravel: z.object({ value: positive("fork travel", 400), unit: lengthUnitSchema }),
         mass: z.object({ value: positive("bike weight", 300), unit: massUnitSchema }).optional(),
@@ -57,7 +58,7 @@ export const bikeStepSchema = z
     year: z.coerce.number().int().min(1970, "Year looks too early").max(2100).optional(),
     currentForkSpring: springRateSchema.optional(),
     currentShockSpring: springRateSchema.optional(),
-    modifications: z.string().trim().max(1000).optional(),
+    modifications: text().trim().max(1000).optional(),
   })
   .superRefine((bike, ctx) => {
     if (!bike.modelId && !bike.notListed) {
@@ -76,7 +77,7 @@ const sagValue = z.coerce.number().min(0).max(400, "Sag looks too large").option
 
 export const feelStepSchema = z.object({
   complaints: z.array(complaintSchema).max(8).default([]),
-  notes: z.string().trim().max(2000, "Keep the notes under 2000 characters").optional(),
+  notes: text().trim().max(2000, "Keep the notes under 2000 characters").optional(),
   currentSag: z
     .object({
       unit: lengthUnitSchema,

@@ -1,9 +1,10 @@
 // Bodies of the staff review endpoints (app/api/requests/[id]/**).
 import { z } from "zod";
+import { text } from "./text";
 import { setupOverridesSchema } from "@/lib/sizing";
 
 const notes = (field: string) =>
-  z.string().trim().max(4000, `Keep the ${field} under 4000 characters`).nullish();
+  text().trim().max(4000, `Keep the ${field} under 4000 characters`).nullish();
 
 export const saveRecommendationSchema = z.object({
   /** The version the tuner was editing; a newer save by someone else answers 409 instead of overwriting. */
@@ -15,16 +16,16 @@ export const saveRecommendationSchema = z.object({
 export type SaveRecommendationBody = z.output<typeof saveRecommendationSchema>;
 
 export const askRiderSchema = z.object({
-  question: z.string().trim().min(5, "Write the question (at least 5 characters)").max(2000, "Keep the question under 2000 characters"),
+  question: text().trim().min(5, "Write the question (at least 5 characters)").max(2000, "Keep the question under 2000 characters"),
 });
 
 export const declineSchema = z.object({
-  reason: z.string().trim().min(5, "Give the rider a reason (at least 5 characters)").max(2000, "Keep the reason under 2000 characters"),
+  reason: text().trim().min(5, "Give the rider a reason (at least 5 characters)").max(2000, "Keep the reason under 2000 characters"),
 });
 
 export const assignSchema = z.object({
   /** A staff user id, or null to unassign. */
-  tunerId: z.string().trim().min(1, "Pick a tuner").max(100).nullable(),
+  tunerId: text().trim().min(1, "Pick a tuner").max(100).nullable(),
 });
 
 export const approveSchema = z.object({

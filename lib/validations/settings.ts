@@ -1,5 +1,6 @@
 // Shop settings (admin only): the single shop_settings row.
 import { z } from "zod";
+import { text } from "./text";
 
 const optionalText = (max: number) =>
   z
@@ -12,8 +13,8 @@ const optionalText = (max: number) =>
 
 export const shopSettingsSchema = z
   .object({
-    name: z.string().trim().min(2, "Give the shop's name").max(120),
-    email: z.string().trim().toLowerCase().email("Enter a contact e-mail address"),
+    name: text().trim().min(2, "Give the shop's name").max(120),
+    email: text().trim().toLowerCase().email("Enter a contact e-mail address"),
     phone: optionalText(40),
     address: optionalText(300),
     website: z

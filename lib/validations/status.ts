@@ -1,10 +1,11 @@
 // What a rider sends from the private status page: an answer to the tuner's question, and the sag
 // measured after fitting the springs (values as given, in mm or inches).
 import { z } from "zod";
+import { text } from "./text";
 import { lengthUnitSchema } from "./request";
 
 /** A status token from the rider's link, or nothing when the rider is signed in by e-mail. */
-export const statusTokenSchema = z.string().min(20).max(200).optional();
+export const statusTokenSchema = text().min(20).max(200).optional();
 
 export const riderAnswerSchema = z.object({
   token: statusTokenSchema,

@@ -1,5 +1,6 @@
 // A spring on the shelf: entered in any rate unit, stored in N/mm (convertRate, exact factors).
 import { z } from "zod";
+import { text } from "./text";
 import { convertRate, rateUnitSchema } from "@/lib/sizing";
 
 const optionalMm = (label: string, max: number) =>
@@ -18,7 +19,7 @@ export const springStockSchema = z
     quantity: z.number().int("Quantity is a whole number").min(0, "Quantity cannot be negative").max(999),
     freeLengthMm: optionalMm("Free length", 800),
     innerDiameterMm: optionalMm("Inner diameter", 120),
-    fitNotes: z.string().trim().max(500).nullable().optional(),
+    fitNotes: text().trim().max(500).nullable().optional(),
   })
   .transform((s) => ({ ...s, rateNmm: convertRate(s.rate, s.rateUnit, "N/mm") }))
   .superRefine((s, ctx) => {

@@ -1,6 +1,7 @@
 // Setup targets per discipline and skill (shape: TargetRowValues of lib/requests/sizing-input.ts) and
 // the clicker rules table (the engine's clickerRuleSchema).
 import { z } from "zod";
+import { text } from "./text";
 import { clickerRuleSchema, disciplineSchema, sagTargetFractionsSchema, skillLevelSchema } from "@/lib/sizing";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 
@@ -20,6 +21,6 @@ export const clickerRulesSchema = z.object({ rules: z.array(clickerRuleSchema).m
 
 export const targetPreviewSchema = targetKeySchema.extend({
   values: targetRowValuesSchema,
-  bikeModelId: z.string().uuid("Choose a bike"),
+  bikeModelId: text().uuid("Choose a bike"),
   riderMassKg: z.number().min(30, "At least 30 kg").max(200, "At most 200 kg"),
 });

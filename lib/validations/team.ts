@@ -1,10 +1,11 @@
 // Team administration: invitations, role changes, deactivation, accepting an invitation.
 import { z } from "zod";
+import { text } from "./text";
 
 export const staffRoleSchema = z.enum(["tuner", "admin"], { message: "Choose tuner or admin" });
 
 export const inviteSchema = z.object({
-  email: z.string().trim().toLowerCase().email("Enter the person's e-mail address"),
+  email: text().trim().toLowerCase().email("Enter the person's e-mail address"),
   role: staffRoleSchema,
 });
 
@@ -13,8 +14,8 @@ export const memberUpdateSchema = z
   .refine((v) => v.role !== undefined || v.active !== undefined, { message: "Give a role or active", path: ["role"] });
 
 export const acceptInviteSchema = z.object({
-  token: z.string().min(20, "This invitation link is incomplete").max(200),
-  name: z.string().trim().min(2, "Enter your name").max(80),
+  token: text().min(20, "This invitation link is incomplete").max(200),
+  name: text().trim().min(2, "Enter your name").max(80),
   // better-auth is configured with minPasswordLength 10 (lib/auth/server.ts).
-  password: z.string().min(10, "Use at least 10 characters").max(128, "At most 128 characters"),
+  password: text().min(10, "Use at least 10 characters").max(128, "At most 128 characters"),
 });

@@ -3,6 +3,7 @@ import { http, HttpResponse } from "msw";
 import type { SetupServer } from "msw/node";
 import { POST as authPost, GET as authGet } from "@/app/api/auth/[...all]/route";
 import { appBaseUrl, mailBaseUrl } from "@/lib/env";
+import { fromClient } from "./client";
 
 export const ORIGIN = () => appBaseUrl();
 
@@ -18,7 +19,7 @@ export async function signInStaff(email: string, password: string): Promise<Resp
   return authPost(
     new Request(`${ORIGIN()}/api/auth/sign-in/email`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: ORIGIN() },
+      headers: { "content-type": "application/json", origin: ORIGIN(), ...fromClient() },
       body: JSON.stringify({ email, password }),
     }),
   );
@@ -42,7 +43,7 @@ export async function signInWithEmailLink(email: string, sent: ReturnType<typeof
   const asked = await authPost(
     new Request(`${ORIGIN()}/api/auth/sign-in/magic-link`, {
       method: "POST",
-      headers: { "content-type": "application/json", origin: ORIGIN() },
+      headers: { "content-type": "application/json", origin: ORIGIN(), ...fromClient() },
       body: JSON.stringify({ email, callbackURL: "/my-requests" }),
     }),
   );
@@ -50,6 +51,6 @@ export async function signInWithEmailLink(email: string, sent: ReturnType<typeof
   const message = sent.findLast((m) => m.to.includes(email));
   const link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(message?.html ?? "")?.[1]?.replaceAll("&amp;", "&");
   if (!link) throw new Error("no sign-in link in the captured e-mail");
-  const verified = await authGet(new Request(link, { headers: { origin: ORIGIN() } }));
+  const verified = await authGet(new Request(link, { headers: { origin: ORIGIN(), ...fromClient() } }));
   return { link, response: verified, cookie: cookieFrom(verified) };
 }

@@ -14,6 +14,7 @@ import { listAuditForRequest } from "@/db/queries/audit";
 import { stableUuid } from "@/db/seed-demo";
 import { recommendationSchema } from "@/lib/sizing";
 import { setupTestApp } from "../helpers/app";
+import { fromClient } from "../helpers/client";
 import { ORIGIN } from "../helpers/auth";
 import { heicHeader, pdfBytes, tinyJpeg, tinyPng } from "../fixtures/images";
 
@@ -35,8 +36,8 @@ function answers(overrides: Record<string, unknown> = {}) {
 }
 
 // Each call comes from its own address unless a test asks otherwise, so the limiter stays out of the way.
-const post = (body: BodyInit, headers: Record<string, string> = {}, from = `10.0.0.${++ip}`) =>
-  submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body, headers: { "x-forwarded-for": from, ...headers } }), undefined as never);
+const post = (body: BodyInit, headers: Record<string, string> = {}, from = `10.0.${++ip >> 8}.${ip & 255}`) =>
+  submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body, headers: { ...fromClient(from), ...headers } }), undefined as never);
 const postJson = (value: unknown, from?: string) => post(JSON.stringify(value), { "content-type": "application/json" }, from);
 function postForm(value: unknown, files: { bytes: Uint8Array; name: string; type: string }[] = []) {
   const form = new FormData();

@@ -16,6 +16,7 @@ import { resolveAuthSecret } from "@/lib/auth/secret";
 import { demoStatusToken } from "@/lib/requests/token";
 import { sagVerdict, type Recommendation, type SizingInput } from "@/lib/sizing";
 import { setupTestApp } from "../helpers/app";
+import { fromClient } from "../helpers/client";
 import { cookieFrom, ORIGIN, signInStaff, signInWithEmailLink } from "../helpers/auth";
 import { tinyPng } from "../fixtures/images";
 
@@ -30,7 +31,7 @@ const postTo = (handler: typeof answer, requestId: string, body: unknown, cookie
   handler(
     new Request(`${ORIGIN()}/api/status/${requestId}/x`, {
       method: "POST",
-      headers: { "content-type": "application/json", "x-forwarded-for": `10.1.0.${++ip}`, ...(cookie ? { cookie } : {}) },
+      headers: { "content-type": "application/json", ...fromClient(`10.1.${++ip >> 8}.${ip & 255}`), ...(cookie ? { cookie } : {}) },
       body: JSON.stringify(body),
     }),
     params(requestId),
@@ -150,7 +151,7 @@ describe("GET /api/uploads/:id", () => {
     );
     const png = tinyPng();
     form.append("photos", new File([png as BlobPart], "<script>.html", { type: "text/html" }));
-    const created = await submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: { "x-forwarded-for": "10.2.0.1" } }), undefined as never);
+    const created = await submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient("10.2.0.1") }), undefined as never);
     expect(created.status).toBe(201);
     const { id: requestId, statusUrl } = (await created.json()) as { id: string; statusUrl: string };
     const riderToken = statusUrl.split("/").pop()!;

@@ -3,10 +3,11 @@
 import { z } from "zod";
 import { listActiveBikes } from "@/db/queries/intake";
 import { json, route } from "@/lib/api/route";
+import { text } from "@/lib/validations/text";
 
 export const dynamic = "force-dynamic";
 
-const querySchema = z.object({ q: z.string().trim().max(60, "Keep the search under 60 characters").optional() });
+const querySchema = z.object({ q: text().trim().max(60, "Keep the search under 60 characters").optional() });
 
 export const GET = route({ access: "public", query: querySchema }, async ({ query }) => {
   const bikes = await listActiveBikes(query.q || undefined);

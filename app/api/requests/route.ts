@@ -29,7 +29,7 @@ export const GET = route({ access: STAFF_ROLES, query: queueQuery }, async ({ us
 
 // A rider sends one request, maybe a corrected second: 8 per 15 minutes per client stops floods
 // without getting in the way of a real rider.
-const limitSubmissions = createLimiter(8, 15 * 60);
+const limitSubmissions = createLimiter("submit", 8, 15 * 60);
 
 const bad = (field: string, message: string, status: 400 | 413 = 400) =>
   status === 413 ? new TooLargeError(message, { [field]: message }) : new ValidationError(message, { [field]: message });

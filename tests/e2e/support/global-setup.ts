@@ -65,6 +65,8 @@ export default async function globalSetup() {
     MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
     // The browser tests run on the embedded database even when the shell points at PostgreSQL.
     DATABASE_URL: "",
+    // The browser tests send X-Forwarded-For as one proxy in front would (tests/e2e/support/fixtures.ts).
+    TRUST_PROXY_HOPS: "1",
   };
 
   const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "inherit" });

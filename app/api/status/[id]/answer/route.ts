@@ -5,7 +5,7 @@ import { requireRiderAccess } from "@/lib/api/rider-access";
 import { idParams, json, route } from "@/lib/api/route";
 import { riderAnswerSchema } from "@/lib/validations/status";
 
-const limit = createLimiter(20, 15 * 60);
+const limit = createLimiter("rider-answer", 20, 15 * 60);
 
 // Public on purpose: the status token (or the rider's session) is checked by requireRiderAccess.
 export const POST = route(

@@ -5,7 +5,7 @@ import { idParams, json, route } from "@/lib/api/route";
 import { reportSag } from "@/lib/requests/sag-follow-up";
 import { sagReportSchema } from "@/lib/validations/status";
 
-const limit = createLimiter(20, 15 * 60);
+const limit = createLimiter("sag-report", 20, 15 * 60);
 
 // Public on purpose: the status token (or the rider's session) is checked by requireRiderAccess.
 export const POST = route(
