@@ -5,7 +5,6 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import type { RiderStatus } from "@/db/queries/status";
 import { STATUS_NEXT_STEP } from "@/lib/requests/status";
 import { sheetPath } from "@/lib/requests/token";
-import type { SagVerdict } from "@/lib/sizing";
 import { AnswerForm } from "./answer-form";
 import { AnswersList } from "./answers-list";
 import { SafetyCaution } from "./safety-caution";
@@ -18,7 +17,7 @@ const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4
 export function StatusView({ data, token, justSent }: { data: RiderStatus; token?: string; justSent?: boolean }) {
   const { request, versions, messages, photos, reports } = data;
   const withToken = (path: string) => (token ? `${path}${path.includes("?") ? "&" : "?"}token=${encodeURIComponent(token)}` : path);
-  const answers = request.answers as { rider?: { weight?: { unit?: string } } };
+  const answers = request.answers;
   const metric = answers.rider?.weight?.unit !== "lb";
   const lastQuestion = [...messages].reverse().find((m) => m.author === "tuner");
   return (
@@ -95,7 +94,7 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
             <div className="flex flex-col gap-2">
               <h3 className="font-semibold">Your earlier reports</h3>
               {reports.map((r) => {
-                const verdict = r.verdict as Partial<Record<"front" | "rear", SagVerdict>>;
+                const verdict = r.verdict;
                 return (
                   <div key={r.id} className="flex flex-col gap-2">
                     <p className="text-sm text-stone-600">Reported {formatDay(r.createdAt)}</p>

@@ -140,7 +140,9 @@ export async function findApprovedVersion(requestId: string) {
   return row ?? null;
 }
 
-export async function insertSagReport(report: { requestId: string; versionId: string; version: number; measured: unknown; verdict: unknown }) {
+export async function insertSagReport(
+  report: Pick<typeof sagReports.$inferInsert, "requestId" | "versionId" | "measured" | "verdict"> & { versionId: string; version: number },
+) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [row] = await tx

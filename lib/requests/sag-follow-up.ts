@@ -4,7 +4,7 @@
 import { findApprovedVersion, insertSagReport } from "@/db/queries/status";
 import { ConflictError, ValidationError } from "@/lib/errors";
 import { toMm } from "@/lib/requests/sizing-input";
-import { SizingInputError, sagVerdict, type Recommendation, type SagVerdict, type SizingInput } from "@/lib/sizing";
+import { SizingInputError, sagVerdict, type SagVerdict } from "@/lib/sizing";
 import type { SagReport } from "@/lib/validations/status";
 
 type End = "front" | "rear";
@@ -19,8 +19,7 @@ const round = (v: number) => Math.round(v * 100) / 100;
 export async function reportSag(requestId: string, report: SagReport) {
   const approved = await findApprovedVersion(requestId);
   if (!approved) throw new ConflictError("Sag can be reported once the shop has approved your setup.");
-  const input = approved.input as SizingInput;
-  const recommendation = approved.output as Recommendation;
+  const { input, output: recommendation } = approved;
   const mm: Partial<Record<End, EndMm>> = {};
   const verdict: Partial<Record<End, SagVerdict>> = {};
   for (const end of ["front", "rear"] as const) {

@@ -12,9 +12,9 @@ import { SizingInputError, evaluateSetup, type SetupOverrides, type SizingInput 
 import type { SaveRecommendationBody } from "@/lib/validations/review";
 import { assertCanStart, auditBy, lockRequest, moveStatus, type Actor } from "./workflow";
 
-function recompute(input: unknown, overrides: SetupOverrides) {
+function recompute(input: SizingInput, overrides: SetupOverrides) {
   try {
-    return evaluateSetup(input as SizingInput, overrides);
+    return evaluateSetup(input, overrides);
   } catch (error) {
     if (!(error instanceof SizingInputError)) throw error;
     const fields = Object.fromEntries(error.issues.map((i) => [i.path, i.message]));
@@ -32,7 +32,7 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     if (latest.version !== body.basedOnVersion)
       throw new ConflictError(`Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
     const output = recompute(latest.input, overrides);
-    const changes = diffOverrides(latest.overrides as SetupOverrides, overrides);
+    const changes = diffOverrides(latest.overrides, overrides);
     const notesForRider = body.notesForRider || null;
     const internalNotes = body.internalNotes || null;
     const notesChanged = {

@@ -7,7 +7,6 @@ import { BikeForm } from "@/components/catalog/bike-form";
 import { getBikeModel } from "@/db/queries/bikes";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import type { BikeSpecInput } from "@/lib/sizing";
 import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Bike model" };
@@ -38,7 +37,7 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
       <BikeForm
         key={model.updatedAt.toISOString()}
         id={model.id}
-        initial={{ name: model.name, slug: model.slug, bikeClass: model.bikeClass, yearFrom: model.yearFrom, yearTo: model.yearTo, notes: model.notes, spec: model.spec as BikeSpecInput }}
+        initial={{ name: model.name, slug: model.slug, bikeClass: model.bikeClass, yearFrom: model.yearFrom, yearTo: model.yearTo, notes: model.notes, spec: model.spec }}
       />
     </div>
   );

@@ -13,7 +13,6 @@ import { getRequestDetail, listStaffMembers } from "@/db/queries/review";
 import { startReview } from "@/lib/review/workflow";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import type { Recommendation, SetupOverrides, SizingInput } from "@/lib/sizing";
 import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "Request" };
@@ -74,11 +73,11 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         <RecommendationEditor
           key={shown.version}
           requestId={id}
-          input={shown.input as SizingInput}
+          input={shown.input}
           latest={{
             version: shown.version,
             state: shown.state,
-            overrides: (shown.overrides ?? {}) as SetupOverrides,
+            overrides: shown.overrides ?? {},
             notesForRider: shown.notesForRider,
             internalNotes: shown.internalNotes,
           }}
@@ -87,8 +86,8 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         <VersionView
           version={shown.version}
           state={shown.state}
-          input={shown.input as SizingInput}
-          output={shown.output as Recommendation}
+          input={shown.input}
+          output={shown.output}
           notesForRider={shown.notesForRider}
           internalNotes={shown.internalNotes}
         />
