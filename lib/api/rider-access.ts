@@ -3,6 +3,7 @@
 import { findRequestForViewer, type RiderViewer } from "@/db/queries/status";
 import { AuthError, getSessionUser, type SessionUser } from "@/lib/auth/guard";
 import { NotFoundError } from "@/lib/errors";
+import { isUuid } from "@/lib/validations/id";
 
 /**
  * Whether the caller is the request's rider. 401 when there is neither a token nor a session.
@@ -21,7 +22,7 @@ export async function isRequestRider(
     if (!session) throw new AuthError(401);
     viewer = { email: session.email };
   }
-  return /^[0-9a-f-]{36}$/i.test(requestId) && (await findRequestForViewer(viewer, requestId)) !== null;
+  return isUuid(requestId) && (await findRequestForViewer(viewer, requestId)) !== null;
 }
 
 /** The request id when the caller is its rider; otherwise 404, so nothing tells whether it exists. */

@@ -14,6 +14,7 @@ import { requireRole, type SessionUser } from "@/lib/auth/guard";
 import type { Role } from "@/lib/auth/roles";
 import { NotFoundError, ValidationError } from "@/lib/errors";
 import { withErrors } from "./respond";
+import { uuidSchema } from "@/lib/validations/id";
 
 type Access = readonly Role[] | "public";
 
@@ -86,7 +87,7 @@ export function route<
 }
 
 /** `[id]` segments that name a row by uuid (lower-cased, as the database stores it). */
-export const idParams = z.object({ id: z.uuid().transform((id) => id.toLowerCase()) });
+export const idParams = z.object({ id: uuidSchema.transform((id) => id.toLowerCase()) });
 
 /** Shorthand for a JSON answer. */
 export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });

@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { z } from "zod";
 import { BikeActions } from "@/components/catalog/bike-actions";
 import { BikeForm } from "@/components/catalog/bike-form";
 import { getBikeModel } from "@/db/queries/bikes";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
+import { isUuid } from "@/lib/validations/id";
 
 export const metadata: Metadata = { title: "Bike model" };
 export const dynamic = "force-dynamic";
@@ -15,7 +15,7 @@ export const dynamic = "force-dynamic";
 export default async function BikePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   await requireRole(STAFF_ROLES, { page: `/shop/catalog/${id}` });
-  if (!z.uuid().safeParse(id).success) notFound();
+  if (!isUuid(id)) notFound();
   const model = await getBikeModel(id);
   if (!model) notFound();
   return (

@@ -14,16 +14,16 @@ import { startReview } from "@/lib/review/workflow";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
+import { isUuid } from "@/lib/validations/id";
 
 export const metadata: Metadata = { title: "Request" };
 export const dynamic = "force-dynamic";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export default async function RequestPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
   const { id } = await params;
   const user = await requireRole(STAFF_ROLES, { page: `/shop/requests/${id}` });
-  if (!UUID.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   let detail = await getRequestDetail(id);
   if (!detail) notFound();
   // A tuner opening a new request starts its review (audited like any status change).
