@@ -152,8 +152,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
         </div>
       </div>
       <div className="grid gap-6 lg:grid-cols-2">
-        <ForceChart id="live-rear" title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
-        <ForceChart id="live-fork" title="Fork: force against fork travel" spec={forkForceChart(r)} />
+        <ForceChart title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
+        <ForceChart title="Fork: force against fork travel" spec={forkForceChart(r)} />
       </div>
       <details className="rounded-lg border border-stone-200 bg-white p-3">
         <summary className="cursor-pointer font-medium">Why these figures (engine reasons)</summary>
