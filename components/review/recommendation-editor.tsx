@@ -3,15 +3,17 @@
 // The adjust editor: every change re-runs the engine at once and shows the consequences against the
 // engine's own proposal; "Save draft" stores the overrides (the server recomputes), "Approve" freezes
 // the saved draft and e-mails the rider.
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
+import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { ForceChart } from "@/components/charts/force-chart";
 import { Button } from "@/components/ui/button";
 import { forkForceChart, rearForceChart } from "@/lib/charts/recommendation-charts";
 import { callApi, errorWithFields } from "@/lib/api-client";
 import { diffOverrides } from "@/lib/review/overrides-diff";
 import type { SetupOverrides, SizingInput } from "@/lib/sizing";
-import { overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
+import { editorSchema, flatErrors, overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
 import { ClickerInputs, FrontInputs, RearInputs } from "./figure-inputs";
 import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
@@ -31,7 +33,6 @@ export interface EditableVersion {
 export function RecommendationEditor({ requestId, input, latest }: { requestId: string; input: SizingInput; latest: EditableVersion }) {
   const router = useRouter();
   const initial = useMemo(() => valuesFrom(latest.overrides, latest.notesForRider, latest.internalNotes), [latest]);
-  const [values, setValues] = useState<EditorValues>(initial);
   const [message, setMessage] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
@@ -39,7 +40,16 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
 
   const engine = useMemo(() => evaluateLive(input, {}), [input]);
   const air = engine.ok && engine.rec.front.kind === "air";
-  const { overrides, errors: parseErrors } = overridesFrom(values, air);
+  // The form's state lives in react-hook-form; its resolver checks the typed values with the save
+  // endpoint's own schema. Every change re-renders (useWatch), so the engine runs on every keystroke.
+  const form = useForm<EditorValues>({
+    defaultValues: initial,
+    mode: "onChange",
+    resolver: zodResolver(editorSchema(air) as never) as unknown as Resolver<EditorValues>,
+  });
+  const values = { ...initial, ...useWatch({ control: form.control }) } as EditorValues;
+  const schemaErrors = flatErrors(form.formState.errors);
+  const { overrides } = overridesFrom(values, air);
   // Re-run on every render: the engine takes well under a millisecond.
   const live = evaluateLive(input, overrides);
   // The last figures that computed (by value), so the screen does not jump while a value is half typed.
@@ -47,19 +57,20 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   const [lastGood, setLastGood] = useState(() => ({ key: overridesKey, rec: live.ok ? live.rec : null }));
   if (live.ok && lastGood.key !== overridesKey) setLastGood({ key: overridesKey, rec: live.rec });
   const shown = live.ok ? live.rec : lastGood.rec;
-  const errors = { ...serverErrors, ...parseErrors, ...(live.ok ? {} : live.errors) };
+  const errors = { ...serverErrors, ...schemaErrors, ...(live.ok ? {} : live.errors) };
 
   const dirty =
     diffOverrides(latest.overrides, overrides).length > 0 ||
     values.notesForRider.trim() !== (latest.notesForRider ?? "") ||
     values.internalNotes.trim() !== (latest.internalNotes ?? "");
   const frozen = latest.state !== "draft";
-  const invalid = Object.keys(parseErrors).length > 0 || !live.ok;
+  const invalid = Object.keys(schemaErrors).length > 0 || !live.ok;
 
   if (!engine.ok || !shown) return <p role="alert">The engine could not size this request: {Object.values(engine.ok ? {} : engine.errors).join("; ")}</p>;
 
   const set = (patch: Partial<EditorValues>) => {
-    setValues((v) => ({ ...v, ...patch }));
+    for (const [name, value] of Object.entries(patch))
+      form.setValue(name as keyof EditorValues, value as never, { shouldDirty: true, shouldValidate: true });
     setServerErrors({});
     setMessage(null);
   };
@@ -114,7 +125,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
         {!live.ok ? " (Showing the last valid figures: fix the marked field.)" : ""}
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
-        <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={(e) => { e.preventDefault(); void run("save"); }}>
+        <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={form.handleSubmit(() => run("save"))}>
           <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} current={input.currentSprings?.shockRateNmm} />
           <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} current={input.currentSprings?.forkRateNmm} />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
@@ -137,10 +148,10 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             <Button type="submit" variant="secondary" disabled={busy || invalid || !dirty}>
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
-            <Button onClick={() => void run("approve")} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
+            <Button onClick={() => void form.handleSubmit(() => run("approve"))()} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
               {dirty ? "Save and approve" : "Approve"} — e-mail the rider
             </Button>
-            <Button variant="ghost" disabled={busy || !dirty} onClick={() => { setValues(initial); setServerErrors({}); setMessage(null); }}>
+            <Button variant="ghost" disabled={busy || !dirty} onClick={() => { form.reset(initial); setServerErrors({}); setMessage(null); }}>
               Undo unsaved changes
             </Button>
           </div>
