@@ -2,9 +2,9 @@
 
 // The rider's setup request, one step at a time. Every change goes to the draft in localStorage;
 // the request is sent once from the review step and the draft is cleared only after a 201.
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { Providers } from "@/components/providers";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/lib/api-client";
 import { BikeStep } from "./bike-step";
@@ -33,7 +33,6 @@ function send(draft: Draft, photos: File[]) {
 }
 
 export function RequestForm({ metric }: { metric: boolean }) {
-  const [queryClient] = useState(() => new QueryClient());
   const router = useRouter();
   const [draft, setDraft] = useState<Draft | null>(null);
   const [restored, setRestored] = useState(false);
@@ -116,7 +115,7 @@ export function RequestForm({ metric }: { metric: boolean }) {
   const photoError = problem?.fields ? Object.entries(problem.fields).find(([k]) => k.startsWith("photos"))?.[1] : undefined;
 
   return (
-    <QueryClientProvider client={queryClient}>
+    <Providers>
       <div className="flex flex-col gap-5">
         <StepIndicator step={draft.step} reached={draft.reached} onGo={go} />
         {restored ? (
@@ -148,6 +147,6 @@ export function RequestForm({ metric }: { metric: boolean }) {
           <ReviewStep key={`review-${generation}`} {...common("review")} onNext={submit} draft={draft} photos={photos} submitting={submitting} problem={problem} onGo={go} />
         ) : null}
       </div>
-    </QueryClientProvider>
+    </Providers>
   );
 }
