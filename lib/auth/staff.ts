@@ -1,5 +1,5 @@
-// Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and, later, the
-// admin's invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
+// Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and the admin's
+// invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
 import { findInviteByTokenHash, insertInvite } from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
