@@ -11,6 +11,10 @@ import { applyMigrations } from "./migrate";
 
 export type AppDb = PgDatabase<PgQueryResultHKT, typeof schema>;
 export type DatabaseKind = "pglite" | "postgres";
+/** A drizzle transaction, as handed to the callback of `db.transaction`. */
+export type Tx = Parameters<Parameters<AppDb["transaction"]>[0]>[0];
+/** Where a query runs: the database itself or the caller's open transaction. */
+export type Executor = AppDb | Tx;
 
 export interface DatabaseHandle {
   db: AppDb;

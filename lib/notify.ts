@@ -1,14 +1,15 @@
 // Every e-mail a rider gets about a request goes through here: it mints a fresh private status link,
-// renders the template, sends it through lib/mail (recorded in outbound_emails, retried with
-// backoff) and writes the audit event. A failed send never undoes the business step that caused it.
+// renders the template and queues it in the outbox (lib/mail/outbox.ts) IN THE CALLER'S TRANSACTION,
+// so the e-mail exists exactly when the change it reports was committed. The worker sends it after
+// the commit and writes the email.sent / email.failed audit event in the actor's name; a failed send
+// never undoes the business step that caused it.
 import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { recordAudit } from "@/db/queries/audit";
+import type { Executor } from "@/db/client";
 import { getShopName } from "@/db/queries/settings";
 import { createStatusLink } from "@/db/queries/status-links";
 import { setupRequests } from "@/db/schema";
 import { appBaseUrl } from "@/lib/env";
-import { sendTemplateEmail, type SendMailOptions, type SendMailResult } from "@/lib/mail";
+import { queueTemplateEmail, type QueuedMail } from "@/lib/mail";
 import { sheetPath, statusPath } from "@/lib/requests/token";
 
 export type RiderNotice =
@@ -22,16 +23,16 @@ export interface NotifyOptions {
   statusToken?: string;
   /** Who caused the e-mail, for the audit trail. */
   actor?: { userId: string | null; label: string };
-  mail?: SendMailOptions;
 }
 
+/** Queues the rider's e-mail in `tx`; the caller calls kickOutbox() once the transaction committed. */
 export async function notifyRider(
+  tx: Executor,
   requestId: string,
   notice: RiderNotice,
   options: NotifyOptions = {},
-): Promise<SendMailResult> {
-  const db = await getDb();
-  const [request] = await db
+): Promise<QueuedMail> {
+  const [request] = await tx
     .select({
       number: setupRequests.number,
       riderName: setupRequests.riderName,
@@ -42,35 +43,28 @@ export async function notifyRider(
     .where(eq(setupRequests.id, requestId));
   if (!request) throw new Error(`notifyRider: no request ${requestId}`);
 
-  const token = options.statusToken ?? (await createStatusLink(requestId));
+  const token = options.statusToken ?? (await createStatusLink(requestId, tx));
   const base = appBaseUrl();
   const statusUrl = `${base}${statusPath(token)}`;
   const common = {
-    shopName: await getShopName(),
+    shopName: await getShopName(tx),
     riderName: request.riderName,
     requestNumber: request.number,
     statusUrl,
   };
   const envelope = { to: request.riderEmail, requestId };
+  const audit = { audit: { actorUserId: options.actor?.userId ?? null, actorLabel: options.actor?.label ?? "system" } };
 
-  let result: SendMailResult;
   switch (notice.kind) {
     case "request-received":
-      result = await sendTemplateEmail("request-received", { ...common, bikeLabel: request.bikeLabel }, envelope, options.mail);
-      break;
+      return queueTemplateEmail(tx, "request-received", { ...common, bikeLabel: request.bikeLabel }, envelope, audit);
     case "tuner-question":
-      result = await sendTemplateEmail(
-        "tuner-question",
-        { ...common, question: notice.question, tunerName: notice.tunerName },
-        envelope,
-        options.mail,
-      );
-      break;
+      return queueTemplateEmail(tx, "tuner-question", { ...common, question: notice.question, tunerName: notice.tunerName }, envelope, audit);
     case "request-declined":
-      result = await sendTemplateEmail("request-declined", { ...common, reason: notice.reason }, envelope, options.mail);
-      break;
+      return queueTemplateEmail(tx, "request-declined", { ...common, reason: notice.reason }, envelope, audit);
     case "sheet-ready":
-      result = await sendTemplateEmail(
+      return queueTemplateEmail(
+        tx,
         "sheet-ready",
         {
           ...common,
@@ -80,23 +74,7 @@ export async function notifyRider(
           sheetUrl: `${base}${sheetPath(requestId, notice.version, token)}`,
         },
         envelope,
-        options.mail,
+        audit,
       );
-      break;
   }
-
-  await recordAudit({
-    requestId,
-    actorUserId: options.actor?.userId ?? null,
-    actorLabel: options.actor?.label ?? "system",
-    action: result.status === "sent" ? "email.sent" : "email.failed",
-    detail: {
-      template: notice.kind,
-      to: request.riderEmail,
-      outboundEmailId: result.outboundEmailId,
-      attempts: result.attempts,
-      ...(result.status === "failed" ? { error: result.error } : {}),
-    },
-  });
-  return result;
 }

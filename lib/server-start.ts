@@ -1,7 +1,9 @@
-// Before the first request: refuse to run in production without BETTER_AUTH_SECRET, and open and
-// migrate the database (so a fresh data folder is ready, and a locked one fails at start, loudly).
+// Before the first request: refuse to run in production without BETTER_AUTH_SECRET, open and
+// migrate the database (so a fresh data folder is ready, and a locked one fails at start, loudly),
+// and start the e-mail outbox worker, which first sends what an earlier run left queued.
 import { getDatabase } from "@/db/client";
 import { resolveAuthSecret } from "@/lib/auth/secret";
+import { startOutboxWorker } from "@/lib/mail";
 
 export async function prepareServer(): Promise<void> {
   try {
@@ -11,4 +13,5 @@ export async function prepareServer(): Promise<void> {
     console.error(`[sagwise] cannot start: ${(error as Error).message}`);
     process.exit(1);
   }
+  startOutboxWorker();
 }

@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import { bikeModelSchema, type BikeModelInput, type BikeModelValues } from "@/lib/validations/bike";
-import { AIR_FIELDS, CLICKERS, FORK_FIELDS, FORK_KIND_LABELS, MASS_FIELDS, REAR_FIELDS, type NumField } from "./bike-fields";
+import { AIR_FIELDS, CLICKERS, FORK_FIELDS, FORK_KIND_LABELS, FORK_SPRING_FIELDS, MASS_FIELDS, REAR_FIELDS, type NumField } from "./bike-fields";
 import { CurveTable } from "./curve-table";
 import { callApi } from "@/lib/api-client";
 import { LeveragePreview } from "./leverage-preview";
@@ -22,6 +22,7 @@ export function withoutEmptyOptionals(m: BikeFormValues): BikeFormValues {
   const empty = (o: object | undefined) => !o || Object.values(o).every((v) => v === undefined);
   if (empty(spec.riderMassRangeKg)) delete spec.riderMassRangeKg;
   if (empty(spec.fork.air)) delete spec.fork.air;
+  if (empty(spec.fork.stockSpring)) delete spec.fork.stockSpring;
   return { ...m, spec };
 }
 
@@ -112,7 +113,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
           </select>
         </label>
         <div className="grid gap-4 sm:grid-cols-3">{FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}</div>
-        {forkKind === "air" ? <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div> : null}
+        {forkKind === "air" ? <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div> : <div className="grid gap-4 sm:grid-cols-3">{FORK_SPRING_FIELDS.map(num)}</div>}
         {errorAt(errors, "spec.fork.air") ? <p className="text-sm font-medium text-red-700">{errorAt(errors, "spec.fork.air")}</p> : null}
       </section>
 

@@ -1,5 +1,5 @@
 // Words the rider reads for each answer value (the stored values stay the engine's vocabulary).
-import type { Complaint, Discipline, JumpSize, RidingStyle, SkillLevel, Terrain } from "@/lib/sizing";
+import type { Complaint, Discipline, JumpSize, RateBasis, RidingStyle, SkillLevel, Terrain } from "@/lib/sizing";
 
 export const SKILL_LABELS: Record<SkillLevel, string> = {
   beginner: "Beginner",
@@ -54,3 +54,9 @@ export const COMPLAINT_LABELS: Record<Complaint, string> = {
 
 export const label = <K extends string>(labels: Record<K, string>, value: unknown): string =>
   typeof value === "string" && value in labels ? labels[value as K] : String(value ?? "—");
+
+/** How the engine finds the ideal spring rate (lib/sizing/README.md, "Model 2"). */
+export const RATE_BASIS_LABELS: Record<RateBasis, string> = {
+  "ride-frequency": "Ride frequency — same feel as the stock springs for their reference rider",
+  "sag-window": "Sag window — meets both race and static sag targets",
+};

@@ -74,7 +74,7 @@ function measuredText(value: unknown, prefix = ""): string[] {
   return Object.entries(value as Record<string, unknown>).flatMap(([k, v]) => measuredText(v, prefix ? `${prefix} ${k}` : k));
 }
 
-const VERDICT_WORDS: Record<string, string> = { "too-soft": "Too soft", right: "Right", "too-stiff": "Too stiff" };
+const VERDICT_WORDS: Record<string, string> = { "too-soft": "Too soft", right: "Right", "too-stiff": "Too stiff", recheck: "Measure again" };
 
 export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReports"] }) {
   return (

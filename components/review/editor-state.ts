@@ -3,10 +3,12 @@
 // engine's exact factors (convertRate).
 import { z } from "zod";
 import { compactOverrides } from "@/lib/review/overrides-diff";
-import { CLICKER_IDS, convertRate, type ClickerId, type RateUnit, type SetupOverrides } from "@/lib/sizing";
+import { CLICKER_IDS, convertRate, type ClickerId, type RateBasis, type RateUnit, type SetupOverrides } from "@/lib/sizing";
 import { saveRecommendationSchema } from "@/lib/validations/review";
 
 export interface EditorValues {
+  /** "" keeps the shop's default basis. */
+  rateBasis: RateBasis | "";
   rearRate: string;
   rearRateUnit: RateUnit;
   rearPreload: string;
@@ -30,6 +32,7 @@ const str = (v: number | undefined) => (v === undefined ? "" : String(Math.round
 
 export function valuesFrom(o: SetupOverrides, notesForRider: string | null, internalNotes: string | null): EditorValues {
   return {
+    rateBasis: o.rateBasis ?? "",
     rearRate: str(o.rear?.rateNmm),
     rearRateUnit: "N/mm",
     rearPreload: str(o.rear?.preloadMm),
@@ -70,6 +73,7 @@ export function overridesFrom(v: EditorValues, airFork: boolean): { overrides: S
     return n === undefined ? undefined : convertRate(n, unit, "N/mm");
   };
   const overrides: SetupOverrides = {
+    rateBasis: v.rateBasis || undefined,
     rear: {
       rateNmm: rate("rear.rateNmm", v.rearRate, v.rearRateUnit),
       preloadMm: num("rear.preloadMm", v.rearPreload),

@@ -17,6 +17,7 @@ import { editorSchema, flatErrors, overridesFrom, valuesFrom, type EditorValues 
 import { ClickerInputs, FrontInputs, RearInputs } from "./figure-inputs";
 import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
+import { RateBasisInput } from "./rate-basis-input";
 import { ResultsTable } from "./results-table";
 import { ReasonsList, SafetyNote, WarningsList } from "./warnings-list";
 
@@ -98,10 +99,11 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       if (dirty) version = await save();
       if (version === null) return;
       if (action === "approve") {
-        const r = await callApi<{ email: string }>(`/api/requests/${requestId}/approve`, "POST", { version }, { offline: NOT_SENT });
+        const acknowledgedWarnings = acknowledged && shown ? shown.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code) : [];
+        const r = await callApi(`/api/requests/${requestId}/approve`, "POST", { version, acknowledgedWarnings }, { offline: NOT_SENT });
         if (!r.ok) return setMessage({ kind: "error", text: errorWithFields(r) });
-        const email = r.data.email;
-        setMessage({ kind: "ok", text: `Version ${version} approved. ${email === "sent" ? "The rider was e-mailed the sheet link." : "The e-mail to the rider FAILED: see E-mails below."}` });
+        // The e-mail is queued with the approval and goes out at once; E-mails below shows how it went.
+        setMessage({ kind: "ok", text: `Version ${version} approved. The rider is being e-mailed the sheet link (see E-mails below).` });
       } else setMessage({ kind: "ok", text: `Saved as draft version ${version}.` });
       router.refresh();
     } finally {
@@ -110,7 +112,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   }
 
   const r = shown;
-  const critical = r.warnings.filter((w) => w.severity === "critical");
+  // Critical warnings and sanity limits both need the tuner's tick; the server refuses unticked sanity limits.
+  const critical = r.warnings.filter((w) => w.severity === "critical" || w.requiresAcknowledgement);
   return (
     <section aria-labelledby="adjust-heading" className="flex flex-col gap-4">
       <h2 id="adjust-heading" className="text-xl font-semibold">Adjust version {latest.version}{frozen ? " (approved)" : " (draft)"}</h2>
@@ -126,6 +129,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
         <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={form.handleSubmit(() => run("save"))}>
+          <RateBasisInput value={values.rateBasis} onChange={(rateBasis) => set({ rateBasis })} used={r.resolved.rateBasis} />
           <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} current={input.currentSprings?.shockRateNmm} />
           <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} current={input.currentSprings?.forkRateNmm} />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
@@ -139,7 +143,7 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             <label className="flex items-start gap-2 rounded-lg border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
               <input type="checkbox" className="mt-1 size-5" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
               <span>
-                This setup has {critical.length} critical warning{critical.length === 1 ? "" : "s"} (see the list). I have checked them
+                This setup has {critical.length} warning{critical.length === 1 ? "" : "s"} to check (see the list). I have checked them
                 against the manufacturer&apos;s manual and approve anyway.
               </span>
             </label>

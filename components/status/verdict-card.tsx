@@ -5,6 +5,7 @@ const LOOK: Record<SagVerdict["verdict"], { text: string; cls: string }> = {
   right: { text: "Spring is right", cls: "border-emerald-400 bg-emerald-50" },
   "too-soft": { text: "Spring is too soft", cls: "border-amber-500 bg-amber-soft" },
   "too-stiff": { text: "Spring is too stiff", cls: "border-amber-500 bg-amber-soft" },
+  recheck: { text: "Measure again", cls: "border-sky-500 bg-sky-50" },
 };
 
 export function VerdictCard({ verdict }: { verdict: SagVerdict }) {

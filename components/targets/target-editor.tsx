@@ -14,6 +14,7 @@ import { NumInput } from "@/components/forms/num-input";
 import { callApi } from "@/lib/api-client";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 import type { Discipline, SkillLevel } from "@/lib/sizing";
+import { RateBasisOptions } from "@/components/review/rate-basis-input";
 import { targetRowValuesSchema } from "@/lib/validations/targets";
 import { TargetPreview, type PreviewBike } from "./target-preview";
 
@@ -35,7 +36,7 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
   const router = useRouter();
   const { control, register, handleSubmit, setError, reset, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
     resolver: zodResolver(targetRowValuesSchema),
-    defaultValues: saved,
+    defaultValues: { ...saved, rateBasis: saved.rateBasis ?? "ride-frequency" },
   });
   const values = useWatch({ control }) as TargetRowValues;
   const errors = formState.errors;
@@ -96,8 +97,14 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
           />
         ))}
         <Field id="riderRearShare" label="Rider weight on the rear wheel (0–1)" inputMode="decimal" error={errors.riderRearShare?.message} {...register("riderRearShare", number)} />
-        <Field id="rateFactor" label="Rate factor (× the sag rate)" inputMode="decimal" error={errors.rateFactor?.message} {...register("rateFactor", number)} />
+        <Field id="rateFactor" label="Rate factor (× the matched rate)" inputMode="decimal" error={errors.rateFactor?.message} {...register("rateFactor", number)} />
         <Field id="bottomingFactor" label="Bottoming factor (× stock)" inputMode="decimal" error={errors.bottomingFactor?.message} {...register("bottomingFactor", number)} />
+        <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
+          How the spring rate is found
+          <select id="rateBasis" className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("rateBasis", { setValueAs: (v) => v || undefined })}>
+            <RateBasisOptions />
+          </select>
+        </label>
       </div>
       <div className="flex flex-wrap gap-2">
         <Button onClick={save} disabled={formState.isSubmitting}>Save row</Button>

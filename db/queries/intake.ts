@@ -1,7 +1,7 @@
 // A rider's new setup request: the shop's active catalog for the bike picker, and the one
 // transaction that stores the request, its photos, recommendation version 1 and its status link.
 import { and, asc, eq, ilike, isNull, or, sql } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import { containsPattern } from "./like";
 import { auditEvents, bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { createStatusLink } from "./status-links";
@@ -75,8 +75,14 @@ export interface NewSetupRequest {
   statusToken: string;
 }
 
-/** Stores everything in one transaction; nothing is written when any part fails. */
-export async function insertSetupRequest(data: NewSetupRequest): Promise<{ id: string; number: number }> {
+/**
+ * Stores everything in one transaction; nothing is written when any part fails. `also` runs in the
+ * same transaction after the inserts (the service queues the rider's confirmation e-mail there).
+ */
+export async function insertSetupRequest(
+  data: NewSetupRequest,
+  also?: (tx: Tx, row: { id: string; number: number }) => Promise<unknown>,
+): Promise<{ id: string; number: number }> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -102,6 +108,7 @@ export async function insertSetupRequest(data: NewSetupRequest): Promise<{ id: s
       action: "request.submitted",
       detail: { photos: data.uploads.length, engineVersion: data.output.engineVersion, bikeLabel: data.request.bikeLabel },
     });
+    if (also) await also(tx, row);
     return row;
   });
 }

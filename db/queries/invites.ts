@@ -1,12 +1,12 @@
 // Staff invitations: only the SHA-256 of the e-mailed token is stored.
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Executor } from "@/db/client";
 import { staffInvites } from "@/db/schema";
 
 export type StaffInviteRow = typeof staffInvites.$inferSelect;
 
-export async function insertInvite(values: typeof staffInvites.$inferInsert) {
-  const db = await getDb();
+export async function insertInvite(values: typeof staffInvites.$inferInsert, executor?: Executor) {
+  const db = executor ?? (await getDb());
   const [row] = await db.insert(staffInvites).values(values).returning();
   return row!;
 }
@@ -25,4 +25,21 @@ export async function findInviteByTokenHash(tokenHash: string): Promise<StaffInv
   const db = await getDb();
   const [row] = await db.select().from(staffInvites).where(eq(staffInvites.tokenHash, tokenHash));
   return row ?? null;
+}
+
+/** The invitation, locked for the caller's transaction (accepting it). */
+export async function lockInvite(tx: Executor, id: string): Promise<StaffInviteRow | null> {
+  const [row] = await tx.select().from(staffInvites).where(eq(staffInvites.id, id)).for("update");
+  return row ?? null;
+}
+
+/** Marks the invitation used; false when someone used it first. */
+export async function markInviteAccepted(id: string, executor?: Executor): Promise<boolean> {
+  const db = executor ?? (await getDb());
+  const rows = await db
+    .update(staffInvites)
+    .set({ acceptedAt: new Date() })
+    .where(and(eq(staffInvites.id, id), isNull(staffInvites.acceptedAt)))
+    .returning({ id: staffInvites.id });
+  return rows.length > 0;
 }

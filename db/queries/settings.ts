@@ -1,16 +1,16 @@
 import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Executor } from "@/db/client";
 import { shopSettings } from "@/db/schema";
 
-export async function getShopSettings() {
-  const db = await getDb();
+export async function getShopSettings(executor?: Executor) {
+  const db = executor ?? (await getDb());
   const rows = await db.select().from(shopSettings).where(eq(shopSettings.id, 1)).limit(1);
   return rows[0] ?? null;
 }
 
 /** The shop's name for e-mails and pages; a neutral word before the shop has set one. */
-export async function getShopName(): Promise<string> {
-  return (await getShopSettings())?.name ?? "Your suspension shop";
+export async function getShopName(executor?: Executor): Promise<string> {
+  return (await getShopSettings(executor))?.name ?? "Your suspension shop";
 }
 
 export type ShopSettingsValues = Omit<typeof shopSettings.$inferInsert, "id" | "updatedAt">;

@@ -2,9 +2,8 @@
 // sign-up flow (open sign-up is off).
 import { randomUUID } from "node:crypto";
 import { and, asc, count, eq, inArray, isNull, or } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { account as accountTable, staffInvites, user } from "@/db/schema";
-import { inTransaction, type Tx } from "./transaction";
+import { getDb, type Executor, type Tx } from "@/db/client";
+import { account as accountTable, user } from "@/db/schema";
 
 export async function listStaff() {
   const db = await getDb();
@@ -24,8 +23,8 @@ export async function getStaffMember(id: string) {
   return row ?? null;
 }
 
-export async function findUserByEmail(email: string) {
-  const db = await getDb();
+export async function findUserByEmail(email: string, executor?: Executor) {
+  const db = executor ?? (await getDb());
   const [row] = await db.select({ id: user.id, role: user.role }).from(user).where(eq(user.email, email.toLowerCase()));
   return row ?? null;
 }
@@ -48,41 +47,16 @@ export interface CredentialAccount {
   passwordHash: string;
 }
 
-type Writer = Pick<Tx, "insert" | "update">;
-
-async function writeCredentialAccount(db: Writer, account: CredentialAccount, existingUserId?: string): Promise<string> {
-  const id = existingUserId ?? randomUUID();
-  if (existingUserId) {
-    await db.update(user).set({ role: account.role, name: account.name, updatedAt: new Date() }).where(eq(user.id, id));
-  } else {
-    await db.insert(user).values({ id, email: account.email.toLowerCase(), name: account.name, role: account.role, emailVerified: true });
-  }
-  await db.insert(accountTable).values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: account.passwordHash });
+/** A new staff user with a password sign-in, in the caller's transaction. Returns the user id. */
+export async function insertStaffUser(tx: Tx, account: CredentialAccount): Promise<string> {
+  const id = randomUUID();
+  await tx.insert(user).values({ id, email: account.email.toLowerCase(), name: account.name, role: account.role, emailVerified: true });
+  await tx.insert(accountTable).values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: account.passwordHash });
   return id;
 }
 
-/** A new staff user with a password sign-in, in one transaction. Returns the user id. */
-export async function insertStaffAccount(account: CredentialAccount): Promise<string> {
-  return inTransaction((tx) => writeCredentialAccount(tx, account));
-}
-
-/**
- * Marks the invitation used and creates the account (or gives an existing rider account the role
- * and a password) in one transaction: null when the invitation was used first, and then nothing is
- * written; if creating the account fails, the invitation stays open.
- */
-export async function acceptInviteWithAccount(
-  inviteId: string,
-  account: CredentialAccount,
-  existingUserId?: string,
-): Promise<string | null> {
-  return inTransaction(async (tx) => {
-    const marked = await tx
-      .update(staffInvites)
-      .set({ acceptedAt: new Date() })
-      .where(and(eq(staffInvites.id, inviteId), isNull(staffInvites.acceptedAt)))
-      .returning({ id: staffInvites.id });
-    if (marked.length === 0) return null;
-    return writeCredentialAccount(tx, account, existingUserId);
-  });
+/** A rider's account becomes staff: the role and name change and a password sign-in is added. */
+export async function promoteToStaff(tx: Tx, userId: string, account: Omit<CredentialAccount, "email">) {
+  await tx.update(user).set({ role: account.role, name: account.name, updatedAt: new Date() }).where(eq(user.id, userId));
+  await tx.insert(accountTable).values({ id: randomUUID(), userId, accountId: userId, providerId: "credential", password: account.passwordHash });
 }

@@ -202,6 +202,23 @@ export const auditEvents = pgTable(
 export const EMAIL_STATUSES = ["queued", "sent", "failed"] as const;
 export type EmailStatus = (typeof EMAIL_STATUSES)[number];
 
+/** An attachment as the outbox keeps it until the message is sent (content in base64). */
+export interface StoredAttachment {
+  filename: string;
+  contentBase64: string;
+  contentType?: string;
+}
+
+/** Who caused a rider e-mail: the worker writes the email.sent / email.failed audit event in their name. */
+export interface EmailAuditActor {
+  actorUserId: string | null;
+  actorLabel: string;
+}
+
+// The e-mail outbox and the record of every message: a row is written in the same transaction as
+// the change it reports ('queued'), and a worker sends it after the commit (lib/mail/outbox.ts):
+// 'sent' with the provider's id, or 'failed' after the last attempt. The body is kept only until
+// then. claimed_until is the lease of the worker sending it, so a crashed worker's rows are retried.
 export const outboundEmails = pgTable(
   "outbound_emails",
   {
@@ -216,9 +233,22 @@ export const outboundEmails = pgTable(
     lastError: text("last_error"),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     sentAt: timestamp("sent_at", { withTimezone: true }),
+    html: text("html"),
+    textBody: text("text_body"),
+    replyTo: text("reply_to"),
+    attachments: jsonb("attachments").$type<StoredAttachment[]>(),
+    // Sent with every attempt: a retry after a lost answer is not delivered twice by the provider.
+    idempotencyKey: text("idempotency_key")
+      .notNull()
+      .default(sql`('sagwise-outbound-' || gen_random_uuid()::text)`),
+    nextAttemptAt: timestamp("next_attempt_at", { withTimezone: true }).notNull().defaultNow(),
+    claimedUntil: timestamp("claimed_until", { withTimezone: true }),
+    claimedBy: text("claimed_by"),
+    audit: jsonb("audit").$type<EmailAuditActor>(),
   },
   (t) => [
     index("outbound_emails_request_idx").on(t.requestId, t.createdAt),
-    index("outbound_emails_status_idx").on(t.status),
+    index("outbound_emails_due_idx").on(t.status, t.nextAttemptAt),
+    uniqueIndex("outbound_emails_idempotency_key_idx").on(t.idempotencyKey),
   ],
 );

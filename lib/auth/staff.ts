@@ -1,18 +1,13 @@
 // Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and the admin's
 // invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
-import { findInviteByTokenHash, insertInvite } from "@/db/queries/invites";
+import { findInviteByTokenHash, insertInvite, lockInvite, markInviteAccepted } from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
-import {
-  acceptInviteWithAccount,
-  countActiveAdmins,
-  findUserByEmail,
-  getStaffMember,
-  insertStaffAccount,
-} from "@/db/queries/team";
+import { countActiveAdmins, findUserByEmail, getStaffMember, insertStaffUser, promoteToStaff } from "@/db/queries/team";
+import { inTransaction } from "@/db/queries/transaction";
 import { ConflictError, NotFoundError } from "@/lib/errors";
 import { appBaseUrl } from "@/lib/env";
-import { sendTemplateEmail, type SendMailOptions } from "@/lib/mail";
+import { kickOutbox, queueTemplateEmail } from "@/lib/mail";
 import type { Role } from "./roles";
 import { getAuth } from "./server";
 
@@ -23,13 +18,17 @@ interface StaffAccount {
   password: string;
 }
 
-const hashPassword = async (password: string) => (await (await getAuth()).$context).password.hash(password);
+/** better-auth's own hash of a password, so its sign-in verifies it. */
+async function hashPassword(password: string): Promise<string> {
+  return (await (await getAuth()).$context).password.hash(password);
+}
 
 /** Creates the account if its e-mail is new; returns the user id and whether it was created. */
 export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string; created: boolean }> {
   const existing = await findUserByEmail(input.email);
   if (existing) return { id: existing.id, created: false };
-  const id = await insertStaffAccount({ ...input, passwordHash: await hashPassword(input.password) });
+  const passwordHash = await hashPassword(input.password);
+  const id = await inTransaction((tx) => insertStaffUser(tx, { email: input.email, name: input.name, role: input.role, passwordHash }));
   return { id, created: true };
 }
 
@@ -43,31 +42,35 @@ export const INVITE_DAYS = 7;
 
 export const hashInviteToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export async function inviteStaff(
-  input: { email: string; role: "tuner" | "admin" },
-  inviter: { id: string; name: string },
-  options: { mail?: SendMailOptions } = {},
-) {
+export async function inviteStaff(input: { email: string; role: "tuner" | "admin" }, inviter: { id: string; name: string }) {
   const email = input.email.toLowerCase();
   const existing = await findUserByEmail(email);
   if (existing && existing.role !== "rider")
     throw new ConflictError("This person is already on the team.", { email: "Already a staff member" });
   const token = randomBytes(32).toString("base64url");
-  const invite = await insertInvite({
-    id: randomUUID(),
-    email,
-    role: input.role,
-    tokenHash: hashInviteToken(token),
-    invitedById: inviter.id,
-    expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
-  });
   const url = new URL(`/invite/${token}`, appBaseUrl()).toString();
-  const mail = await sendTemplateEmail(
-    "staff-invite",
-    { url, role: input.role, inviterName: inviter.name, shopName: await getShopName() },
-    { to: email },
-    options.mail,
-  );
+  // The invitation and its e-mail are stored together: neither exists without the other.
+  const { invite, mail } = await inTransaction(async (tx) => {
+    const invite = await insertInvite(
+      {
+        id: randomUUID(),
+        email,
+        role: input.role,
+        tokenHash: hashInviteToken(token),
+        invitedById: inviter.id,
+        expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
+      },
+      tx,
+    );
+    const mail = await queueTemplateEmail(
+      tx,
+      "staff-invite",
+      { url, role: input.role, inviterName: inviter.name, shopName: await getShopName(tx) },
+      { to: email },
+    );
+    return { invite, mail };
+  });
+  kickOutbox();
   return { id: invite.id, email, role: input.role, expiresAt: invite.expiresAt, mailStatus: mail.status };
 }
 
@@ -81,20 +84,34 @@ export async function openInvite(token: string) {
 }
 
 /**
- * Creates the staff account from an invitation, marking the invitation used in the same
- * transaction; the caller then signs the person in.
+ * Creates the staff account from an invitation; the caller then signs the person in. One
+ * transaction: the invitation row is locked, the account is created (or a rider's account promoted)
+ * and the invitation marked used together, so a failure leaves the invitation open and two people
+ * racing on one link cannot both get an account.
  */
 export async function acceptInvite(input: { token: string; name: string; password: string }) {
-  const invite = await openInvite(input.token);
-  const existing = await findUserByEmail(invite.email);
-  // A rider who becomes staff keeps their account; the role changes and a password is set.
-  if (existing && existing.role !== "rider")
-    throw new ConflictError("An account with this e-mail already exists. Sign in instead.");
-  const role = invite.role === "admin" ? "admin" : "tuner";
-  const account = { email: invite.email, name: input.name, role, passwordHash: await hashPassword(input.password) } as const;
-  const id = await acceptInviteWithAccount(invite.id, account, existing?.id);
-  if (!id) throw new ConflictError("This invitation has already been used.");
-  return { id, email: invite.email, role };
+  const opened = await openInvite(input.token);
+  const role = opened.role === "admin" ? "admin" : "tuner";
+  // Hashed before the transaction: it is slow on purpose and needs no lock.
+  const passwordHash = await hashPassword(input.password);
+  const id = await inTransaction(async (tx) => {
+    const invite = await lockInvite(tx, opened.id);
+    if (!invite || invite.acceptedAt) throw new ConflictError("This invitation has already been used.");
+    const existing = await findUserByEmail(invite.email, tx);
+    if (existing && existing.role !== "rider")
+      throw new ConflictError("An account with this e-mail already exists. Sign in instead.");
+    let userId: string;
+    if (existing) {
+      // A rider who becomes staff keeps their account; the role changes and a password is set.
+      await promoteToStaff(tx, existing.id, { name: input.name, role, passwordHash });
+      userId = existing.id;
+    } else {
+      userId = await insertStaffUser(tx, { email: invite.email, name: input.name, role, passwordHash });
+    }
+    if (!(await markInviteAccepted(invite.id, tx))) throw new ConflictError("This invitation has already been used.");
+    return userId;
+  });
+  return { id, email: opened.email, role };
 }
 
 /** Refuses a change that would leave the shop with no admin who can sign in (409). */

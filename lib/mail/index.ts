@@ -1,13 +1,19 @@
 // Public API of the mail module.
 export { renderEmail, type RenderedEmail } from "./render";
+export { sendMailInputSchema, MailInputError, type SendMailInput } from "./send";
 export {
-  sendMail,
-  sendMailInputSchema,
-  MailInputError,
-  DEFAULT_MAX_ATTEMPTS,
-  DEFAULT_BASE_DELAY_MS,
-  type SendMailInput,
-  type SendMailOptions,
-  type SendMailResult,
-} from "./send";
-export { renderTemplate, sendTemplateEmail, type TemplateEnvelope } from "./templates";
+  queueMail,
+  drainOutbox,
+  kickOutbox,
+  startOutboxWorker,
+  stopOutboxWorker,
+  configureOutbox,
+  resetOutboxPolicy,
+  backoffMs,
+  DEFAULT_OUTBOX_POLICY,
+  type OutboxPolicy,
+  type QueuedMail,
+  type QueueMailOptions,
+  type DrainSummary,
+} from "./outbox";
+export { renderTemplate, queueTemplateEmail, type TemplateEnvelope } from "./templates";

@@ -1,11 +1,7 @@
-// Sends one e-mail through the resend SDK and records it in outbound_emails: 'queued' first, then
-// 'sent' (provider id, time) or 'failed' (attempts, last error). Transient failures are retried with
-// exponential backoff; a send failure is returned as an outcome, never thrown into the business flow.
-import { eq } from "drizzle-orm";
+// One delivery attempt of a queued message through the resend SDK (pointed at the mail fake in
+// development and tests), and the input checks every queued message passes first.
 import { Resend } from "resend";
 import { z } from "zod";
-import { getDb } from "@/db/client";
-import { outboundEmails } from "@/db/schema";
 import { getEnv, mailBaseUrl } from "@/lib/env";
 
 export const mailAttachmentSchema = z.object({
@@ -27,108 +23,75 @@ export const sendMailInputSchema = z.object({
 
 export type SendMailInput = z.input<typeof sendMailInputSchema>;
 
-export interface SendMailOptions {
-  /** Total tries, first one included. */
-  maxAttempts?: number;
-  /** Wait before the 2nd try; doubles before each later one. */
-  baseDelayMs?: number;
-  /** Injected in tests to skip (and record) the waits. */
-  sleep?: (ms: number) => Promise<void>;
-}
-
-export type SendMailResult =
-  | { status: "sent"; outboundEmailId: string; providerMessageId: string; attempts: number }
-  | { status: "failed"; outboundEmailId: string; attempts: number; error: string };
-
 /** Bad input is a programming error: thrown at once, naming the field, before anything is recorded. */
 export class MailInputError extends Error {
   constructor(
     readonly field: string,
     detail: string,
   ) {
-    super(`sendMail: ${field} ${detail}`);
+    super(`queueMail: ${field} ${detail}`);
     this.name = "MailInputError";
   }
 }
 
-export const DEFAULT_MAX_ATTEMPTS = 3;
-export const DEFAULT_BASE_DELAY_MS = 1000;
-
-const sleepFor = (ms: number) => new Promise<void>((resolve) => setTimeout(resolve, ms));
-
-interface AttemptError {
-  message: string;
-  retryable: boolean;
-}
-
-// Rate limits, server errors and network failures (statusCode null in the SDK) can pass on a later
-// try; a rejected request (401, 403, 422) fails the same way every time.
-function describeError(error: { name?: string; message?: string; statusCode?: number | null }): AttemptError {
-  const status = error.statusCode ?? null;
-  return {
-    message: `${error.name ?? "error"}${status ? ` (${status})` : ""}: ${error.message ?? "no message"}`,
-    retryable: status === null || status === 429 || status >= 500,
-  };
-}
-
-export async function sendMail(input: SendMailInput, options: SendMailOptions = {}): Promise<SendMailResult> {
+export function parseMailInput(input: SendMailInput) {
   const parsed = sendMailInputSchema.safeParse(input);
   if (!parsed.success) {
     const issue = parsed.error.issues[0];
     throw new MailInputError(issue?.path.join(".") || "input", issue?.message ?? "is invalid");
   }
-  const mail = parsed.data;
-  const maxAttempts = Math.max(1, options.maxAttempts ?? DEFAULT_MAX_ATTEMPTS);
-  const baseDelayMs = options.baseDelayMs ?? DEFAULT_BASE_DELAY_MS;
-  const sleep = options.sleep ?? sleepFor;
+  return parsed.data;
+}
 
-  const db = await getDb();
-  const [row] = await db
-    .insert(outboundEmails)
-    .values({ requestId: mail.requestId ?? null, template: mail.template, toAddress: mail.to, subject: mail.subject, status: "queued" })
-    .returning({ id: outboundEmails.id });
-  if (!row) throw new Error("sendMail: the outbound e-mail row was not created");
+export interface DeliveryMessage {
+  template: string;
+  to: string;
+  subject: string;
+  html: string;
+  text: string;
+  replyTo?: string | null;
+  attachments?: { filename: string; contentBase64: string; contentType?: string }[] | null;
+  idempotencyKey: string;
+}
 
+export type DeliveryOutcome =
+  | { ok: true; providerMessageId: string }
+  | { ok: false; error: string; retryable: boolean };
+
+// Rate limits, server errors and network failures (statusCode null in the SDK) can pass on a later
+// try; a rejected request (401, 403, 422) fails the same way every time.
+function describeError(error: { name?: string; message?: string; statusCode?: number | null }): DeliveryOutcome {
+  const status = error.statusCode ?? null;
+  return {
+    ok: false,
+    error: `${error.name ?? "error"}${status ? ` (${status})` : ""}: ${error.message ?? "no message"}`,
+    retryable: status === null || status === 429 || status >= 500,
+  };
+}
+
+/** One POST /emails; never throws. */
+export async function deliverMessage(message: DeliveryMessage): Promise<DeliveryOutcome> {
   const env = getEnv();
   const resend = new Resend(env.RESEND_API_KEY, { baseUrl: mailBaseUrl().replace(/\/+$/, "") });
-  let last: AttemptError = { message: "not attempted", retryable: false };
-  let attempts = 0;
-
-  while (attempts < maxAttempts) {
-    if (attempts > 0) await sleep(baseDelayMs * 2 ** (attempts - 1));
-    attempts += 1;
-    try {
-      const { data, error } = await resend.emails.send(
-        {
-          from: env.MAIL_FROM,
-          to: mail.to,
-          subject: mail.subject,
-          html: mail.html,
-          text: mail.text,
-          replyTo: mail.replyTo,
-          attachments: mail.attachments,
-          tags: [{ name: "template", value: mail.template.replace(/[^A-Za-z0-9_-]/g, "_") }],
-        },
-        // One key per outbound row: if a response is lost and we retry, the provider sends once.
-        { idempotencyKey: `sagwise-outbound-${row.id}` },
-      );
-      if (data) {
-        await db
-          .update(outboundEmails)
-          .set({ status: "sent", providerMessageId: data.id, attempts, lastError: null, sentAt: new Date() })
-          .where(eq(outboundEmails.id, row.id));
-        return { status: "sent", outboundEmailId: row.id, providerMessageId: data.id, attempts };
-      }
-      last = describeError(error ?? {});
-    } catch (thrown) {
-      last = { message: thrown instanceof Error ? thrown.message : String(thrown), retryable: true };
-    }
-    // Recorded after every try, so a crash between tries still leaves the trail.
-    await db.update(outboundEmails).set({ attempts, lastError: last.message }).where(eq(outboundEmails.id, row.id));
-    if (!last.retryable) break;
+  try {
+    const { data, error } = await resend.emails.send(
+      {
+        from: env.MAIL_FROM,
+        to: message.to,
+        subject: message.subject,
+        html: message.html,
+        text: message.text,
+        replyTo: message.replyTo ?? undefined,
+        attachments: message.attachments?.map((a) => ({ filename: a.filename, content: a.contentBase64, contentType: a.contentType })),
+        tags: [{ name: "template", value: message.template.replace(/[^A-Za-z0-9_-]/g, "_") }],
+      },
+      // The same key on every attempt: if an answer is lost and we try again, the provider sends
+      // once (resend keeps keys for 24 hours; see its "Idempotency Keys" documentation).
+      { idempotencyKey: message.idempotencyKey },
+    );
+    if (data) return { ok: true, providerMessageId: data.id };
+    return describeError(error ?? {});
+  } catch (thrown) {
+    return { ok: false, error: thrown instanceof Error ? thrown.message : String(thrown), retryable: true };
   }
-
-  await db.update(outboundEmails).set({ status: "failed", attempts, lastError: last.message }).where(eq(outboundEmails.id, row.id));
-  console.warn(`[mail] ${mail.template} e-mail ${row.id} failed after ${attempts} attempt(s): ${last.message}`);
-  return { status: "failed", outboundEmailId: row.id, attempts, error: last.message };
 }

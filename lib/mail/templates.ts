@@ -1,8 +1,10 @@
-// Renders a template from emails/ by name and sends it: the usual way the app sends mail.
+// Renders a template from emails/ by name and queues it: the usual way the app sends mail.
 import { createElement, type ComponentType } from "react";
+import type { Executor } from "@/db/client";
 import { emailTemplates, type EmailTemplateName, type EmailTemplateProps } from "@/emails";
+import { queueMail, type QueueMailOptions, type QueuedMail } from "./outbox";
 import { renderEmail } from "./render";
-import { sendMail, type SendMailInput, type SendMailOptions, type SendMailResult } from "./send";
+import type { SendMailInput } from "./send";
 
 export type TemplateEnvelope = Pick<SendMailInput, "to" | "requestId" | "replyTo" | "attachments">;
 
@@ -15,12 +17,14 @@ export async function renderTemplate<N extends EmailTemplateName>(name: N, props
   return { subject: entry.subject(props), html, text };
 }
 
-export async function sendTemplateEmail<N extends EmailTemplateName>(
+/** Renders and queues in `executor` (the caller's transaction); kickOutbox() after the commit sends it. */
+export async function queueTemplateEmail<N extends EmailTemplateName>(
+  executor: Executor,
   name: N,
   props: EmailTemplateProps<N>,
   envelope: TemplateEnvelope,
-  options?: SendMailOptions,
-): Promise<SendMailResult> {
+  options?: QueueMailOptions,
+): Promise<QueuedMail> {
   const rendered = await renderTemplate(name, props);
-  return sendMail({ template: name, ...envelope, ...rendered }, options);
+  return queueMail(executor, { template: name, ...envelope, ...rendered }, options);
 }

@@ -65,8 +65,8 @@ export function SetupSheet({ data }: { data: SheetData }) {
         <Cautions />
         <Text style={s.h2}>Springs, preload and sag</Text>
         <View style={s.row}>
-          <ForkCard front={rec.front} imperial={imperial} />
-          <ShockCard rear={rec.rear} collarPitchMm={rec.input.bike.rear.collarPitchMm} imperial={imperial} />
+          <ForkCard front={rec.front} imperial={imperial} currentNmm={rec.input.currentSprings?.forkRateNmm} />
+          <ShockCard rear={rec.rear} collarPitchMm={rec.input.bike.rear.collarPitchMm} imperial={imperial} currentNmm={rec.input.currentSprings?.shockRateNmm} />
         </View>
         <Clickers clickers={rec.clickers} />
         <Footer data={data} />

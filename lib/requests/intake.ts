@@ -1,10 +1,13 @@
 // A new setup request from the public form: bike spec from the catalog (or the nearest generic
 // class for a bike the shop does not list), the engine's first proposal, photos on disk, then one
-// database transaction. Photos are written (and fsynced) first and removed again if the
-// transaction fails, so a refused or failed request leaves nothing behind.
+// database transaction, which also queues the rider's confirmation e-mail (sent by the outbox worker
+// after the commit: the submit never waits for it). Photos are written (and fsynced) first and
+// removed again if the transaction fails, so a refused or failed request leaves nothing behind.
 import { findActiveBike, findNearestGenericBike, insertSetupRequest, type CatalogBike } from "@/db/queries/intake";
 import { loadShopSizingContext } from "@/db/queries/sizing-context";
 import { ValidationError } from "@/lib/errors";
+import { kickOutbox } from "@/lib/mail";
+import { notifyRider } from "@/lib/notify";
 import { buildSizingInput, toKg, toMm } from "@/lib/requests/sizing-input";
 import { newStatusToken } from "@/lib/requests/token";
 import { SizingInputError, recommend, type BikeSpecInput, type Recommendation } from "@/lib/sizing";
@@ -112,7 +115,8 @@ export async function submitSetupRequest(answers: RequestAnswers, photos: Incomi
       input,
       output,
       statusToken,
-    });
+    }, (tx, created) => notifyRider(tx, created.id, { kind: "request-received" }, { statusToken }));
+    kickOutbox();
     return { ...row, statusToken };
   } catch (error) {
     await removeUploads(stored.map((s) => s.storageKey));

@@ -7,6 +7,7 @@ import {
   sizingInputSchema,
   type BikeSpecInput,
   type ClickerRule,
+  type RateBasis,
   type SizingInput,
 } from "@/lib/sizing";
 import type { RequestAnswers } from "@/lib/validations/request";
@@ -22,8 +23,11 @@ export interface TargetRowValues {
     forkStaticMax: number;
   };
   riderRearShare: number;
+  /** Skill and discipline together: the row is per discipline × skill. */
   rateFactor: number;
   bottomingFactor: number;
+  /** Rows saved before the choice existed have none: the engine's default basis. */
+  rateBasis?: RateBasis;
 }
 
 export interface ShopSizingContext {
@@ -81,7 +85,9 @@ export function buildSizingInput(answers: RequestAnswers, shop: ShopSizingContex
           sagOffsetBySkill: { [rider.skill]: 0 },
           riderRearShare: t.riderRearShare,
           rateFactorBySkill: { [rider.skill]: t.rateFactor },
+          rateFactorByDiscipline: { [discipline]: 1 },
           bottomingFactorByDiscipline: { [discipline]: t.bottomingFactor },
+          rateBasis: t.rateBasis,
         }
       : {},
     shop: { gearMassKg: shop.gearMassKg, frequencyRatioWindow: shop.frequencyRatioWindow },

@@ -5,14 +5,15 @@ import type { SetupOverrides } from "@/lib/sizing";
 export interface FigureChange {
   /** Dotted path in the overrides ("rear.rateNmm", "clickers.forkRebound"). */
   field: string;
-  from: number | null;
-  to: number | null;
+  /** Figures are numbers; the rate basis is a word. */
+  from: number | string | null;
+  to: number | string | null;
 }
 
-function flatten(overrides: SetupOverrides | null | undefined): Map<string, number> {
-  const out = new Map<string, number>();
+function flatten(overrides: SetupOverrides | null | undefined): Map<string, number | string> {
+  const out = new Map<string, number | string>();
   const walk = (value: unknown, path: string) => {
-    if (typeof value === "number") out.set(path, value);
+    if (typeof value === "number" || typeof value === "string") out.set(path, value);
     else if (value && typeof value === "object")
       for (const [k, v] of Object.entries(value)) walk(v, path ? `${path}.${k}` : k);
   };
@@ -31,7 +32,7 @@ export function diffOverrides(before: SetupOverrides | null | undefined, after: 
 
 /** Drops empty objects so `{ rear: {} }` and `{}` are the same stored value. */
 export function compactOverrides(overrides: SetupOverrides): SetupOverrides {
-  const out: SetupOverrides = {};
+  const out: SetupOverrides = overrides.rateBasis ? { rateBasis: overrides.rateBasis } : {};
   for (const key of ["rear", "front", "clickers"] as const) {
     const part = overrides[key];
     if (!part) continue;

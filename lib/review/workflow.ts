@@ -1,7 +1,7 @@
 // The tuner's workflow steps on a request (the review service). Each runs in one transaction: the
 // request row is locked, the status change is a guarded update (so a race cannot approve twice),
-// and the audit events are written in the same transaction. Rider e-mails go out after the commit
-// through notifyRider (which records and audits them and never throws on a failed send).
+// and the audit events are written in the same transaction. Rider e-mails are queued in that
+// transaction too (notifyRider, the outbox) and sent by the outbox worker once it has committed.
 import { recordAudit, type AuditInsert } from "@/db/queries/audit";
 import {
   approveDraftVersion,
@@ -16,6 +16,7 @@ import { getLatestVersion, hasEarlierApproval } from "@/db/queries/versions";
 import type { RequestStatus } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/guard";
 import { ConflictError, NotFoundError } from "@/lib/errors";
+import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { ALLOWED_FROM, conflictMessage, type WorkflowAction } from "@/lib/review/transitions";
 
@@ -65,26 +66,30 @@ export async function startReview(requestId: string, actor: Actor): Promise<void
 }
 
 export async function askRider(requestId: string, question: string, actor: Actor) {
-  await inTransaction(async (tx) => {
+  const mail = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("ask", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.ask, "waiting_for_rider", actor);
     await insertTunerMessage(tx, requestId, actor.id, question);
     events.push(auditBy(actor, requestId, "request.question_asked", { question }));
     await recordAudit(events, tx);
+    return notifyRider(tx, requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
   });
-  return notifyRider(requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
+  kickOutbox();
+  return mail;
 }
 
 export async function declineRequest(requestId: string, reason: string, actor: Actor) {
-  await inTransaction(async (tx) => {
+  const mail = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("decline", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.decline, "declined", actor, { declineReason: reason });
     events.push(auditBy(actor, requestId, "request.declined", { reason }));
     await recordAudit(events, tx);
+    return notifyRider(tx, requestId, { kind: "request-declined", reason }, { actor: { userId: actor.id, label: actor.name } });
   });
-  return notifyRider(requestId, { kind: "request-declined", reason }, { actor: { userId: actor.id, label: actor.name } });
+  kickOutbox();
+  return mail;
 }
 
 export async function assignRequest(requestId: string, tuner: { id: string; name: string } | null, actor: Actor) {
@@ -104,8 +109,8 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
  * Freezes the current draft: earlier approved versions become superseded, the request is approved,
  * and the rider gets the sheet link (the PDF is rendered on demand by the sheet route).
  */
-export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number) {
-  const { version, revised } = await inTransaction(async (tx) => {
+export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number, acknowledged: readonly string[] = []) {
+  const { version, revised, mail } = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("approve", req.status);
     const latest = await getLatestVersion(requestId, tx);
@@ -114,6 +119,12 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
       throw new ConflictError(`Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
       throw new ConflictError(`Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+    // Sanity warnings (lib/sizing/README.md, "Sanity limits") hold approval until the tuner acknowledges each.
+    const missing = acknowledgementCodes(latest.output).filter((c) => !acknowledged.includes(c));
+    if (missing.length)
+      throw new ConflictError(`Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
+        acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
+      });
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
     const superseded = await supersedeApproved(tx, requestId);
     if (!(await approveDraftVersion(tx, latest.id, actor.id)))
@@ -125,17 +136,25 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
         superseded,
         // Approving over a critical warning is the tuner's call (the screen asks to confirm); keep it on record.
         criticalWarnings: criticalCodes(latest.output),
+        acknowledgedWarnings: acknowledgementCodes(latest.output),
       }),
     );
     await recordAudit(events, tx);
-    return { version: latest.version, revised };
+    const mail = await notifyRider(
+      tx,
+      requestId,
+      { kind: "sheet-ready", version: latest.version, tunerName: actor.name, revised },
+      { actor: { userId: actor.id, label: actor.name } },
+    );
+    return { version: latest.version, revised, mail };
   });
-  const mail = await notifyRider(
-    requestId,
-    { kind: "sheet-ready", version, tunerName: actor.name, revised },
-    { actor: { userId: actor.id, label: actor.name } },
-  );
+  kickOutbox();
   return { version, revised, mail };
+}
+
+function acknowledgementCodes(output: unknown): string[] {
+  const warnings = (output as { warnings?: { code: string; requiresAcknowledgement?: boolean }[] } | null)?.warnings ?? [];
+  return [...new Set(warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code))];
 }
 
 function criticalCodes(output: unknown): string[] {

@@ -5,7 +5,7 @@ import { checkLeverageCurve, prepareLinkage, travelAt } from "./linkage";
 /**
  * The shock stroke in the catalog must match ∫ dy/LR over the wheel travel. 1.5 % (or 1 mm, the
  * larger) allows for catalog figures rounded to the millimetre and hand-read curves; a larger miss
- * means the curve or the stroke is wrong and the model is refused (sizing-model.md).
+ * means the curve or the stroke is wrong and the model is refused (lib/sizing/README.md).
  */
 export const STROKE_TOLERANCE_FRACTION = 0.015;
 export const STROKE_TOLERANCE_MIN_MM = 1;
@@ -59,6 +59,15 @@ export const bikeSpecSchema = z
       displacementDiameterMm: z.number().min(15).max(80),
       freeAreaMm2: z.number().min(50).max(6000),
       capVolumeMm3: z.number().min(0).max(500_000),
+      /** Geometry of the stock spring (coil forks): its steel takes air volume above the oil.
+       *  Absent: a typical spring for the rate (lib/sizing/README.md, "Fork air"). */
+      stockSpring: z
+        .object({
+          wireDiameterMm: z.number().min(1).max(15),
+          meanCoilDiameterMm: z.number().min(5).max(80),
+          totalCoils: z.number().min(2).max(80),
+        })
+        .optional(),
       oilLevelMinMm: z.number().positive().max(400),
       oilLevelMaxMm: z.number().positive().max(400),
       stockOilLevelMm: z.number().positive().max(400),
@@ -67,6 +76,10 @@ export const bikeSpecSchema = z
           pistonAreaMm2: z.number().min(50).max(5000),
           chamberVolumeMm3: z.number().positive().max(2_000_000),
           stockPressureKpaGauge: z.number().min(0).max(3000).optional(),
+          /** Negative chamber volume at top-out; absent: a typical fraction of the positive chamber. */
+          negativeChamberVolumeMm3: z.number().positive().max(2_000_000).optional(),
+          /** Fork travel where the transfer port equalises the two chambers; absent: typical. */
+          equalizeAtMm: z.number().min(0).max(100).optional(),
         })
         .optional(),
     }),
@@ -116,7 +129,11 @@ export const bikeSpecSchema = z
       if (!f.air) bad(["fork", "air"], "Air forks need pistonAreaMm2 and chamberVolumeMm3");
       else if (f.air.pistonAreaMm2 * f.travelMm >= f.air.chamberVolumeMm3)
         bad(["fork", "air", "chamberVolumeMm3"], "Chamber volume must exceed piston area × fork travel");
+      else if (f.air.equalizeAtMm !== undefined && f.air.equalizeAtMm >= f.travelMm / 2)
+        bad(["fork", "air", "equalizeAtMm"], "The chambers equalise near top-out: less than half the fork travel");
     } else if (f.stockRateNmm === undefined) bad(["fork", "stockRateNmm"], "Coil forks need the stock rate per leg");
+    if (f.stockSpring && f.stockSpring.meanCoilDiameterMm <= f.stockSpring.wireDiameterMm)
+      bad(["fork", "stockSpring", "meanCoilDiameterMm"], "Mean coil diameter must exceed the wire diameter");
   });
 
 export type BikeSpec = z.output<typeof bikeSpecSchema>;

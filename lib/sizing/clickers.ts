@@ -23,7 +23,7 @@ function fires(rule: ClickerRule, facts: ClickerFacts): boolean {
 
 /**
  * Start from the catalog's stock positions (counted out from fully closed), apply every rule that
- * fires, each move with its reason, then clamp to the adjuster's range (sizing-model.md). A tuner's
+ * fires, each move with its reason, then clamp to the adjuster's range (lib/sizing/README.md). A tuner's
  * position replaces the result for that clicker.
  */
 export function applyClickerRules(

@@ -57,6 +57,50 @@ export const RATE_FACTOR_BY_SKILL: Record<SkillLevel, number> = {
   pro: 1.03,
 };
 export const RATE_FACTOR_BY_STYLE: Record<RidingStyle, number> = { smooth: 0.985, moderate: 1, aggressive: 1.02 };
+/** Discipline and jump size move the rate too: supercross whoops and big jumps want more support,
+ *  trail and enduro grip want less. From memory; motocross with medium jumps is the reference (1). */
+export const RATE_FACTOR_BY_DISCIPLINE: Record<Discipline, number> = {
+  motocross: 1,
+  supercross: 1.06,
+  enduro: 0.96,
+  "cross-country": 0.97,
+  desert: 1.02,
+  trail: 0.94,
+};
+export const RATE_FACTOR_BY_JUMP: Record<JumpSize, number> = { none: 0.98, small: 0.99, medium: 1, large: 1.02 };
+
+/** Which rate basis sizes the springs unless the shop or the tuner picks the other (lib/sizing/README.md). */
+export const DEFAULT_RATE_BASIS = "ride-frequency" as const;
+
+/**
+ * Sanity limits (lib/sizing/README.md, "Sanity limits"). Outside them a figure is almost surely
+ * mistyped, so the engine asks the tuner to acknowledge before approval. From memory.
+ */
+export const SANITY_LIMITS = {
+  /** Force at full travel over the race-sag load. */
+  bottomingRatio: { min: 2, max: 12 },
+  /** Absolute pressure of the air above the oil of a coil fork at full travel (fast stroke), MPa. */
+  forkAirPressureMaxMpa: 3,
+  /** Positive chamber of an air fork: volume at top-out over volume at full travel. */
+  airChamberCompressionRatioMax: 6,
+  /** Natural frequency of either end at race sag, Hz. */
+  naturalFrequencyHz: { min: 1, max: 3.5 },
+} as const;
+
+/** Air-spring forks without a negative chamber in the catalog: a typical single-pressure fork's
+ *  negative chamber is about a tenth of the positive volume at top-out and equalises a few percent
+ *  into the travel (transfer port). From memory. */
+export const AIR_NEGATIVE_VOLUME_FRACTION = 0.1;
+export const AIR_EQUALIZE_FRACTION_OF_TRAVEL = 0.03;
+
+/**
+ * Fork springs whose geometry the catalog does not give: mean coil diameter about three quarters of
+ * the displacement (inner tube) diameter and 16 active coils with squared ends (18 in all); the wire
+ * then follows from the rate (k = G·d⁴/(8·D³·n_a), Shigley eq. 10-9). From memory.
+ */
+export const TYPICAL_FORK_SPRING = { meanDiameterOfDisplacement: 0.75, activeCoils: 16, endCoils: 2 } as const;
+/** Shear modulus of chrome-silicon spring wire, 77.2 GPa (Shigley, 10th ed., table 10-5), in MPa. */
+export const SPRING_STEEL_SHEAR_MODULUS_MPA = 77_200;
 
 /** Bottoming resistance relative to the stock bike's, per discipline and jump size. From memory. */
 export const BOTTOMING_FACTOR_BY_DISCIPLINE: Record<Discipline, number> = {

@@ -7,6 +7,7 @@ import { computeLoads } from "./loads";
 import { checkSagTargets, resolveTargets } from "./targets";
 import { evaluateRear } from "./rear";
 import { evaluateFront } from "./front";
+import { sanityWarnings } from "./sanity";
 import { applyClickerRules } from "./clickers";
 import { DEFAULT_CLICKER_RULES } from "./defaults";
 import { ENGINE_VERSION } from "./version";
@@ -62,18 +63,15 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
     `Rider ${fmt(rt.riderMassWithGearKg, 1)} kg with gear${inp.rider.gearIncluded ? " (as given)" : ` (${inp.rider.massKg} kg + ${inp.shop.gearMassKg} kg gear)`}, ${fmt(rt.riderRearShare * 100, 0)} % on the rear in the sag stance.`,
   );
 
-  const rear = evaluateRear(bike, loads, rearT, rt.rateFactor, inp.stock.shockRatesNmm, ov.rear, warnings, reasons);
+  const basis = ov.rateBasis ?? rt.rateBasis;
+  const common = { bike, loads, referenceLoads, rateFactor: rt.rateFactor, basis, warnings, reasons };
+  const rear = evaluateRear({ ...common, targets: rearT, stockRatesNmm: inp.stock.shockRatesNmm }, ov.rear);
   const front = evaluateFront({
-    bike,
-    loads,
-    referenceLoads,
+    ...common,
     targets: frontT,
-    rateFactor: rt.rateFactor,
     bottomingFactor: rt.bottomingFactor,
     stockRatesNmm: inp.stock.forkRatesNmm,
     ov: ov.front,
-    warnings,
-    reasons,
   });
 
   // A zero rear frequency (no wheel rate at sag) would make the ratio infinite: report 0 and warn below.
@@ -85,7 +83,9 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
       severity: "caution",
       message: `Front/rear natural frequency ratio ${fmt(frequencyRatio, 2)} is outside the shop's ${win.min}–${win.max}: the ends are unbalanced.`,
       field: "frequencyRatio",
+      requiresAcknowledgement: true,
     });
+  sanityWarnings(bike, rear, front, warnings);
 
   const rateChange = {
     rear: rear.chosenRate.nMm / rear.stockRate.nMm - 1,
@@ -121,6 +121,7 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
       riderRearShare: rt.riderRearShare,
       rateFactor: rt.rateFactor,
       bottomingFactor: rt.bottomingFactor,
+      rateBasis: basis,
       loads: { rearStaticN: loads.rearStaticN, rearRaceN: loads.rearRaceN, frontStaticN: loads.frontStaticN, frontRaceN: loads.frontRaceN },
       frequencyRatioWindow: { min: win.min, max: win.max },
     },

@@ -1,43 +1,48 @@
 import type { BikeSpec } from "./bike-schema";
-import type { Loads } from "./loads";
-import type { FrontResult, SizingWarning } from "./output-schema";
+import type { FrontResult } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { sprungLegsOf } from "./bike-schema";
-import { forkForce, forkPreloadForSag, forkRate, idealForkSpring, makeCoilFork, solveForkSag, type CoilFork } from "./fork";
-import { evaluateCandidate, idealToOrder, selectRate, type EndModel, type SagTargetsMm } from "./selection";
-import { airAbsMpaForSag, airChamberForce } from "./air";
+import {
+  forkBottomPressureMpa,
+  forkForce,
+  forkPreloadForSag,
+  forkRate,
+  forkSpringVolumeScale,
+  idealForkSpring,
+  legBottomVolume,
+  makeCoilFork,
+  solveForkSag,
+  springVolumeMm3,
+  type CoilFork,
+} from "./fork";
+import type { EndModel } from "./selection";
+import { chooseByBasis } from "./basis-choice";
+import { airSpringChargeForLoad, airSpringForce, airSpringPositivePressure, airSpringRate, type AirSpring } from "./air";
 import { firstCrossing } from "./solve";
 import { naturalFrequencyOf } from "./frequency";
+import { matchForkFrequency } from "./rate-basis";
 import { ATMOSPHERE_MPA, STANDARD_GRAVITY, pressureTriple, rateTriple } from "./units";
-import { OIL_LEVEL_STEP_MM } from "./defaults";
-import { CURVE_POINTS, describeSource, limitNotes, sagWarnings } from "./rear";
+import { AIR_EQUALIZE_FRACTION_OF_TRAVEL, AIR_NEGATIVE_VOLUME_FRACTION, OIL_LEVEL_STEP_MM } from "./defaults";
+import { CURVE_POINTS, basisReasons, describeSource, limitNotes, preloadLimitWarning, sagWarnings, type EndContext } from "./rear";
 import { SizingInputError } from "./errors";
-import { fmt, rateText } from "./format";
+import { fmt } from "./format";
 
-const FAST = 1.4; // γ for air: a fast stroke to the bottom is close to adiabatic (sizing-model.md)
+const FAST = 1.4; // γ for air: a fast stroke to the bottom is close to adiabatic (lib/sizing/README.md)
 
-export interface FrontContext {
-  bike: BikeSpec;
-  loads: Loads;
-  /** Loads for the bike's reference rider: the stock setup's bottoming resistance is measured there. */
-  referenceLoads: Loads;
-  targets: SagTargetsMm;
-  rateFactor: number;
+export interface FrontContext extends EndContext {
   bottomingFactor: number;
-  stockRatesNmm: readonly number[];
   ov: SetupOverrides["front"];
-  warnings: SizingWarning[];
-  reasons: string[];
 }
 
 export function coilForkOf(bike: BikeSpec): CoilFork {
   const f = bike.fork;
-  return makeCoilFork(sprungLegsOf(f.kind), f.travelMm, {
-    displacementDiameterMm: f.displacementDiameterMm,
-    freeAreaMm2: f.freeAreaMm2,
-    capVolumeMm3: f.capVolumeMm3,
-    forkTravelMm: f.travelMm,
-  });
+  const stock = f.stockSpring && f.stockRateNmm ? { geometry: f.stockSpring, rateNmm: f.stockRateNmm } : undefined;
+  return makeCoilFork(
+    sprungLegsOf(f.kind),
+    f.travelMm,
+    { displacementDiameterMm: f.displacementDiameterMm, freeAreaMm2: f.freeAreaMm2, capVolumeMm3: f.capVolumeMm3, forkTravelMm: f.travelMm },
+    forkSpringVolumeScale(f.displacementDiameterMm, stock),
+  );
 }
 
 /** Allowed oil levels: the stock level ± whole 5 mm steps, inside the catalog's range. */
@@ -62,6 +67,14 @@ export function evaluateFront(c: FrontContext): FrontResult {
   return c.bike.fork.kind === "air" ? evaluateAirFork(c) : evaluateCoilFork(c);
 }
 
+/** The spring's steel must leave air above the oil, or the force law has no meaning. */
+function requireAirGap(fk: CoilFork, k: number, h: number, path: string): void {
+  if (!(legBottomVolume(fk, h, springVolumeMm3(fk, k)) > 0))
+    throw new SizingInputError([
+      { path, message: `At ${fmt(h, 0)} mm oil level the fork spring's steel fills the air space above the oil: check the oil level, free area and cap volume` },
+    ]);
+}
+
 function evaluateCoilFork(c: FrontContext): FrontResult {
   const { bike, loads, targets: t, ov, warnings, reasons } = c;
   const f = bike.fork;
@@ -70,8 +83,8 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const W = { staticN: loads.frontStaticN, raceN: loads.frontRaceN };
   const limits = { minMm: f.preloadMinMm, maxMm: f.preloadMaxMm };
   const h0 = f.stockOilLevelMm;
+  requireAirGap(fk, stockRate, h0, "bike.fork.stockOilLevelMm");
   const mid = (t.staticSagMinMm + t.staticSagMaxMm) / 2;
-  const sagOnlyRateNmm = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm).rateNmm;
   if (!(forkPreloadForSag(fk, 1, h0, W.raceN, t.raceSagMm) + t.raceSagMm > 0))
     throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" }]);
   const modelAt = (h: number): EndModel => ({
@@ -79,23 +92,30 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     solveSag: (k, p, load) => solveForkSag(fk, k, p, h, load),
   });
   const m0 = modelAt(h0);
-  const ideal = idealToOrder(sagOnlyRateNmm * c.rateFactor, m0, W.raceN, t.raceSagMm, limits);
+
+  const sagOnlyRateNmm = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm).rateNmm;
+  const freq = matchForkFrequency(fk, h0, stockRate, c.referenceLoads.frontRaceN, W.raceN, t.raceSagMm, loads.cosRake, c.rateFactor);
+  const choice = chooseByBasis({
+    m: m0,
+    loads: W,
+    targets: t,
+    limits,
+    rateFactor: c.rateFactor,
+    sagOnlyRateNmm,
+    preferStaticFor: (wi) =>
+      c.rateFactor === 1 && !wi.limitedBy ? mid : m0.solveSag(wi.rateNmm, forkPreloadForSag(fk, wi.rateNmm, h0, W.raceN, t.raceSagMm), W.staticN).sagMm,
+    freq,
+    basis: c.basis,
+    stockRatesNmm: c.stockRatesNmm,
+    overrideRateNmm: ov?.rateNmm,
+  });
+  const { basis, ideal, sel } = choice;
   const idealRateNmm = ideal.rateNmm;
   const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
-  const preferStaticMm = c.rateFactor === 1 && !ideal.limitedBy ? mid : m0.solveSag(idealRateNmm, idealPreloadMm, W.staticN).sagMm;
-  const sel =
-    ov?.rateNmm !== undefined
-      ? { chosen: evaluateCandidate(m0, ov.rateNmm, W, t, limits), source: "override" as const }
-      : selectRate(m0, c.stockRatesNmm, idealRateNmm, W, t, limits, preferStaticMm);
   const k = sel.chosen.rateNmm;
-  reasons.push(
-    `Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone` +
-      (sagOnlyRateNmm > 0
-        ? `; ${rateText(sagOnlyRateNmm, "front")} per leg (${fk.sprungLegs} sprung) meets ${fmt(t.raceSagMm, 0)} mm race and ${fmt(mid, 0)} mm static sag`
-        : "") +
-      (c.rateFactor !== 1 ? `, times ${fmt(c.rateFactor, 3)} for skill and style.` : "."),
-  );
-  limitNotes("FRONT", "front", ideal, sagOnlyRateNmm * c.rateFactor, idealPreloadMm, t, mid, warnings, reasons);
+  reasons.push(`Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; rates are per leg, ${fk.sprungLegs} sprung.`);
+  basisReasons("front", choice, freq, sagOnlyRateNmm, t, mid, c.rateFactor, bike.referenceRiderMassKg, reasons);
+  limitNotes("FRONT", "front", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * c.rateFactor, idealPreloadMm, t, mid, warnings, reasons, basis);
   describeSource("FRONT", "fork spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   const clampP = (p: number) => Math.min(limits.maxMm, Math.max(limits.minMm, p));
@@ -104,23 +124,22 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const stockRatio = forkForce(fk, stockRate, f.stockPreloadMm, h0, f.travelMm, FAST) / c.referenceLoads.frontRaceN;
   const targetRatio = stockRatio * c.bottomingFactor;
   const ratioAt = (h: number) => forkForce(fk, k, preloadAt(h), h, f.travelMm, FAST) / W.raceN;
-  const grid = oilLevelGrid(f);
+  const hasAir = (g: number) => legBottomVolume(fk, g, springVolumeMm3(fk, k)) > 0;
+  const grid = oilLevelGrid(f).filter(hasAir);
   let h = h0;
   if (ov?.oilLevelMm !== undefined) {
     h = ov.oilLevelMm;
+    requireAirGap(fk, k, h, "overrides.front.oilLevelMm");
     if (h < f.oilLevelMinMm || h > f.oilLevelMaxMm)
       warnings.push({ code: "FRONT_OIL_LEVEL_OUTSIDE_RANGE", severity: "critical", message: `Oil level ${fmt(h, 0)} mm is outside the fork's ${f.oilLevelMinMm}–${f.oilLevelMaxMm} mm.`, field: "front.oilLevelMm" });
   } else {
-    // Levels where race sag stays reachable within the preload limits come first (the air volume
-    // changes the preload needed); among them the nearest bottoming ratio; ties go to the level nearer stock.
-    const reachable = (g: number) => {
-      const p = forkPreloadForSag(fk, k, g, W.raceN, t.raceSagMm);
-      return ov?.preloadMm !== undefined || (p >= limits.minMm && p <= limits.maxMm);
-    };
-    let best = [Infinity, Infinity, Infinity];
+    if (!grid.length) requireAirGap(fk, k, f.oilLevelMaxMm, "bike.fork.oilLevelMaxMm");
+    // Bottoming target first: the level whose bottoming ratio is nearest the target, ties to the level
+    // nearer stock. Preload follows; if it cannot reach race sag there, that is warned, not traded.
+    let best = [Infinity, Infinity];
     for (const g of grid) {
-      const score = [reachable(g) ? 0 : 1, Math.abs(ratioAt(g) - targetRatio), Math.abs(g - h0)];
-      if (score[0]! < best[0]! || (score[0] === best[0] && (score[1]! < best[1]! - 1e-12 || (Math.abs(score[1]! - best[1]!) <= 1e-12 && score[2]! < best[2]!)))) {
+      const score = [Math.abs(ratioAt(g) - targetRatio), Math.abs(g - h0)];
+      if (score[0]! < best[0]! - 1e-12 || (Math.abs(score[0]! - best[0]!) <= 1e-12 && score[1]! < best[1]!)) {
         best = score;
         h = g;
       }
@@ -131,15 +150,16 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     reasons.push(`Front: oil level ${fmt(h, 0)} mm keeps bottoming force at ${fmt(ratioAt(h), 2)} × load (stock setup ${fmt(stockRatio, 2)} × its reference rider's, factor ${fmt(c.bottomingFactor, 3)}).`);
   }
   const preloadMm = preloadAt(h);
+  const neededMm = forkPreloadForSag(fk, k, h, W.raceN, t.raceSagMm);
   if (ov?.preloadMm !== undefined && (preloadMm < limits.minMm || preloadMm > limits.maxMm))
     warnings.push({ code: "FRONT_PRELOAD_OUTSIDE_LIMITS", severity: "critical", message: `Fork preload ${fmt(preloadMm, 1)} mm is outside ${limits.minMm}–${limits.maxMm} mm.`, field: "front.preloadMm" });
-  else if (ov?.preloadMm === undefined && preloadMm !== forkPreloadForSag(fk, k, h, W.raceN, t.raceSagMm))
-    warnings.push({ code: "FRONT_PRELOAD_AT_LIMIT", severity: "caution", message: `Race sag on target needs fork preload outside ${limits.minMm}–${limits.maxMm} mm.`, field: "front.preloadMm" });
+  else if (ov?.preloadMm === undefined && preloadMm !== neededMm) warnings.push(preloadLimitWarning("FRONT", "front", neededMm, limits, "fork's adjuster"));
   const race = solveForkSag(fk, k, preloadMm, h, W.raceN);
   const stat = solveForkSag(fk, k, preloadMm, h, W.staticN);
-  sagWarnings("FRONT", "front", race, stat, t, warnings);
+  const clamped = ov?.preloadMm === undefined && preloadMm !== neededMm;
+  sagWarnings("FRONT", "front", race, stat, t, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
 
-  const neighbours = [h - OIL_LEVEL_STEP_MM, h, h + OIL_LEVEL_STEP_MM].filter((x) => x >= f.oilLevelMinMm && x <= f.oilLevelMaxMm);
+  const neighbours = [h - OIL_LEVEL_STEP_MM, h, h + OIL_LEVEL_STEP_MM].filter((x) => x >= f.oilLevelMinMm && x <= f.oilLevelMaxMm && hasAir(x));
   if (!neighbours.includes(h)) neighbours.splice(0, 0, h);
   const oilLevelCurves = neighbours.map((lvl) => {
     const p = lvl === h ? preloadMm : preloadAt(lvl);
@@ -171,26 +191,45 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     wheelRateAtSagNmm: wheelRate,
     sprungMassKg,
     naturalFrequencyHz: naturalFrequencyOf(wheelRate, sprungMassKg),
+    rateBasis: choice.result,
+    springVolumeMm3: springVolumeMm3(fk, k),
+    bottomPressureMpaAbs: forkBottomPressureMpa(fk, k, h, FAST),
+    negativeChamber: null,
+  };
+}
+
+/** The catalog's air spring with its negative chamber, typical where the catalog gives none. */
+export function airSpringOf(bike: BikeSpec): { spring: AirSpring; typical: boolean } {
+  const f = bike.fork;
+  const air = f.air!; // schema guarantees it for air forks
+  return {
+    spring: {
+      areaMm2: air.pistonAreaMm2,
+      positiveVolumeMm3: air.chamberVolumeMm3,
+      negativeVolumeMm3: air.negativeChamberVolumeMm3 ?? AIR_NEGATIVE_VOLUME_FRACTION * air.chamberVolumeMm3,
+      equalizeAtMm: air.equalizeAtMm ?? AIR_EQUALIZE_FRACTION_OF_TRAVEL * f.travelMm,
+    },
+    typical: air.negativeChamberVolumeMm3 === undefined || air.equalizeAtMm === undefined,
   };
 }
 
 function evaluateAirFork(c: FrontContext): FrontResult {
   const { bike, loads, targets: t, ov, warnings, reasons } = c;
   const f = bike.fork;
-  const air = f.air!; // schema guarantees it for air forks
-  const A = air.pistonAreaMm2;
-  const V = air.chamberVolumeMm3;
-  const p0 = ov?.airPressureKpaGauge !== undefined ? ov.airPressureKpaGauge / 1000 + ATMOSPHERE_MPA : airAbsMpaForSag(A, V, loads.frontRaceN, t.raceSagMm);
+  const { spring, typical } = airSpringOf(bike);
+  if (!(t.raceSagMm > spring.equalizeAtMm))
+    throw new SizingInputError([{ path: "bike.fork.air.equalizeAtMm", message: "The chambers must equalise before race sag" }]);
+  const p0 = ov?.airPressureKpaGauge !== undefined ? ov.airPressureKpaGauge / 1000 + ATMOSPHERE_MPA : airSpringChargeForLoad(spring, loads.frontRaceN, t.raceSagMm);
   const gaugeKpa = (p0 - ATMOSPHERE_MPA) * 1000;
   if (gaugeKpa < 0) throw new SizingInputError([{ path: "bike.fork.air", message: "The sag target needs less than atmospheric pressure: chamber too small for this load" }]);
   reasons.push(
     ov?.airPressureKpaGauge !== undefined
       ? `Front: air pressure ${fmt(gaugeKpa, 0)} kPa set by the tuner.`
-      : `Front: ${fmt(gaugeKpa, 0)} kPa gauge puts race sag at ${fmt(t.raceSagMm, 0)} mm under ${fmt(loads.frontRaceN, 0)} N (isothermal); fine-tune by measuring sag.`,
+      : `Front: ${fmt(gaugeKpa, 0)} kPa gauge at top-out puts race sag at ${fmt(t.raceSagMm, 0)} mm under ${fmt(loads.frontRaceN, 0)} N (isothermal, negative chamber equalised at ${fmt(spring.equalizeAtMm, 0)} mm${typical ? ", typical volumes" : ""}); fine-tune by measuring sag.`,
   );
-  const force = (s: number, n: number) => airChamberForce(A, V, p0, s, n);
-  const race = firstCrossing((s) => force(s, 1), loads.frontRaceN, f.travelMm, []);
-  const stat = firstCrossing((s) => force(s, 1), loads.frontStaticN, f.travelMm, []);
+  const force = (s: number, n: number) => airSpringForce(spring, p0, s, n);
+  const race = firstCrossing((s) => force(s, 1), loads.frontRaceN, f.travelMm, [spring.equalizeAtMm]);
+  const stat = firstCrossing((s) => force(s, 1), loads.frontStaticN, f.travelMm, [spring.equalizeAtMm]);
   sagWarnings("FRONT", "front", race, stat, t, warnings);
   const points = [];
   for (let i = 0; i < CURVE_POINTS; i++) {
@@ -198,9 +237,7 @@ function evaluateAirFork(c: FrontContext): FrontResult {
     points.push({ forkTravelMm: s, forceN: force(s, FAST) });
   }
   const bottomN = force(f.travelMm, FAST);
-  // dF/ds = n·P(s)·A²/(V − A·s), from P·Vⁿ = const; n = 1 at sag.
-  const v = V - A * race.sagMm;
-  const wheelRate = ((p0 * (V / v) * A * A) / v) / (loads.cosRake * loads.cosRake);
+  const wheelRate = airSpringRate(spring, p0, race.sagMm, 1) / (loads.cosRake * loads.cosRake);
   const sprungMassKg = loads.frontRaceN / (STANDARD_GRAVITY * loads.cosRake);
   return {
     kind: "air",
@@ -224,5 +261,9 @@ function evaluateAirFork(c: FrontContext): FrontResult {
     wheelRateAtSagNmm: wheelRate,
     sprungMassKg,
     naturalFrequencyHz: naturalFrequencyOf(wheelRate, sprungMassKg),
+    rateBasis: null,
+    springVolumeMm3: null,
+    bottomPressureMpaAbs: airSpringPositivePressure(spring, p0, f.travelMm, FAST),
+    negativeChamber: { volumeMm3: spring.negativeVolumeMm3!, equalizeAtMm: spring.equalizeAtMm, typical },
   };
 }

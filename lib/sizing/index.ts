@@ -1,4 +1,4 @@
-// Public API of the Sagwise sizing engine (issue 3). Pure functions, SI-style units in the names.
+// Public API of the Sagwise sizing engine (lib/sizing/README.md). Pure functions, SI-style units in the names.
 export { recommend } from "./recommend";
 export { evaluateSetup } from "./evaluate";
 export { ENGINE_VERSION } from "./version";
@@ -28,13 +28,22 @@ export {
   type ClickerSetting,
   type SizingWarning,
   type RateSource,
+  rateBasisResultSchema,
+  type RateBasisResult,
 } from "./output-schema";
 export { setupOverridesSchema, type SetupOverrides, type SetupOverridesInput } from "./overrides";
 export * from "./vocab";
 
 export { shockTravelAtMm, rearWheelForceN, solveRearSagMm, idealRearSpring, type LeveragePoint } from "./linkage";
-export { forkAirForceN, airForkPressureKpaGauge, polytropicPressure } from "./air";
-export { springRateFromGeometry, wahlFactor, rateFromLoadTest, shearStressMpa, activeCoilsSquaredGround } from "./spring-geometry";
+export { forkAirForceN, airForkPressureKpaGauge, polytropicPressure, airSpringForce, airSpringChargeForLoad, type AirSpring } from "./air";
+export {
+  springRateFromGeometry,
+  wahlFactor,
+  rateFromLoadTest,
+  shearStressMpa,
+  activeCoilsSquaredGround,
+  springSteelVolumeMm3,
+} from "./spring-geometry";
 export {
   convertRate,
   rateTriple,

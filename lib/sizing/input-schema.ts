@@ -10,6 +10,7 @@ import {
   terrainSchema,
 } from "./vocab";
 import { bikeSpecSchema } from "./bike-schema";
+import { rateBasisSchema } from "./vocab";
 import { DEFAULT_GEAR_MASS_KG, FREQUENCY_RATIO_WINDOW } from "./defaults";
 
 /** Sag targets as fractions of the end's travel, so one table serves every bike size. */
@@ -39,8 +40,12 @@ export const targetsSchema = z.object({
   riderRearShare: z.number().min(0.3).max(0.95).optional(),
   rateFactorBySkill: z.partialRecord(skillLevelSchema, z.number().min(0.7).max(1.4)).optional(),
   rateFactorByStyle: z.partialRecord(ridingStyleSchema, z.number().min(0.7).max(1.4)).optional(),
-  /** Replaces skill × style when given. */
+  rateFactorByDiscipline: z.partialRecord(disciplineSchema, z.number().min(0.7).max(1.4)).optional(),
+  rateFactorByJump: z.partialRecord(jumpSizeSchema, z.number().min(0.7).max(1.4)).optional(),
+  /** Replaces skill × style × discipline × jump when given. */
   rateFactor: z.number().min(0.7).max(1.4).optional(),
+  /** How the ideal rate is found: matched ride frequency (default) or the two sag targets. */
+  rateBasis: rateBasisSchema.optional(),
   bottomingFactorByDiscipline: z.partialRecord(disciplineSchema, z.number().min(0.5).max(2)).optional(),
   bottomingFactorByJump: z.partialRecord(jumpSizeSchema, z.number().min(0.5).max(2)).optional(),
   /** Replaces discipline × jump when given. */

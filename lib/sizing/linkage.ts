@@ -111,7 +111,7 @@ export function preloadForSag(L: Linkage, rateNmm: number, loadN: number, sagMm:
 /** Full travel per the curve: its last point. */
 const curveEnd = (L: Linkage): number => L.y[L.y.length - 1]!;
 
-// ---- public helpers (contract in issue 3) ----
+// ---- public helpers (public API: callers outside the engine rely on these names) ----
 
 export function shockTravelAtMm(curve: readonly LeveragePoint[], wheelTravelMm: number): number {
   requireNumbers({ wheelTravelMm }, { wheelTravelMm: "nonnegative" });
@@ -141,7 +141,7 @@ export function solveRearSagMm(a: {
 }
 
 /**
- * Ideal spring from race and static sag targets (sizing-model.md):
+ * Ideal spring from race and static sag targets (lib/sizing/README.md):
  * k* = (W_rr·LR(y_r) − W_rs·LR(y_s)) / (x(y_r) − x(y_s)),  p* = W_rr·LR(y_r)/k* − x(y_r).
  * Both equations are W = k(p + x)/LR written at the two sags and subtracted.
  */

@@ -12,7 +12,7 @@ export interface Loads {
 }
 
 /**
- * Static axle loads (sizing-model.md, Loads), from the bike's weight split and the rider's share:
+ * Static axle loads (lib/sizing/README.md, "Model"), from the bike's weight split and the rider's share:
  * W_rs = (m_b(1−φ_b) − m_ur)·g;  W_rr = W_rs + m_r·φ_rr·g;
  * W_fs = (m_b·φ_b − m_uf)·g·cos θ;  W_fr = W_fs + m_r(1−φ_rr)·g·cos θ.
  * The fork carries only the component of the front load along its axis, hence cos θ (rake).

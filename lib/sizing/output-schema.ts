@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { clickerIdSchema, forkKindSchema, severitySchema } from "./vocab";
+import { clickerIdSchema, forkKindSchema, rateBasisSchema, severitySchema } from "./vocab";
 import { sizingInputSchema } from "./input-schema";
 
 const num = z.number().refine(Number.isFinite, { message: "Must be finite" });
@@ -22,8 +22,20 @@ export const warningSchema = z.object({
   message: z.string(),
   /** Input or output field the warning is about, dotted ("rear.preloadMm"). */
   field: z.string().optional(),
+  /** A sanity limit: a figure is probably mistyped; approval waits until the tuner acknowledges it. */
+  requiresAcknowledgement: z.boolean().optional(),
 });
 export type SizingWarning = z.output<typeof warningSchema>;
+
+/** Both rate bases side by side; `used` sized this end. Recommendations from engine 1.x have none. */
+export const rateBasisResultSchema = z.object({
+  used: rateBasisSchema,
+  rideFrequency: z
+    .object({ idealRateNmm: num, chosenRateNmm: num, referenceFrequencyHz: num, targetFrequencyHz: num })
+    .nullable(),
+  sagWindow: z.object({ idealRateNmm: num, chosenRateNmm: num }).nullable(),
+});
+export type RateBasisResult = z.output<typeof rateBasisResultSchema>;
 
 const rearPointSchema = z.object({ wheelTravelMm: num, wheelForceN: num });
 const forkPointSchema = z.object({ forkTravelMm: num, forceN: num });
@@ -49,6 +61,7 @@ export const rearResultSchema = z.object({
   wheelRateAtSagNmm: num,
   sprungMassKg: num,
   naturalFrequencyHz: num,
+  rateBasis: rateBasisResultSchema.optional(),
 });
 
 export const oilLevelCurveSchema = z.object({
@@ -85,6 +98,14 @@ export const frontResultSchema = z.object({
   wheelRateAtSagNmm: num,
   sprungMassKg: num,
   naturalFrequencyHz: num,
+  /** Coil forks; null for air-spring forks (sized by pressure). */
+  rateBasis: rateBasisResultSchema.nullable().optional(),
+  /** Steel of one fitted spring, taken from the air above the oil in its leg (coil forks). */
+  springVolumeMm3: num.nullable().optional(),
+  /** Absolute pressure at full travel, fast stroke: air above the oil, or the positive chamber. */
+  bottomPressureMpaAbs: num.optional(),
+  /** Air-spring forks: the negative chamber used (from the catalog or typical). */
+  negativeChamber: z.object({ volumeMm3: num, equalizeAtMm: num, typical: z.boolean() }).nullable().optional(),
 });
 
 export const clickerMoveSchema = z.object({ change: num, reason: z.string() });
@@ -107,6 +128,7 @@ export const recommendationSchema = z.object({
     riderRearShare: num,
     rateFactor: num,
     bottomingFactor: num,
+    rateBasis: rateBasisSchema.optional(),
     loads: z.object({ rearStaticN: num, rearRaceN: num, frontStaticN: num, frontRaceN: num }),
     frequencyRatioWindow: z.object({ min: num, max: num }),
   }),

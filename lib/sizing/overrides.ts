@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { clickerIdSchema } from "./vocab";
+import { clickerIdSchema, rateBasisSchema } from "./vocab";
 
 const opt = (min: number, max: number) => z.number().min(min).max(max).optional();
 
@@ -11,6 +11,8 @@ const sagOverrides = {
 
 /** A tuner's edits; every field optional, anything absent keeps the engine's own choice. */
 export const setupOverridesSchema = z.object({
+  /** The tuner's choice of rate basis for this request; absent: the shop's default. */
+  rateBasis: rateBasisSchema.optional(),
   rear: z.object({ rateNmm: opt(1, 400), preloadMm: opt(-20, 80), ...sagOverrides }).optional(),
   front: z
     .object({

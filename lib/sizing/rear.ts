@@ -3,7 +3,10 @@ import type { Loads } from "./loads";
 import type { RearResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
 import { twoSagRate, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
-import { evaluateCandidate, idealToOrder, selectRate, type EndModel, type IdealToOrder, type SagTargetsMm } from "./selection";
+import type { EndModel, IdealToOrder, Limits, SagTargetsMm } from "./selection";
+import { chooseByBasis, type BasisChoice } from "./basis-choice";
+import { matchRearFrequency, type FrequencyMatch } from "./rate-basis";
+import type { RateBasis } from "./vocab";
 import { naturalFrequencyOf } from "./frequency";
 import { rateTriple, STANDARD_GRAVITY } from "./units";
 import { fmt, rateText } from "./format";
@@ -17,41 +20,55 @@ export function rearModel(L: Linkage, travelMm: number): EndModel {
   };
 }
 
-export function evaluateRear(
-  bike: BikeSpec,
-  loads: Loads,
-  targets: SagTargetsMm,
-  rateFactor: number,
-  stockRatesNmm: readonly number[],
-  ov: SetupOverrides["rear"],
-  warnings: SizingWarning[],
-  reasons: string[],
-): RearResult {
+export interface EndContext {
+  bike: BikeSpec;
+  loads: Loads;
+  /** Loads for the bike's reference rider: the stock setup is measured there. */
+  referenceLoads: Loads;
+  targets: SagTargetsMm;
+  rateFactor: number;
+  basis: RateBasis;
+  stockRatesNmm: readonly number[];
+  warnings: SizingWarning[];
+  reasons: string[];
+}
+
+export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearResult {
+  const { bike, loads, targets, rateFactor, warnings, reasons } = c;
   const r = bike.rear;
   const L = prepareLinkage(r.leverageCurve, "bike.rear.leverageCurve");
   const m = rearModel(L, r.wheelTravelMm);
   const W = { staticN: loads.rearStaticN, raceN: loads.rearRaceN };
   const mid = (targets.staticSagMinMm + targets.staticSagMaxMm) / 2;
   const limits = { minMm: r.preloadMinMm, maxMm: r.preloadMaxMm };
+
+  // Both bases, always: the one used sizes the spring, the other is shown beside it.
   const sagOnlyRateNmm = twoSagRate(L, W.staticN, W.raceN, mid, targets.raceSagMm);
-  const ideal = idealToOrder(sagOnlyRateNmm * rateFactor, m, W.raceN, targets.raceSagMm, limits);
+  const freq = matchRearFrequency(L, r.stockRateNmm, c.referenceLoads.rearRaceN, W.raceN, targets.raceSagMm, rateFactor);
+  const choice = chooseByBasis({
+    m,
+    loads: W,
+    targets,
+    limits,
+    rateFactor,
+    sagOnlyRateNmm,
+    // With a rate factor of 1 and no limit this is the window's middle; otherwise where the ideal puts it.
+    preferStaticFor: (wi) =>
+      rateFactor === 1 && !wi.limitedBy ? mid : solveSag(L, wi.rateNmm, preloadForSag(L, wi.rateNmm, W.raceN, targets.raceSagMm), W.staticN, r.wheelTravelMm).sagMm,
+    freq,
+    basis: c.basis,
+    stockRatesNmm: c.stockRatesNmm,
+    overrideRateNmm: ov?.rateNmm,
+  });
+  const { basis, ideal, sel } = choice;
   const idealRateNmm = ideal.rateNmm;
   const idealPreloadMm = preloadForSag(L, idealRateNmm, W.raceN, targets.raceSagMm);
-  // With a rate factor of 1 and no limit this is the window's middle; otherwise where the ideal puts it.
-  const preferStaticMm =
-    rateFactor === 1 && !ideal.limitedBy ? mid : solveSag(L, idealRateNmm, idealPreloadMm, W.staticN, r.wheelTravelMm).sagMm;
-
-  const sel =
-    ov?.rateNmm !== undefined
-      ? { chosen: evaluateCandidate(m, ov.rateNmm, W, targets, limits), source: "override" as const }
-      : selectRate(m, stockRatesNmm, idealRateNmm, W, targets, limits, preferStaticMm);
   const k = sel.chosen.rateNmm;
   reasons.push(
-    `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone` +
-      (sagOnlyRateNmm > 0 ? `; ${rateText(sagOnlyRateNmm, "rear")} meets ${fmt(targets.raceSagMm, 0)} mm race sag with ${fmt(mid, 0)} mm static sag` : "") +
-      (rateFactor !== 1 ? `, times ${fmt(rateFactor, 3)} for skill and style.` : "."),
+    `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone.`,
   );
-  limitNotes("REAR", "rear", ideal, sagOnlyRateNmm * rateFactor, idealPreloadMm, targets, mid, warnings, reasons);
+  basisReasons("rear", choice, freq, sagOnlyRateNmm, targets, mid, rateFactor, bike.referenceRiderMassKg, reasons);
+  limitNotes("REAR", "rear", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * rateFactor, idealPreloadMm, targets, mid, warnings, reasons, basis);
   describeSource("REAR", "shock spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   let preloadMm = sel.chosen.preloadMm;
@@ -59,16 +76,11 @@ export function evaluateRear(
     preloadMm = ov.preloadMm;
     if (preloadMm < r.preloadMinMm || preloadMm > r.preloadMaxMm)
       warnings.push({ code: "REAR_PRELOAD_OUTSIDE_LIMITS", severity: "critical", message: `Preload ${fmt(preloadMm, 1)} mm is outside the shock's ${r.preloadMinMm}–${r.preloadMaxMm} mm.`, field: "rear.preloadMm" });
-  } else if (!sel.chosen.preloadOk)
-    warnings.push({
-      code: "REAR_PRELOAD_AT_LIMIT",
-      severity: "caution",
-      message: `Race sag on target needs ${fmt(sel.chosen.preloadNeededMm, 1)} mm preload; the collar allows ${r.preloadMinMm}–${r.preloadMaxMm} mm.`,
-      field: "rear.preloadMm",
-    });
+  } else if (!sel.chosen.preloadOk) warnings.push(preloadLimitWarning("REAR", "rear", sel.chosen.preloadNeededMm, limits, "collar"));
   const race = solveSag(L, k, preloadMm, W.raceN, r.wheelTravelMm);
   const stat = solveSag(L, k, preloadMm, W.staticN, r.wheelTravelMm);
-  sagWarnings("REAR", "rear", race, stat, targets, warnings);
+  const clamped = ov?.preloadMm === undefined && !sel.chosen.preloadOk;
+  sagWarnings("REAR", "rear", race, stat, targets, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
 
   const forceCurve = [];
   for (let i = 0; i < CURVE_POINTS; i++) {
@@ -94,6 +106,46 @@ export function evaluateRear(
     wheelRateAtSagNmm: wheelRate,
     sprungMassKg,
     naturalFrequencyHz: naturalFrequencyOf(wheelRate, sprungMassKg),
+    rateBasis: choice.result,
+  };
+}
+
+/** Say how the ideal came about under the basis used, and what the other basis asks for. */
+export function basisReasons(
+  end: "rear" | "front",
+  choice: BasisChoice,
+  freq: FrequencyMatch,
+  sagOnlyNmm: number,
+  t: SagTargetsMm,
+  staticMidMm: number,
+  rateFactor: number,
+  referenceRiderKg: number,
+  reasons: string[],
+): void {
+  const End = end === "rear" ? "Rear" : "Front";
+  const { basis } = choice;
+  const freqIdealNmm = choice.result.rideFrequency?.idealRateNmm ?? null;
+  const windowIdealNmm = choice.windowIdeal.rateNmm;
+  const factor = rateFactor !== 1 ? ` × ${fmt(rateFactor, 3)} for skill, style, discipline and jumps` : "";
+  const freqText =
+    freqIdealNmm !== null
+      ? `ride frequency: the stock spring gives the ${fmt(referenceRiderKg, 0)} kg reference rider ${fmt(freq.referenceFrequencyHz, 2)} Hz at race sag${factor}; ${rateText(freqIdealNmm, end)} gives this rider ${fmt(freq.targetFrequencyHz, 2)} Hz`
+      : "ride frequency: no rate reaches the stock setup's frequency for this rider";
+  const windowText =
+    sagOnlyNmm > 0
+      ? `sag window: ${rateText(windowIdealNmm, end)} meets ${fmt(t.raceSagMm, 0)} mm race sag with ${fmt(staticMidMm, 0)} mm static sag${factor}`
+      : "sag window: no spring meets both sag targets";
+  reasons.push(basis === "ride-frequency" ? `${End} sized by ${freqText}. Beside it, ${windowText}.` : `${End} sized by ${windowText}. Beside it, ${freqText}.`);
+}
+
+/** Race sag on target needs preload past the adjuster: the spring's direction follows from that. */
+export function preloadLimitWarning(code: "REAR" | "FRONT", end: "rear" | "front", neededMm: number, limits: Limits, adjuster: string): SizingWarning {
+  const soft = neededMm > limits.maxMm;
+  return {
+    code: `${code}_PRELOAD_AT_LIMIT`,
+    severity: "caution",
+    message: `Race sag on target needs ${fmt(neededMm, 1)} mm preload; the ${adjuster} allows ${limits.minMm}–${limits.maxMm} mm, so this spring is too ${soft ? "soft" : "stiff"} for the rider and race sag will sit ${soft ? "deeper" : "higher"} than the target.`,
+    field: `${end}.preloadMm`,
   };
 }
 
@@ -121,6 +173,15 @@ export function describeSource(
   else reasons.push(`${end}: ${what} rate ${rate(k)} set by the tuner.`);
 }
 
+export interface SpringDirection {
+  /** Preload was clamped at a limit: static sag no longer tells the spring's direction. */
+  clamped: boolean;
+  chosenNmm: number;
+  idealNmm: number;
+  /** The rate the sag-window basis would pick, named when static sag misses the window. */
+  windowPickNmm: number | null;
+}
+
 export function sagWarnings(
   code: "REAR" | "FRONT",
   field: "rear" | "front",
@@ -128,6 +189,7 @@ export function sagWarnings(
   stat: { sagMm: number; state: string },
   t: SagTargetsMm,
   warnings: SizingWarning[],
+  dir?: SpringDirection,
 ): void {
   if (race.state !== "ok")
     warnings.push({
@@ -138,13 +200,21 @@ export function sagWarnings(
     });
   else if (Math.abs(race.sagMm - t.raceSagMm) > 2)
     warnings.push({ code: `${code}_RACE_SAG_OFF_TARGET`, severity: "caution", message: `Race sag ${fmt(race.sagMm, 0)} mm against a target of ${fmt(t.raceSagMm, 0)} mm.`, field: `${field}.predicted.raceSagMm` });
-  if (stat.sagMm < t.staticSagMinMm - 1e-6 || stat.sagMm > t.staticSagMaxMm + 1e-6)
+  const below = t.staticSagMinMm - stat.sagMm;
+  const above = stat.sagMm - t.staticSagMaxMm;
+  if (below > 1e-6 || above > 1e-6) {
+    // With preload at a limit the static sag is distorted by the clamp: the rate itself says which way.
+    const soft = dir?.clamped ? dir.chosenNmm < dir.idealNmm : below > 0;
+    const pick = dir?.windowPickNmm != null && Math.abs(dir.windowPickNmm - dir.chosenNmm) > 1e-9 ? ` The sag-window basis would pick ${rateText(dir.windowPickNmm, field)}.` : "";
     warnings.push({
       code: `${code}_STATIC_SAG_OUTSIDE_WINDOW`,
       severity: "caution",
-      message: `Static sag ${fmt(stat.sagMm, 0)} mm is outside ${fmt(t.staticSagMinMm, 0)}–${fmt(t.staticSagMaxMm, 0)} mm: the spring is ${stat.sagMm < t.staticSagMinMm ? "soft" : "stiff"} for this rider.`,
+      message:
+        `Static sag ${fmt(stat.sagMm, 0)} mm is ${fmt(Math.max(below, above), 0)} mm ${below > 0 ? "below" : "above"} the ${fmt(t.staticSagMinMm, 0)}–${fmt(t.staticSagMaxMm, 0)} mm window: the spring is on the ${soft ? "soft" : "stiff"} side for this rider.` +
+        pick,
       field: `${field}.predicted.staticSagMm`,
     });
+  }
 }
 
 /** Say when the ideal to order is not the pure sag ideal, and why. */
@@ -158,6 +228,7 @@ export function limitNotes(
   staticMidMm: number,
   warnings: SizingWarning[],
   reasons: string[],
+  basis: RateBasis = "sag-window",
 ): void {
   if (ideal.limitedBy === "unreachable")
     warnings.push({
@@ -170,7 +241,7 @@ export function limitNotes(
     warnings.push({
       code: `${code}_IDEAL_LIMITED_BY_PRELOAD`,
       severity: "info",
-      message: `The sag targets ask for ${rateText(sagIdealNmm, end)}, which needs preload outside the adjuster's limits; the ${ideal.limitedBy === "soft" ? "softest" : "stiffest"} fittable rate is ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm.`,
+      message: `${basis === "ride-frequency" ? "The matched ride frequency asks" : "The sag targets ask"} for ${rateText(sagIdealNmm, end)}, which needs preload outside the adjuster's limits; the ${ideal.limitedBy === "soft" ? "softest" : "stiffest"} fittable rate is ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm.`,
       field: `${end}.idealRate`,
     });
   else reasons.push(`${code === "REAR" ? "Rear" : "Front"}: ideal ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm preload.`);

@@ -1,4 +1,4 @@
-import type { SagSolution } from "./solve";
+import { solveIncreasing, type SagSolution } from "./solve";
 
 /** What selection needs to know about one end, front or rear, whatever its spring. */
 export interface EndModel {
@@ -56,7 +56,7 @@ export interface Selection {
 }
 
 /**
- * Selection among stocked rates (sizing-model.md): for each, the preload that puts race sag on
+ * Selection among stocked rates (lib/sizing/README.md): for each, the preload that puts race sag on
  * target and the static sag it then gives; keep those with preload within limits and static sag in
  * the window; prefer static sag nearest `preferStaticMm` (the window's middle unless a rate factor
  * moved it). None passes: the stocked rate nearest the ideal (caller warns and names the rate to
@@ -78,12 +78,17 @@ export function selectRate(
     if (!best || Math.abs(c.static.sagMm - preferStaticMm) < Math.abs(best.static.sagMm - preferStaticMm)) best = c;
   }
   if (best) return { chosen: best, source: "stock", tried };
-  let nearest: Candidate | undefined;
-  for (const c of tried)
-    if (!nearest || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(nearest.rateNmm / idealRateNmm)))
-      nearest = c;
+  const nearest = nearestByRatio(tried, idealRateNmm);
   if (nearest) return { chosen: nearest, source: "stock-nearest", tried };
   return { chosen: evaluateCandidate(m, idealRateNmm, loads, t, limits), source: "order", tried };
+}
+
+/** The candidate whose rate is nearest the ideal by ratio (shelf steps are roughly proportional). */
+function nearestByRatio(cs: readonly Candidate[], idealRateNmm: number): Candidate | undefined {
+  let best: Candidate | undefined;
+  for (const c of cs)
+    if (!best || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(best.rateNmm / idealRateNmm))) best = c;
+  return best;
 }
 
 export interface IdealToOrder {
@@ -95,20 +100,38 @@ export interface IdealToOrder {
 
 /**
  * The rate to order must be fittable: race sag on target with preload inside the adjuster's limits.
- * At both ends the race-sag preload has the form p(k) = A/k − B (rear: A = W·LR(y_r), B = x(y_r);
- * fork: A = (W − 2F_air)/n_s, B = s_r), so the fittable rates are A/(p_max + B) ≤ k ≤ A/(p_min + B).
- * Clamping the sag ideal into that band keeps it monotonic in load and in sag (both bounds move the
- * same way as the ideal).
+ * The race-sag preload p(k) falls as k rises (rear: p = W·LR(y_r)/k − x(y_r); fork: (W − ΣF_air)/(n_s·k)
+ * − s_r, the air growing slightly with the spring's steel), so the fittable rates are the band between
+ * p(k) = p_max and p(k) = p_min, found numerically. Clamping the ideal into that band keeps it
+ * monotonic in load and in sag (both bounds move the same way as the ideal).
  */
-export function idealToOrder(sagIdealNmm: number, m: EndModel, raceN: number, raceSagMm: number, limits: Limits): IdealToOrder {
-  const p1 = m.preloadForSag(1, raceN, raceSagMm);
-  const p2 = m.preloadForSag(2, raceN, raceSagMm);
-  const A = 2 * (p1 - p2);
-  const B = A - p1;
-  const softest = A / (limits.maxMm + B);
-  const stiffest = A / (limits.minMm + B);
-  if (!(sagIdealNmm > 0) || !Number.isFinite(sagIdealNmm)) return { rateNmm: softest, limitedBy: "unreachable" };
-  if (sagIdealNmm < softest) return { rateNmm: softest, limitedBy: "soft" };
-  if (sagIdealNmm > stiffest) return { rateNmm: stiffest, limitedBy: "stiff" };
-  return { rateNmm: sagIdealNmm, limitedBy: null };
+export function idealToOrder(idealNmm: number, m: EndModel, raceN: number, raceSagMm: number, limits: Limits): IdealToOrder {
+  const minusPreload = (k: number) => -m.preloadForSag(k, raceN, raceSagMm);
+  const softest = solveIncreasing(minusPreload, -limits.maxMm, 1, 10) ?? 0;
+  const stiffest = solveIncreasing(minusPreload, -limits.minMm, 1, 10) ?? Infinity;
+  if (!(idealNmm > 0) || !Number.isFinite(idealNmm)) return { rateNmm: softest, limitedBy: "unreachable" };
+  if (idealNmm < softest) return { rateNmm: softest, limitedBy: "soft" };
+  if (idealNmm > stiffest) return { rateNmm: stiffest, limitedBy: "stiff" };
+  return { rateNmm: idealNmm, limitedBy: null };
+}
+
+/**
+ * Ride-frequency basis: the stocked rate nearest the ideal (by ratio, as shelf steps are) among those
+ * whose race-sag preload is inside the limits; static sag is then a check, not a filter. None fits:
+ * the nearest stocked rate (caller warns). Nothing stocked: the ideal itself, to order.
+ */
+export function selectNearest(
+  m: EndModel,
+  stockRatesNmm: readonly number[],
+  idealRateNmm: number,
+  loads: { staticN: number; raceN: number },
+  t: SagTargetsMm,
+  limits: Limits,
+): Selection {
+  const tried = stockRatesNmm.map((k) => evaluateCandidate(m, k, loads, t, limits));
+  const fit = nearestByRatio(tried.filter((c) => c.preloadOk), idealRateNmm);
+  if (fit) return { chosen: fit, source: "stock", tried };
+  const nearest = nearestByRatio(tried, idealRateNmm);
+  if (nearest) return { chosen: nearest, source: "stock-nearest", tried };
+  return { chosen: evaluateCandidate(m, idealRateNmm, loads, t, limits), source: "order", tried };
 }

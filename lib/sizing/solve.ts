@@ -54,3 +54,29 @@ function refine(force: (y: number) => number, loadN: number, a: number, b: numbe
   }
   return (a + b) / 2;
 }
+
+/**
+ * x in [lo, hi] where an increasing fn(x) reaches target; the bracket is widened geometrically (×4,
+ * at most 30 times) when the target lies outside it. null when no x > 0 gets there.
+ */
+export function solveIncreasing(fn: (x: number) => number, target: number, lo: number, hi: number): number | null {
+  let a = lo;
+  let b = hi;
+  let ga = fn(a) - target;
+  let gb = fn(b) - target;
+  for (let i = 0; i < 30 && ga > 0; i++) {
+    b = a;
+    gb = ga;
+    a /= 4;
+    ga = fn(a) - target;
+  }
+  for (let i = 0; i < 30 && gb < 0; i++) {
+    a = b;
+    ga = gb;
+    b *= 4;
+    gb = fn(b) - target;
+  }
+  if (!(ga <= 0 && gb >= 0)) return null;
+  if (ga === 0) return a;
+  return refine(fn, target, a, b, ga, gb);
+}

@@ -51,3 +51,12 @@ export function rateFromLoadTest(a: { lengthsMm: [number, number]; forcesN: [num
   if (!(k > 0)) throw new SizingInputError([{ path: "forcesN", message: "Force must rise as the spring shortens" }]);
   return k;
 }
+
+/**
+ * Steel volume of a helical spring: wire length π·D·N_t times wire section π·d²/4, so
+ * V = π²·d²·D·N_t/4 (N_t total coils, ends included; the small pitch angle is neglected).
+ */
+export function springSteelVolumeMm3(a: { wireDiameterMm: number; meanCoilDiameterMm: number; totalCoils: number }): number {
+  requireNumbers(a, { wireDiameterMm: "positive", meanCoilDiameterMm: "positive", totalCoils: "positive" });
+  return (Math.PI * Math.PI * a.wireDiameterMm ** 2 * a.meanCoilDiameterMm * a.totalCoils) / 4;
+}

@@ -1,10 +1,14 @@
 import type { SizingInputParsed } from "./input-schema";
 import type { SagTargetsMm } from "./selection";
 import { SizingInputError } from "./errors";
+import type { RateBasis } from "./vocab";
 import {
   BOTTOMING_FACTOR_BY_DISCIPLINE,
   BOTTOMING_FACTOR_BY_JUMP,
+  DEFAULT_RATE_BASIS,
   DEFAULT_RIDER_REAR_SHARE,
+  RATE_FACTOR_BY_DISCIPLINE,
+  RATE_FACTOR_BY_JUMP,
   RATE_FACTOR_BY_SKILL,
   RATE_FACTOR_BY_STYLE,
   SAG_OFFSET_BY_SKILL,
@@ -14,8 +18,10 @@ import {
 export interface ResolvedTargets {
   riderMassWithGearKg: number;
   riderRearShare: number;
+  /** Stiffness asked for beyond the matched rate: skill × style × discipline × jump size. */
   rateFactor: number;
   bottomingFactor: number;
+  rateBasis: RateBasis;
   rear: SagTargetsMm;
   front: SagTargetsMm;
 }
@@ -35,7 +41,11 @@ export function resolveTargets(input: SizingInputParsed): ResolvedTargets {
   checkSagTargets(rear, rearT, path);
   checkSagTargets(front, forkT, path);
   const rateFactor =
-    t.rateFactor ?? (t.rateFactorBySkill?.[skill] ?? RATE_FACTOR_BY_SKILL[skill]) * (t.rateFactorByStyle?.[style] ?? RATE_FACTOR_BY_STYLE[style]);
+    t.rateFactor ??
+    (t.rateFactorBySkill?.[skill] ?? RATE_FACTOR_BY_SKILL[skill]) *
+      (t.rateFactorByStyle?.[style] ?? RATE_FACTOR_BY_STYLE[style]) *
+      (t.rateFactorByDiscipline?.[discipline] ?? RATE_FACTOR_BY_DISCIPLINE[discipline]) *
+      (t.rateFactorByJump?.[jumpSize] ?? RATE_FACTOR_BY_JUMP[jumpSize]);
   const bottomingFactor =
     t.bottomingFactor ??
     (t.bottomingFactorByDiscipline?.[discipline] ?? BOTTOMING_FACTOR_BY_DISCIPLINE[discipline]) *
@@ -45,6 +55,7 @@ export function resolveTargets(input: SizingInputParsed): ResolvedTargets {
     riderRearShare: t.riderRearShare ?? DEFAULT_RIDER_REAR_SHARE,
     rateFactor,
     bottomingFactor,
+    rateBasis: t.rateBasis ?? DEFAULT_RATE_BASIS,
     rear,
     front,
   };

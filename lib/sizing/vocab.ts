@@ -67,3 +67,9 @@ export type Severity = z.infer<typeof severitySchema>;
 
 export const suspensionEndSchema = z.enum(["front", "rear"]);
 export type SuspensionEnd = z.infer<typeof suspensionEndSchema>;
+
+/** "ride-frequency": the stock setup's natural frequency for the reference rider, matched for this
+ *  rider; "sag-window": the rate that meets both race and static sag targets (lib/sizing/README.md). */
+export const rateBasisSchema = z.enum(["ride-frequency", "sag-window"]);
+export type RateBasis = z.infer<typeof rateBasisSchema>;
+export const RATE_BASES = rateBasisSchema.options;

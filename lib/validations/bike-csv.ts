@@ -18,7 +18,8 @@ export const CATALOG_CSV_COLUMNS = [
   "spec.fork.stockPreloadMm", "spec.fork.stockRateNmm", "spec.fork.displacementDiameterMm",
   "spec.fork.freeAreaMm2", "spec.fork.capVolumeMm3", "spec.fork.oilLevelMinMm", "spec.fork.oilLevelMaxMm",
   "spec.fork.stockOilLevelMm", "spec.fork.air.pistonAreaMm2", "spec.fork.air.chamberVolumeMm3",
-  "spec.fork.air.stockPressureKpaGauge",
+  "spec.fork.air.stockPressureKpaGauge", "spec.fork.air.negativeChamberVolumeMm3", "spec.fork.air.equalizeAtMm",
+  "spec.fork.stockSpring.wireDiameterMm", "spec.fork.stockSpring.meanCoilDiameterMm", "spec.fork.stockSpring.totalCoils",
   ...["forkCompression", "forkRebound", "shockLowSpeedCompression", "shockHighSpeedCompression", "shockRebound"].flatMap(
     (c) => ["min", "max", "stock"].map((k) => `spec.clickers.${c}.${k}`),
   ),

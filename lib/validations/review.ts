@@ -31,4 +31,6 @@ export const assignSchema = z.object({
 export const approveSchema = z.object({
   /** Optional: approve only if this is still the current draft (a stale screen answers 409). */
   version: z.number().int().min(1).optional(),
+  /** Codes of the sanity warnings the tuner has checked; every one on the version must be here. */
+  acknowledgedWarnings: z.array(z.string().max(80, "Not a warning code")).max(50, "At most 50 warnings").optional(),
 });

@@ -87,8 +87,9 @@ test.describe("admin catalog", () => {
     await invite.getByRole("button", { name: "Send invitation" }).click();
     await expect(page.getByRole("status").first()).toContainText(`Invitation sent to ${email}`);
 
-    const messages = await mailbox.for(email);
-    expect(messages).toHaveLength(1);
+    // The outbox worker sends it just after the answer: wait for it to arrive.
+    let messages: Awaited<ReturnType<typeof mailbox.for>> = [];
+    await expect.poll(async () => (messages = await mailbox.for(email)).length).toBe(1);
     const link = /href="([^"]*\/invite\/[^"]+)"/.exec(messages[0]?.html ?? "")?.[1];
     expect(link, "the e-mail carries the invitation link").toBeTruthy();
 

@@ -51,7 +51,7 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
 
   await page.getByRole("button", { name: /Save and approve/ }).click();
   await expect(page.getByRole("status").filter({ hasText: "approved" }).first()).toContainText(
-    "Version 1 approved. The rider was e-mailed the sheet link.",
+    "Version 1 approved. The rider is being e-mailed the sheet link (see E-mails below).",
     { timeout: 20_000 },
   );
   await expect(page.locator("header").getByText("Approved", { exact: true })).toHaveCount(1);

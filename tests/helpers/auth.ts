@@ -3,6 +3,7 @@ import { http, HttpResponse } from "msw";
 import type { SetupServer } from "msw/node";
 import { POST as authPost, GET as authGet } from "@/app/api/auth/[...all]/route";
 import { appBaseUrl, mailBaseUrl } from "@/lib/env";
+import { drainOutbox } from "@/lib/mail";
 import { fromClient } from "./client";
 
 export const ORIGIN = () => appBaseUrl();
@@ -48,6 +49,8 @@ export async function signInWithEmailLink(email: string, sent: ReturnType<typeof
     }),
   );
   if (asked.status !== 200) throw new Error(`magic link request answered ${asked.status}`);
+  // The link is queued in the outbox: send it before reading the captured mail.
+  await drainOutbox();
   const message = sent.findLast((m) => m.to.includes(email));
   const link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(message?.html ?? "")?.[1]?.replaceAll("&amp;", "&");
   if (!link) throw new Error("no sign-in link in the captured e-mail");

@@ -105,21 +105,26 @@ describe("setup targets", () => {
     expect(await getSetupTarget("enduro", "pro")).toEqual(before);
   });
 
-  it("preview: less rear race sag asks for a stiffer rear spring for the same rider", async () => {
-    const response = await noCtx(preview)(
-      jsonRequest("/api/shop/targets/preview", "POST", owner, {
-        discipline: "motocross",
-        skill: "intermediate",
-        values: { ...defaultTargetValues("motocross", "intermediate"), sag: { ...defaultTargetValues("motocross", "intermediate").sag, rearRace: 0.3 } },
-        bikeModelId: stableUuid("bike:mx-450-4t"),
-        riderMassKg: 80,
-      }),
-    );
-    expect(response.status).toBe(200);
-    const { before, after } = (await response.json()) as { before: { rearRateNmm: number; rearRaceSagMm: number }; after: { rearRateNmm: number; rearRaceSagMm: number } };
+  it("preview: on the sag-window basis, less rear race sag asks for a stiffer rear spring for the same rider", async () => {
+    const row = { ...defaultTargetValues("motocross", "intermediate"), rateBasis: "sag-window" as const };
+    const previewWith = async (rearRace: number) => {
+      const response = await noCtx(preview)(
+        jsonRequest("/api/shop/targets/preview", "POST", owner, {
+          discipline: "motocross",
+          skill: "intermediate",
+          values: { ...row, sag: { ...row.sag, rearRace } },
+          bikeModelId: stableUuid("bike:mx-450-4t"),
+          riderMassKg: 80,
+        }),
+      );
+      expect(response.status).toBe(200);
+      return ((await response.json()) as { after: { rearRateNmm: number; rearRaceSagMm: number } }).after;
+    };
+    const deeper = await previewWith(row.sag.rearRace);
+    const shallower = await previewWith(0.3);
     // Hooke's law (F = k·x): the same load over less sag needs a higher rate (common practice).
-    expect(after.rearRateNmm).toBeGreaterThan(before.rearRateNmm);
-    expect(after.rearRaceSagMm).toBeLessThan(before.rearRaceSagMm);
+    expect(shallower.rearRateNmm).toBeGreaterThan(deeper.rearRateNmm);
+    expect(shallower.rearRaceSagMm).toBeLessThan(deeper.rearRaceSagMm);
   });
 });
 

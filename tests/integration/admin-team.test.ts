@@ -6,14 +6,13 @@ import { GET as listTeam, POST as invite } from "@/app/api/shop/team/route";
 import { PATCH as patchMember } from "@/app/api/shop/team/[id]/route";
 import { POST as accept } from "@/app/api/invite/accept/route";
 import { GET as listCatalog } from "@/app/api/shop/catalog/route";
-import { insertInvite } from "@/db/queries/invites";
-import { acceptInviteWithAccount, findUserByEmail, listStaff } from "@/db/queries/team";
-import { eq } from "drizzle-orm";
+import { findUserByEmail, listStaff } from "@/db/queries/team";
 import { getDb } from "@/db/client";
 import { auditEvents, staffInvites } from "@/db/schema";
 import { seedDemo } from "@/db/seed-demo";
 import { hashInviteToken } from "@/lib/auth/staff";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
+import { drainOutbox } from "@/lib/mail";
 import { captureMail, cookieFrom } from "../helpers/auth";
 import { idContext, jsonRequest, staffCookie, noCtx } from "./admin-helpers";
 
@@ -37,7 +36,8 @@ afterAll(async () => {
 
 const catalogAs = (cookie: string) => noCtx(listCatalog)(jsonRequest("/api/shop/catalog", "GET", cookie));
 const memberId = async (email: string) => (await findUserByEmail(email))!.id;
-const inviteLink = (email: string) => {
+const inviteLink = async (email: string) => {
+  await drainOutbox();
   const html = sent.findLast((m) => m.to.includes(email))?.html ?? "";
   return /href="([^"]*\/invite\/[^"]+)"/.exec(html)?.[1];
 };
@@ -69,7 +69,7 @@ describe("invitations", () => {
     const email = "new.tuner@example.test";
     const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }));
     expect(response.status).toBe(201);
-    const link = inviteLink(email);
+    const link = await inviteLink(email);
     expect(link).toBeDefined();
     const token = decodeURIComponent(new URL(link!).pathname.split("/").pop()!);
     const db = await getDb();
@@ -99,23 +99,35 @@ describe("invitations", () => {
     expect(again.status).toBe(409);
   });
 
-  // Atomicity of a transaction (PostgreSQL documentation, "Transactions": all steps take effect or
-  // none): the invitation is marked used only together with the account it creates.
-  it("an account that cannot be created leaves the invitation open (same transaction)", async () => {
-    const inviteId = "0b6f3c1e-2d4a-4e8b-9c7d-5a1f2e3d4c5b";
-    await insertInvite({
-      id: inviteId,
-      email: "tuner@sagwise.test", // already has an account: creating another one violates the unique e-mail
-      role: "tuner",
-      tokenHash: hashInviteToken("atomic-accept-token"),
-      invitedById: await memberId("owner@sagwise.test"),
-      expiresAt: new Date(Date.now() + 3600_000),
-    });
-    const account = { email: "tuner@sagwise.test", name: "Twice", role: "tuner", passwordHash: "not-used" } as const;
-    await expect(acceptInviteWithAccount(inviteId, account)).rejects.toThrow();
+  it("two people racing on one invitation link: one account, one 201, the other 409", async () => {
+    const email = "racing.tuner@example.test";
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(201);
+    const token = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
+    const body = (name: string) => ({ token, name, password: "a-long-password-1" });
+    const answers = await Promise.all([
+      noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, body("First Racer"))),
+      noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, body("Second Racer"))),
+    ]);
+    expect(answers.map((r) => r.status).sort()).toEqual([201, 409]);
     const db = await getDb();
-    const [row] = await db.select().from(staffInvites).where(eq(staffInvites.id, inviteId));
-    expect(row!.acceptedAt).toBeNull();
+    const invites = (await db.select().from(staffInvites)).filter((r) => r.email === email);
+    expect(invites).toHaveLength(1);
+    expect(invites[0]!.acceptedAt).toBeInstanceOf(Date);
+    expect((await listStaff()).filter((m) => m.email === email)).toHaveLength(1);
+  });
+
+  it("an invitation that cannot be accepted stays open: nothing is marked used without an account", async () => {
+    const email = "taken.meanwhile@example.test";
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(201);
+    const token = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
+    // Someone made a staff account with this address after the invitation went out.
+    const { ensureStaffUser } = await import("@/lib/auth/staff");
+    await ensureStaffUser({ email, name: "Made Elsewhere", role: "tuner", password: "another-long-password" });
+    const refused = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "Late Joiner", password: "a-long-password-1" }));
+    expect(refused.status).toBe(409);
+    const db = await getDb();
+    const row = (await db.select().from(staffInvites)).find((r) => r.email === email)!;
+    expect(row.acceptedAt).toBeNull();
   });
 
   it("an unknown token is a 404", async () => {

@@ -1,11 +1,14 @@
-// Rider e-mails: each carries a working private link, is recorded, and is audited; a failed send is
-// recorded as failed without throwing.
+// Rider e-mails: each is queued in the caller's transaction, carries a working private link, is
+// recorded and audited once sent; a failed send is recorded as failed without throwing.
 import { http, HttpResponse } from "msw";
 import { describe, expect, it } from "vitest";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { findRequestIdByStatusToken } from "@/db/queries/status-links";
 import { stableUuid } from "@/db/seed-demo";
+import { getDb } from "@/db/client";
+import { findOutboundEmail } from "@/db/queries/outbound-emails";
 import { mailBaseUrl } from "@/lib/env";
+import { configureOutbox, drainOutbox, resetOutboxPolicy } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { setupTestApp } from "../helpers/app";
 
@@ -17,8 +20,10 @@ const tokenIn = (text: string) => /\/status\/([A-Za-z0-9_-]{40,})/.exec(text)?.[
 
 describe("notifyRider", () => {
   it("sends the confirmation with a status link that opens this request", async () => {
-    const result = await notifyRider(requestId, { kind: "request-received" });
-    expect(result.status).toBe("sent");
+    const result = await notifyRider(await getDb(), requestId, { kind: "request-received" });
+    expect(result.status).toBe("queued");
+    await drainOutbox();
+    expect((await findOutboundEmail(result.outboundEmailId))?.status).toBe("sent");
     const mail = app.sent.at(-1)!;
     expect(mail.to).toEqual(["dario.lindqvist@example.test"]);
     expect(mail.subject).toContain("received your setup request");
@@ -29,7 +34,8 @@ describe("notifyRider", () => {
   });
 
   it("links the approved sheet by version with the rider's token", async () => {
-    await notifyRider(requestId, { kind: "sheet-ready", version: 2, tunerName: "Teo", revised: true });
+    await notifyRider(await getDb(), requestId, { kind: "sheet-ready", version: 2, tunerName: "Teo", revised: true });
+    await drainOutbox();
     const mail = app.sent.at(-1)!;
     expect(mail.subject).toBe("Revised setup sheet (version 2) for request 9");
     const sheet = new RegExp(`/api/requests/${requestId}/sheet\\?version=2&token=([A-Za-z0-9_-]+)`).exec(mail.text);
@@ -39,16 +45,15 @@ describe("notifyRider", () => {
 
   it("records a failed send as failed in the audit trail, without throwing", async () => {
     app.server.use(http.post(`${mailBaseUrl()}/emails`, () => HttpResponse.json({ statusCode: 500, name: "internal_server_error", message: "down" }, { status: 500 })));
-    const result = await notifyRider(
-      requestId,
-      { kind: "request-declined", reason: "Test" },
-      { actor: { userId: null, label: "Test tuner" }, mail: { maxAttempts: 2, baseDelayMs: 0 } },
-    );
-    expect(result).toMatchObject({ status: "failed", attempts: 2 });
+    configureOutbox({ maxAttempts: 2 });
+    const result = await notifyRider(await getDb(), requestId, { kind: "request-declined", reason: "Test" }, { actor: { userId: null, label: "Test tuner" } });
+    await drainOutbox({ settle: true });
+    resetOutboxPolicy();
+    expect(await findOutboundEmail(result.outboundEmailId)).toMatchObject({ status: "failed", attempts: 2 });
     const audit = await listAuditForRequest(requestId);
     const last = audit.at(-1)!;
     expect(last.action).toBe("email.failed");
     expect(last.actorLabel).toBe("Test tuner");
-    expect(last.detail).toMatchObject({ template: "request-declined", outboundEmailId: result.outboundEmailId });
+    expect(last.detail).toMatchObject({ template: "request-declined", outboundEmailId: result.outboundEmailId, attempts: 2 });
   });
 });

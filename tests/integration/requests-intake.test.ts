@@ -4,12 +4,16 @@
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { count, eq } from "drizzle-orm";
+import { http, HttpResponse } from "msw";
 import { describe, expect, it } from "vitest";
 import { GET as listBikes } from "@/app/api/bikes/route";
 import { POST as submit } from "@/app/api/requests/route";
 import { getDb } from "@/db/client";
 import { bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { findRequestIdByStatusToken } from "@/db/queries/status-links";
+import { listOutboundEmailsForRequest } from "@/db/queries/outbound-emails";
+import { mailBaseUrl } from "@/lib/env";
+import { drainOutbox, startOutboxWorker, stopOutboxWorker } from "@/lib/mail";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { stableUuid } from "@/db/seed-demo";
 import { recommendationSchema } from "@/lib/sizing";
@@ -84,11 +88,44 @@ describe("POST /api/requests, valid", () => {
     expect(output.rear.chosenRate.nMm).toBeGreaterThan(0);
     expect(versions[0]!.engineVersion).toBe(output.engineVersion);
 
+    // The confirmation was queued with the request; once the worker has sent it, it is audited.
+    expect((await listAuditForRequest(body.id)).map((a) => a.action)).toEqual(["request.submitted"]);
+    await drainOutbox();
     const audit = await listAuditForRequest(body.id);
     expect(audit.map((a) => a.action)).toEqual(["request.submitted", "email.sent"]);
     const mail = app.sent.at(-1)!;
     expect(mail.to).toEqual(["test.rider@example.test"]);
     expect(mail.text).toContain(body.statusUrl);
+  });
+
+  it("answers 201 while the e-mail API hangs: the submit never waits for the confirmation", async () => {
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    let calls = 0;
+    app.server.use(
+      http.post(`${mailBaseUrl()}/emails`, async () => {
+        calls += 1;
+        await held;
+        return HttpResponse.json({ id: "sent-after-the-answer" });
+      }),
+    );
+    startOutboxWorker();
+    try {
+      const response = await postJson(answers({ rider: { ...answers().rider, email: "patient.rider@example.test" } }));
+      expect(response.status).toBe(201);
+      const { id } = (await response.json()) as { id: string };
+      const [row] = await listOutboundEmailsForRequest(id);
+      // Queued with the request in its transaction; the worker was kicked and is now waiting on the API.
+      expect(row).toMatchObject({ template: "request-received", toAddress: "patient.rider@example.test" });
+      await expect.poll(() => calls, { timeout: 10_000 }).toBe(1);
+      expect((await listOutboundEmailsForRequest(id))[0]?.status).toBe("queued");
+      release();
+      await stopOutboxWorker();
+      expect((await listOutboundEmailsForRequest(id))[0]?.status).toBe("sent");
+    } finally {
+      release();
+      await stopOutboxWorker();
+    }
   });
 
   it("keeps photos by their content with a SHA-256, the name only as text", async () => {

@@ -15,6 +15,7 @@ import { listVersions } from "@/db/queries/versions";
 import { seedDemo, stableUuid } from "@/db/seed-demo";
 import type { Recommendation, SizingInput } from "@/lib/sizing";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
+import { drainOutbox } from "@/lib/mail";
 import { ORIGIN, captureMail, cookieFrom, signInStaff, signInWithEmailLink } from "../helpers/auth";
 
 const server = setupServer();
@@ -138,7 +139,10 @@ describe("override → recompute → save → approve → revise", () => {
     const before = sent.length;
     const approved = await call(approve, id, "POST", { version: 1 });
     expect(approved.status).toBe(200);
-    expect(approved.body).toMatchObject({ version: 1, revised: false, email: "sent" });
+    // The e-mail is queued with the approval; the answer does not wait for it.
+    expect(approved.body).toMatchObject({ version: 1, revised: false, email: "queued" });
+    expect(sent.length).toBe(before);
+    await drainOutbox();
     const [v] = await listVersions(id);
     expect(v).toMatchObject({ state: "approved", approvedByName: "Teo Brambleton" });
     expect(v!.approvedAt).toBeInstanceOf(Date);
@@ -172,6 +176,7 @@ describe("override → recompute → save → approve → revise", () => {
     expect(versions.map((v) => [v.version, v.state])).toEqual([[1, "superseded"], [2, "approved"]]);
     // Earlier versions stay readable as they were approved.
     expect((versions[0]!.output as Recommendation).rear.chosenRate.kgfMm).toBeCloseTo(5.2, 9);
+    await drainOutbox();
     expect(sent.at(-1)!.subject).toMatch(/^Revised setup sheet \(version 2\) for request \d+$/);
   });
 });
@@ -182,6 +187,7 @@ describe("ask, decline, assign", () => {
     const res = await call(ask, id, "POST", { question: "Which shock linkage is fitted?" });
     expect(res.status).toBe(200);
     expect((await getRequestRow(id))!.request.status).toBe("waiting_for_rider");
+    await drainOutbox();
     expect(sent.at(-1)!.subject).toMatch(/A question about your setup request/);
     expect(sent.at(-1)!.text).toContain("Which shock linkage is fitted?");
     const detail = await call(getDetail, id, "GET");
@@ -199,6 +205,7 @@ describe("ask, decline, assign", () => {
     expect(res.status).toBe(200);
     const row = (await getRequestRow(id))!.request;
     expect(row).toMatchObject({ status: "declined", declineReason: "We do not work on youth 85 cc forks." });
+    await drainOutbox();
     expect(sent.at(-1)!.text).toContain("We do not work on youth 85 cc forks.");
     for (const [handler, method, body] of [
       [decline, "POST", { reason: "Declining once more." }],
@@ -232,10 +239,31 @@ describe("ask, decline, assign", () => {
     const before = sent.length;
     const results = await Promise.all([call(approve, id, "POST", {}), call(approve, id, "POST", {})]);
     expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
+    await drainOutbox();
     expect(sent.slice(before).filter((m) => m.to.includes("lotte.brightwater@example.test"))).toHaveLength(1);
     const approvals = (await listAuditForRequest(id)).filter((e) => e.action === "recommendation.approved");
     expect(approvals).toHaveLength(1);
     expect(approvals[0]!.detail).toMatchObject({ version: 1, superseded: [], criticalWarnings: [] });
+  });
+
+  it("a sanity warning holds approval until the tuner acknowledges it (lib/sizing/README.md, sanity limits)", async () => {
+    const id = stableUuid("request:r04"); // 450 class, in review
+    // k·p/LR(0) = 60·25/3.05 ≈ 492 N holds the ≈ 408 N static rear load: static sag 0 on a coil end.
+    const saved = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { rateNmm: 60, preloadMm: 25 } } });
+    expect(saved.status).toBe(200);
+    const out = saved.body.output as Recommendation;
+    const codes = out.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code);
+    expect(codes).toContain("REAR_STATIC_SAG_ZERO");
+    const refused = await call(approve, id, "POST", {});
+    expect(refused.status).toBe(409);
+    expect(refused.body.fields?.acknowledgedWarnings).toContain("REAR_STATIC_SAG_ZERO");
+    expect((await listVersions(id))[0]).toMatchObject({ state: "draft" });
+    const partial = await call(approve, id, "POST", { acknowledgedWarnings: codes.slice(1) });
+    expect(partial.status).toBe(409); // the first code is missing
+    const ok = await call(approve, id, "POST", { acknowledgedWarnings: codes });
+    expect(ok.status).toBe(200);
+    const approvals = (await listAuditForRequest(id)).filter((e) => e.action === "recommendation.approved");
+    expect(approvals.at(-1)!.detail).toMatchObject({ acknowledgedWarnings: codes });
   });
 
   it("answers 404 for an unknown or malformed id", async () => {

@@ -18,7 +18,7 @@ import { recommendationVersions } from "@/db/schema";
 import { seedDemo, stableUuid } from "@/db/seed-demo";
 import { emailTemplateNames } from "@/emails";
 import { appBaseUrl, mailBaseUrl } from "@/lib/env";
-import { sendTemplateEmail } from "@/lib/mail";
+import { configureOutbox, drainOutbox, queueTemplateEmail, resetOutboxPolicy } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { renderSetupSheet } from "@/lib/pdf";
 import { demoSheetData } from "@/lib/pdf/demo-data";
@@ -54,6 +54,13 @@ function listen() {
       return HttpResponse.json({ id: `msg_${posted.length}` });
     }),
   );
+}
+
+/** Queues the rider's e-mail as the workflow does and lets the outbox send it. */
+async function notify(...args: Parameters<typeof notifyRider> extends [unknown, ...infer Rest] ? Rest : never) {
+  const queued = await notifyRider(await getDb(), ...args);
+  await drainOutbox({ settle: true });
+  return queued;
 }
 
 /** Checks the parts every message must have and returns the one posted. */
@@ -112,7 +119,7 @@ afterAll(async () => {
 describe("rider e-mails through notifyRider", () => {
   it("request-received: confirmation with the private status link", async () => {
     listen();
-    await notifyRider(r09, { kind: "request-received" });
+    await notify(r09, { kind: "request-received" });
     const mail = lastPayload("request-received", RIDER);
     expect(mail.subject).toBe(`${SHOP} received your setup request 9`);
     await opensRequest(linkIn(mail, "/status/"));
@@ -121,7 +128,7 @@ describe("rider e-mails through notifyRider", () => {
   it("tuner-question: the question in both parts and the link to answer it", async () => {
     listen();
     const question = "Is the linkage original, or has a lowering link been fitted?";
-    await notifyRider(r09, { kind: "tuner-question", question, tunerName: "Teo Brambleton" });
+    await notify(r09, { kind: "tuner-question", question, tunerName: "Teo Brambleton" });
     const mail = lastPayload("tuner-question", RIDER);
     expect(mail.subject).toBe("A question about your setup request 9");
     expect(mail.text).toContain(question);
@@ -132,7 +139,7 @@ describe("rider e-mails through notifyRider", () => {
   it("request-declined: the reason in both parts", async () => {
     listen();
     const reason = "We do not service this cartridge & its springs.";
-    await notifyRider(r09, { kind: "request-declined", reason });
+    await notify(r09, { kind: "request-declined", reason });
     const mail = lastPayload("request-declined", RIDER);
     expect(mail.subject).toBe("About your setup request 9");
     expect(mail.text).toContain(reason);
@@ -142,7 +149,7 @@ describe("rider e-mails through notifyRider", () => {
 
   it("sheet-ready: the sheet link downloads the approved PDF with the e-mail's own token", async () => {
     listen();
-    await notifyRider(r09, { kind: "sheet-ready", version: 1, tunerName: "Teo Brambleton", revised: false });
+    await notify(r09, { kind: "sheet-ready", version: 1, tunerName: "Teo Brambleton", revised: false });
     const mail = lastPayload("sheet-ready", RIDER);
     expect(mail.subject).toBe("Your setup sheet for request 9 is ready");
     const sheet = linkIn(mail, `/api/requests/${r09}/sheet?version=1&token=`);
@@ -162,7 +169,7 @@ describe("rider e-mails through notifyRider", () => {
     await db.update(recommendationVersions).set({ state: "superseded" }).where(eq(recommendationVersions.id, v1[0]!.id));
 
     listen();
-    await notifyRider(r09, { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true });
+    await notify(r09, { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true });
     const mail = lastPayload("sheet-ready", RIDER);
     expect(mail.subject).toBe("Revised setup sheet (version 2) for request 9");
     const sheet = linkIn(mail, `/api/requests/${r09}/sheet?version=2&token=`);
@@ -185,6 +192,7 @@ describe("e-mails not tied to a request", () => {
       }),
     );
     expect(asked.status).toBe(200);
+    await drainOutbox();
     const mail = lastPayload("sign-in-link", RIDER);
     expect(mail.subject).toBe(`Your sign-in link for ${SHOP}`);
     const link = linkIn(mail, "/api/auth/magic-link/verify?token=");
@@ -199,7 +207,8 @@ describe("e-mails not tied to a request", () => {
   it("staff-invite: names the inviter, the role and carries the invitation link", async () => {
     listen();
     const url = `${appBaseUrl()}/invite/invented-invite-token`;
-    await sendTemplateEmail("staff-invite", { url, role: "tuner", inviterName: "Mara Quillfeather", shopName: SHOP }, { to: "new.tuner@sagwise.test" });
+    await queueTemplateEmail(await getDb(), "staff-invite", { url, role: "tuner", inviterName: "Mara Quillfeather", shopName: SHOP }, { to: "new.tuner@sagwise.test" });
+    await drainOutbox();
     const mail = lastPayload("staff-invite", "new.tuner@sagwise.test");
     expect(mail.subject).toBe(`Mara Quillfeather invited you to the ${SHOP} workspace`);
     expect(linkIn(mail, "/invite/")).toBe(url);
@@ -211,19 +220,21 @@ describe("a failed rider e-mail", () => {
   it("is retried with backoff, recorded as failed on the request, shown clearly, and the approval stays", async () => {
     listen();
     failNext = 99;
-    const waits: number[] = [];
-    const result = await notifyRider(
-      r09,
-      { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true },
-      { mail: { sleep: async (ms) => void waits.push(ms) } },
-    );
+    configureOutbox({ maxAttempts: 3 });
+    const queued = await notifyRider(await getDb(), r09, { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true });
+    // Until the worker has sent it, the request page shows it on its way.
+    const pending = renderToStaticMarkup(EmailStatusItems({ emails: await listOutboundEmailsForRequest(r09) })).split("<li").at(-1)!;
+    expect(pending).toContain(">Sending<");
+    expect(pending).not.toContain('role="alert"');
+    // Backoff waits are passed on a virtual clock (their lengths are checked in mail.test.ts).
+    expect(await drainOutbox({ settle: true })).toEqual({ sent: 0, retried: 2, failed: 1 });
+    resetOutboxPolicy();
     expect(posted).toHaveLength(3);
-    expect(waits).toEqual([1000, 2000]); // exponential: base, then doubled
-    expect(result).toMatchObject({ status: "failed", attempts: 3 });
     covered.add("sheet-ready");
 
     const emails = await listOutboundEmailsForRequest(r09);
     const failed = emails.at(-1)!;
+    expect(failed.id).toBe(queued.outboundEmailId);
     expect(failed).toMatchObject({ template: "sheet-ready", status: "failed", attempts: 3, toAddress: RIDER, sentAt: null });
     expect(failed.lastError).toBe("internal_server_error (503): Mail API unavailable");
     expect(emails.filter((e) => e.status === "sent").length).toBeGreaterThanOrEqual(5);

@@ -1,4 +1,4 @@
-// lib/mail against msw standing in for the resend e-mail API. The expected request is the API's
+// lib/mail's outbox against msw standing in for the resend e-mail API. The expected request is the API's
 // documented send call as the resend SDK 6.38.0 builds it (POST {base}/emails, Bearer key, JSON with
 // snake_case fields, Idempotency-Key header; see parseEmailToApiOptions and post() in
 // node_modules/resend/dist/index.mjs); error bodies use its ErrorResponse shape.
@@ -9,7 +9,7 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { outboundEmails, setupRequests } from "@/db/schema";
 import { resetEnvForTests } from "@/lib/env";
-import { MailInputError, sendMail, sendTemplateEmail } from "@/lib/mail";
+import { MailInputError, configureOutbox, drainOutbox, queueMail, queueTemplateEmail, resetOutboxPolicy, type SendMailInput } from "@/lib/mail";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 
 const API = "https://mail-api.sagwise.test";
@@ -44,6 +44,14 @@ const ok = (id: string) => () => HttpResponse.json({ id });
 const apiError = (statusCode: number, name: string, message: string) => () =>
   HttpResponse.json({ statusCode, name, message }, { status: statusCode });
 
+/** Queues one message in its own transaction, as a caller's change would. */
+async function queue(input: SendMailInput) {
+  const db = await getDb();
+  return db.transaction((tx) => queueMail(tx, input));
+}
+
+const simple = (to: string): SendMailInput => ({ template: "sign-in-link", to, subject: "Sign in", html: "<p>x</p>", text: "x" });
+
 async function rowOf(id: string) {
   const db = await getDb();
   const [row] = await db.select().from(outboundEmails).where(eq(outboundEmails.id, id));
@@ -57,9 +65,12 @@ beforeAll(async () => {
   resetEnvForTests();
   server.listen({ onUnhandledRequest: "error" });
 });
-afterEach(() => {
+afterEach(async () => {
+  // Nothing is left queued for the next test.
+  await drainOutbox({ settle: true });
   server.resetHandlers();
   captured = [];
+  resetOutboxPolicy();
 });
 afterAll(async () => {
   server.close();
@@ -71,15 +82,21 @@ afterAll(async () => {
   await closeTestDatabase();
 });
 
-describe("sendMail / sendTemplateEmail", () => {
-  it("posts the rendered template to the API and records the message as sent", async () => {
+describe("queueMail / queueTemplateEmail, then the outbox worker", () => {
+  it("queues the rendered template, sends nothing until drained, then posts it and records it sent", async () => {
     respondWith(ok("4ef1c2f0-0000-4000-8000-00000000a001"));
-    const result = await sendTemplateEmail(
+    const db = await getDb();
+    const queued = await queueTemplateEmail(
+      db,
       "sign-in-link",
       { url: LINK, expiresInMinutes: 15, shopName: "Sagwise Demo Suspension" },
       { to: "rider.one@riders.test" },
     );
+    expect(queued).toEqual({ status: "queued", outboundEmailId: expect.any(String) });
+    expect(captured).toHaveLength(0);
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "queued", attempts: 0, sentAt: null });
 
+    expect(await drainOutbox()).toEqual({ sent: 1, retried: 0, failed: 0 });
     expect(captured).toHaveLength(1);
     const call = captured[0]!;
     expect(call.authorization).toBe(`Bearer ${KEY}`);
@@ -92,13 +109,7 @@ describe("sendMail / sendTemplateEmail", () => {
     expect(call.body.text).toContain("15 minutes");
     expect(call.body.tags).toEqual([{ name: "template", value: "sign-in-link" }]);
 
-    expect(result).toEqual({
-      status: "sent",
-      outboundEmailId: expect.any(String),
-      providerMessageId: "4ef1c2f0-0000-4000-8000-00000000a001",
-      attempts: 1,
-    });
-    const row = await rowOf(result.outboundEmailId);
+    const row = await rowOf(queued.outboundEmailId);
     expect(row).toMatchObject({
       template: "sign-in-link",
       toAddress: "rider.one@riders.test",
@@ -108,9 +119,33 @@ describe("sendMail / sendTemplateEmail", () => {
       attempts: 1,
       lastError: null,
       requestId: null,
+      claimedUntil: null,
+      // The body carried a sign-in link: it is not kept once sent.
+      html: null,
+      textBody: null,
     });
     expect(row?.sentAt).toBeInstanceOf(Date);
-    expect(call.idempotencyKey).toBe(`sagwise-outbound-${result.outboundEmailId}`);
+    expect(call.idempotencyKey).toBe(`sagwise-outbound-${queued.outboundEmailId}`);
+    expect(call.idempotencyKey).toBe(row?.idempotencyKey);
+    // Drained again: nothing is sent twice.
+    expect(await drainOutbox()).toEqual({ sent: 0, retried: 0, failed: 0 });
+    expect(captured).toHaveLength(1);
+  });
+
+  it("a message queued in a transaction that rolls back never exists and is never sent", async () => {
+    respondWith(ok("never"));
+    const db = await getDb();
+    const before = (await db.select().from(outboundEmails)).length;
+    const failed = await db
+      .transaction(async (tx) => {
+        await queueMail(tx, simple("rolled.back@riders.test"));
+        throw new Error("the change it reports failed");
+      })
+      .catch((e: unknown) => e);
+    expect((failed as Error).message).toBe("the change it reports failed");
+    expect((await db.select().from(outboundEmails)).length).toBe(before);
+    await drainOutbox();
+    expect(captured).toHaveLength(0);
   });
 
   it("links the record to its setup request and sends attachments as base64", async () => {
@@ -129,7 +164,7 @@ describe("sendMail / sendTemplateEmail", () => {
       .returning({ id: setupRequests.id });
     respondWith(ok("msg-with-attachment"));
     const pdf = Buffer.from("%PDF-1.7 sheet");
-    const result = await sendMail({
+    const queued = await queue({
       template: "approved",
       to: "rider.two@riders.test",
       subject: "Your setup sheet",
@@ -138,66 +173,82 @@ describe("sendMail / sendTemplateEmail", () => {
       requestId: request!.id,
       attachments: [{ filename: "setup-sheet.pdf", content: pdf, contentType: "application/pdf" }],
     });
-    expect(result.status).toBe("sent");
+    await drainOutbox();
+    expect((await rowOf(queued.outboundEmailId))?.status).toBe("sent");
     expect(captured[0]!.body.attachments).toEqual([
       { filename: "setup-sheet.pdf", content: pdf.toString("base64"), content_type: "application/pdf" },
     ]);
-    expect((await rowOf(result.outboundEmailId))?.requestId).toBe(request!.id);
+    expect((await rowOf(queued.outboundEmailId))?.requestId).toBe(request!.id);
   });
 
-  it("retries a send that fails twice with exponential backoff and records it sent after 3 attempts", async () => {
+  it("retries a send that fails twice with exponential backoff (5 s, then 10 s) and records it sent after 3 attempts", async () => {
     respondWith(
       apiError(503, "internal_server_error", "Service unavailable"),
       apiError(429, "rate_limit_exceeded", "Too many requests"),
       ok("third-time-lucky"),
     );
-    const waits: number[] = [];
-    const result = await sendMail(
-      { template: "staff-invite", to: "new.tuner@sagwise.test", subject: "Join", html: "<p>x</p>", text: "x" },
-      { sleep: async (ms) => void waits.push(ms) },
-    );
+    const queued = await queue(simple("new.tuner@sagwise.test"));
+    // A virtual clock: each drain runs "at" t, nothing sleeps.
+    const t0 = new Date(Date.now() + 60_000);
+    const at = (ms: number) => new Date(t0.getTime() + ms);
+
+    expect(await drainOutbox({ now: t0 })).toEqual({ sent: 0, retried: 1, failed: 0 });
+    let row = await rowOf(queued.outboundEmailId);
+    expect(row).toMatchObject({ status: "queued", attempts: 1, lastError: "internal_server_error (503): Service unavailable" });
+    // Exponential backoff (common practice): the base wait, then doubled before each later try.
+    expect(row!.nextAttemptAt.getTime() - t0.getTime()).toBe(5_000);
+    expect(await drainOutbox({ now: at(4_999) })).toEqual({ sent: 0, retried: 0, failed: 0 });
+
+    expect(await drainOutbox({ now: at(5_000) })).toEqual({ sent: 0, retried: 1, failed: 0 });
+    row = await rowOf(queued.outboundEmailId);
+    expect(row).toMatchObject({ status: "queued", attempts: 2, lastError: "rate_limit_exceeded (429): Too many requests" });
+    expect(row!.nextAttemptAt.getTime() - at(5_000).getTime()).toBe(10_000);
+
+    expect(await drainOutbox({ now: at(15_000) })).toEqual({ sent: 1, retried: 0, failed: 0 });
     expect(captured).toHaveLength(3);
-    expect(waits).toEqual([1000, 2000]);
     // Every try carries the same key, so the provider never delivers twice.
     expect(new Set(captured.map((c) => c.idempotencyKey)).size).toBe(1);
-    expect(result).toMatchObject({ status: "sent", providerMessageId: "third-time-lucky", attempts: 3 });
-    expect(await rowOf(result.outboundEmailId)).toMatchObject({ status: "sent", attempts: 3, providerMessageId: "third-time-lucky", lastError: null });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "sent", attempts: 3, providerMessageId: "third-time-lucky", lastError: null });
   });
 
-  it("records a send that always fails as failed, with the error, and returns instead of throwing", async () => {
+  it("records a send that always fails as failed after the last attempt, with the error", async () => {
+    configureOutbox({ maxAttempts: 3 });
     respondWith(apiError(500, "internal_server_error", "Upstream exploded"));
-    const result = await sendMail(
-      { template: "sign-in-link", to: "rider.three@riders.test", subject: "Sign in", html: "<p>x</p>", text: "x" },
-      { baseDelayMs: 0 },
-    );
+    const queued = await queue(simple("rider.three@riders.test"));
+    expect(await drainOutbox({ settle: true })).toEqual({ sent: 0, retried: 2, failed: 1 });
     expect(captured).toHaveLength(3);
-    expect(result).toEqual({
+    const row = await rowOf(queued.outboundEmailId);
+    expect(row).toMatchObject({
       status: "failed",
-      outboundEmailId: expect.any(String),
       attempts: 3,
-      error: "internal_server_error (500): Upstream exploded",
+      lastError: "internal_server_error (500): Upstream exploded",
+      providerMessageId: null,
+      sentAt: null,
+      claimedUntil: null,
     });
-    const row = await rowOf(result.outboundEmailId);
-    expect(row).toMatchObject({ status: "failed", attempts: 3, lastError: "internal_server_error (500): Upstream exploded", providerMessageId: null, sentAt: null });
   });
 
   it("retries network failures too", async () => {
     respondWith(() => HttpResponse.error(), ok("after-network-blip"));
-    const result = await sendMail(
-      { template: "sign-in-link", to: "rider.four@riders.test", subject: "Sign in", html: "<p>x</p>", text: "x" },
-      { baseDelayMs: 0 },
-    );
-    expect(result).toMatchObject({ status: "sent", attempts: 2, providerMessageId: "after-network-blip" });
+    const queued = await queue(simple("rider.four@riders.test"));
+    await drainOutbox({ settle: true });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "sent", attempts: 2, providerMessageId: "after-network-blip" });
   });
 
   it("does not retry a request the API rejects (422)", async () => {
     respondWith(apiError(422, "validation_error", "Invalid `to` field."));
-    const result = await sendMail(
-      { template: "sign-in-link", to: "rider.five@riders.test", subject: "Sign in", html: "<p>x</p>", text: "x" },
-      { baseDelayMs: 0 },
-    );
+    const queued = await queue(simple("rider.five@riders.test"));
+    expect(await drainOutbox({ settle: true })).toEqual({ sent: 0, retried: 0, failed: 1 });
     expect(captured).toHaveLength(1);
-    expect(result).toMatchObject({ status: "failed", attempts: 1, error: "validation_error (422): Invalid `to` field." });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "failed", attempts: 1, lastError: "validation_error (422): Invalid `to` field." });
+  });
+
+  it("sends at most one batch per claim and keeps claiming until nothing is due", async () => {
+    configureOutbox({ batchSize: 2 });
+    respondWith(ok("batch"));
+    for (let i = 0; i < 5; i++) await queue(simple(`batch.${i}@riders.test`));
+    expect(await drainOutbox()).toEqual({ sent: 5, retried: 0, failed: 0 });
+    expect(captured.map((c) => c.body.to).sort()).toEqual([0, 1, 2, 3, 4].map((i) => `batch.${i}@riders.test`));
   });
 
   it.each([
@@ -208,12 +259,12 @@ describe("sendMail / sendTemplateEmail", () => {
   ])("refuses bad input naming the field (%s) before recording or sending", async (field, patch) => {
     const db = await getDb();
     const before = (await db.select().from(outboundEmails)).length;
-    const input = { template: "sign-in-link", to: "rider@riders.test", subject: "S", html: "<p>x</p>", text: "x", ...patch };
-    const error = await sendMail(input).catch((e: unknown) => e);
+    const error = await queue({ ...simple("rider@riders.test"), ...patch }).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(MailInputError);
     expect((error as MailInputError).field).toBe(field);
     expect((error as Error).message).toContain(field);
     expect((await db.select().from(outboundEmails)).length).toBe(before);
+    await drainOutbox();
     expect(captured).toHaveLength(0);
   });
 });

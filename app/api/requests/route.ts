@@ -9,7 +9,6 @@ import { createLimiter } from "@/lib/api/rate-limit";
 import { json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { TooLargeError, ValidationError } from "@/lib/errors";
-import { notifyRider } from "@/lib/notify";
 import { submitSetupRequest } from "@/lib/requests/intake";
 import { statusPath } from "@/lib/requests/token";
 import { MAX_PHOTO_BYTES, MAX_PHOTOS, PhotoError, displayName, type IncomingPhoto } from "@/lib/storage";
@@ -85,11 +84,6 @@ export const POST = route({ access: "public", limit: limitSubmissions }, async (
     if (error instanceof PhotoError) throw bad(error.field, error.message, error.status);
     throw error;
   }
-  // The request is committed: a failed e-mail is recorded and retried, never undoes it.
-  try {
-    await notifyRider(created.id, { kind: "request-received" }, { statusToken: created.statusToken });
-  } catch (error) {
-    console.error("[requests] confirmation e-mail could not be queued", created.id, error);
-  }
+  // Committed with its confirmation e-mail queued; the outbox worker sends it (no waiting here).
   return json({ id: created.id, statusUrl: statusPath(created.statusToken) }, 201);
 });

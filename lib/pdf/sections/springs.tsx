@@ -6,24 +6,38 @@ import { fixed, length, rateParts, turns } from "../format";
 import { s } from "../styles";
 import { KeyValue } from "./parts";
 
-function RateTable({ rateNmm, stockNmm, end }: { rateNmm: number; stockNmm: number | null; end: "fork" | "shock" }) {
+function RateTable({ rateNmm, stockNmm, currentNmm, end }: { rateNmm: number; stockNmm: number | null; currentNmm?: number; end: "fork" | "shock" }) {
   const rec = rateParts(rateNmm, end);
   const stock = stockNmm === null ? null : rateParts(stockNmm, end);
+  const now = currentNmm === undefined ? null : rateParts(currentNmm, end);
   const rows: [keyof typeof rec, string][] = [["nMm", "N/mm"], ["kgfMm", "kgf/mm"], ["lbfIn", "lbf/in"]];
+  const w = now ? "33%" : "50%";
   return (
     <View style={{ marginBottom: 4 }}>
       <View style={s.tableHead}>
-        <Text style={{ width: "50%" }}>Recommended</Text>
-        <Text style={{ width: "50%" }}>Stock (for comparison)</Text>
+        <Text style={{ width: w }}>Recommended</Text>
+        <Text style={{ width: w }}>Stock (for comparison)</Text>
+        {now ? <Text style={{ width: w }}>Fitted now (as you told us)</Text> : null}
       </View>
       {rows.map(([key]) => (
         <View key={key} style={s.tableRow}>
-          <Text style={{ width: "50%", fontWeight: 700 }}>{rec[key]}</Text>
-          <Text style={{ width: "50%" }}>{stock ? stock[key] : "–"}</Text>
+          <Text style={{ width: w, fontWeight: 700 }}>{rec[key]}</Text>
+          <Text style={{ width: w }}>{stock ? stock[key] : "–"}</Text>
+          {now ? <Text style={{ width: w }}>{now[key]}</Text> : null}
         </View>
       ))}
     </View>
   );
+}
+
+const BASIS_WORDS = {
+  "ride-frequency": "Rate chosen to ride like the stock spring does for the rider it was made for, scaled to you",
+  "sag-window": "Rate chosen to meet both the race sag and the static sag targets",
+} as const;
+
+/** Which rate basis sized this end (lib/sizing/README.md, "Model 2"); sheets from engine 1.x have none. */
+function BasisLine({ basis }: { basis: RearResult["rateBasis"] | null | undefined }) {
+  return basis ? <Text style={s.small}>{BASIS_WORDS[basis.used]}.</Text> : null;
 }
 
 type SagState = RearResult["predicted"]["raceState"];
@@ -47,7 +61,7 @@ function SagLines({ result, imperial }: { result: FrontResult | RearResult; impe
   );
 }
 
-export function ForkCard({ front, imperial }: { front: FrontResult; imperial: boolean }) {
+export function ForkCard({ front, imperial, currentNmm }: { front: FrontResult; imperial: boolean; currentNmm?: number }) {
   const coil = front.kind !== "air" && front.chosenRate;
   return (
     <View style={[s.card, s.col]} wrap={false}>
@@ -57,7 +71,8 @@ export function ForkCard({ front, imperial }: { front: FrontResult; imperial: bo
           <Text style={s.muted}>
             Spring rate {front.sprungLegs === 1 ? "of the one spring" : "per leg, a spring in each leg"}
           </Text>
-          <RateTable rateNmm={front.chosenRate!.nMm} stockNmm={front.stockRate?.nMm ?? null} end="fork" />
+          <RateTable rateNmm={front.chosenRate!.nMm} stockNmm={front.stockRate?.nMm ?? null} currentNmm={currentNmm} end="fork" />
+          <BasisLine basis={front.rateBasis} />
           <KeyValue label="Preload">{length(front.preloadMm ?? 0, 1, imperial)}</KeyValue>
           <KeyValue label="Oil level">{`${length(front.oilLevelMm ?? front.stockOilLevelMm, 0, imperial)} (stock ${fixed(front.stockOilLevelMm, 0)} mm)`}</KeyValue>
           <Text style={s.small}>Oil level: measured down from the top of the outer tube, fork fully compressed, spring out.</Text>
@@ -81,12 +96,13 @@ export function ForkCard({ front, imperial }: { front: FrontResult; imperial: bo
   );
 }
 
-export function ShockCard({ rear, collarPitchMm, imperial }: { rear: RearResult; collarPitchMm: number; imperial: boolean }) {
+export function ShockCard({ rear, collarPitchMm, imperial, currentNmm }: { rear: RearResult; collarPitchMm: number; imperial: boolean; currentNmm?: number }) {
   return (
     <View style={[s.card, s.col]} wrap={false}>
       <Text style={s.h3}>Shock (rear)</Text>
       <Text style={s.muted}>Spring rate</Text>
-      <RateTable rateNmm={rear.chosenRate.nMm} stockNmm={rear.stockRate.nMm} end="shock" />
+      <RateTable rateNmm={rear.chosenRate.nMm} stockNmm={rear.stockRate.nMm} currentNmm={currentNmm} end="shock" />
+      <BasisLine basis={rear.rateBasis} />
       <KeyValue label="Preload">{length(rear.preloadMm, 1, imperial)}</KeyValue>
       <KeyValue label="Collar">{`${turns(rear.preloadCollarTurns)} from where the collar just touches the spring (${fixed(collarPitchMm, 1)} mm per turn)`}</KeyValue>
       <SagLines result={rear} imperial={imperial} />

@@ -84,7 +84,7 @@ describe("air-spring fork pressure", () => {
 
 describe("coil fork closed form without air", () => {
   // An enormous cap volume leaves the air force negligible: the fork must reduce to a linear spring
-  // (Hooke's law, F = n_s·k·(p + s)), and the ideal rate to k = ΔW/(n_s·Δs) (sizing-model.md, closed forms).
+  // (Hooke's law, F = n_s·k·(p + s)), and the ideal rate to k = ΔW/(n_s·Δs) (lib/sizing/README.md, closed forms).
   const fork = makeCoilFork(2, 300, { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 1e15, forkTravelMm: 300 });
   it("force is n_s·k·(p + s)", () => {
     for (const s of [0, 75, 150, 300]) expect(forkForce(fork, 4.5, 5, 110, s, 1.4)).toBeCloseTo(2 * 4.5 * (5 + s), 4);

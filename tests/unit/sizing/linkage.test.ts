@@ -73,7 +73,7 @@ describe("conservation of work", () => {
 describe("sag solver", () => {
   const curve = sizingDefaults.GENERIC_BIKE_CLASSES[0]!.spec.rear.leverageCurve;
   it("inverts the force law within 0.1 mm", () => {
-    // Source: definition of sag as the travel where wheel force equals the load (sizing-model.md).
+    // Source: definition of sag as the travel where wheel force equals the load (lib/sizing/README.md).
     for (const y of [5, 35, 104, 200, 300]) {
       const W = rearWheelForceN({ curve, rateNmm: 52, preloadMm: 10, wheelTravelMm: y });
       expect(Math.abs(solveRearSagMm({ curve, rateNmm: 52, preloadMm: 10, loadN: W }) - y)).toBeLessThan(0.1);

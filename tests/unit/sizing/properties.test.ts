@@ -20,7 +20,7 @@ import {
 } from "../../../lib/sizing";
 import { classInput } from "./fixtures";
 
-// Properties from the physics (sizing-model.md, "What the tests hold it to"); numRuns kept modest.
+// Properties from the physics (lib/sizing/README.md, "What the tests hold it to"); numRuns kept modest.
 const RUNS = { numRuns: 60 };
 
 /** Random progressive curve (ratio never rising with travel), as off-road linkages are (common practice). */
@@ -117,11 +117,13 @@ describe("properties of the ideal spring", () => {
     );
   });
 
-  it("more target sag in the shop's table never gives a stiffer recommendation", () => {
+  it("more target sag in the shop's table never gives a stiffer recommendation (sag-window basis)", () => {
+    // The sag-window basis sizes by the two sag targets, so deeper race sag must mean a softer spring.
     fc.assert(
       fc.property(validInput, fc.double({ min: 0.005, max: 0.04, noNaN: true }), (input, more) => {
         const d = input.riding.discipline;
         const t = sizingDefaults.SAG_TARGETS_BY_DISCIPLINE[d];
+        input.targets = { ...input.targets, rateBasis: "sag-window" };
         const deeper = structuredClone(input);
         deeper.targets = { ...deeper.targets, sagByDiscipline: { [d]: { ...t, rearRace: t.rearRace + more, forkRace: t.forkRace + more } } };
         const a = recommend(input);
@@ -213,7 +215,16 @@ describe("robustness", () => {
             rider: { massKg, gearIncluded: true, skill: "pro", style: "aggressive" },
             targets: { riderRearShare: share },
           });
-          const r = evaluateSetup(input, { rear, front });
+          // An oil level that leaves no air above the fitted spring is refused, naming the override.
+          let r;
+          try {
+            r = evaluateSetup(input, { rear, front });
+          } catch (e) {
+            expect(e).toBeInstanceOf(SizingInputError);
+            expect((e as SizingInputError).issues.map((i) => i.path)).toEqual(["overrides.front.oilLevelMm"]);
+            expect(front.oilLevelMm).toBeLessThan(40);
+            return;
+          }
           expect(allFinite({ ...r, input: null })).toBe(true);
         },
       ),

@@ -37,15 +37,18 @@ describe("end to end: every generic class × light, medium, heavy rider", () => 
         expect(r.rear.chosenRate.nMm).toBeLessThanOrEqual(range.shockRateNmm[1]);
         expect(r.front.chosenRate!.nMm).toBeGreaterThanOrEqual(range.forkRateNmm[0]);
         expect(r.front.chosenRate!.nMm).toBeLessThanOrEqual(range.forkRateNmm[1]);
-        // From the shop's shelf, within the collar's preload range, static sag in the window
-        // (sizing-model.md selection rule), race sag on target to 0.1 mm.
+        // From the shop's shelf, within the collar's preload range, race sag on target to 0.1 mm
+        // (selection rule, lib/sizing/README.md). Static sag is a check: outside the window there is
+        // a warning saying so, inside none (light riders often read more on chart springs: common practice).
         expect(r.rear.source).toBe("stock");
         expect(sizingDefaults.TYPICAL_SHOCK_RATES_NMM).toContain(r.rear.chosenRate.nMm);
         expect(r.rear.preloadMm).toBeGreaterThanOrEqual(c.spec.rear.preloadMinMm);
         expect(r.rear.preloadMm).toBeLessThanOrEqual(c.spec.rear.preloadMaxMm);
         expect(Math.abs(r.rear.predicted.raceSagMm - r.rear.sagTargets.raceSagMm)).toBeLessThan(0.1);
-        expect(r.rear.predicted.staticSagMm).toBeGreaterThanOrEqual(r.rear.sagTargets.staticSagMinMm);
-        expect(r.rear.predicted.staticSagMm).toBeLessThanOrEqual(r.rear.sagTargets.staticSagMaxMm);
+        const t = r.rear.sagTargets;
+        const outside = r.rear.predicted.staticSagMm < t.staticSagMinMm || r.rear.predicted.staticSagMm > t.staticSagMaxMm;
+        expect(r.warnings.some((w) => w.code === "REAR_STATIC_SAG_OUTSIDE_WINDOW")).toBe(outside);
+        expect(r.rear.rateBasis?.used).toBe("ride-frequency");
         // Rear race sag about a third of travel, static 10–13.5 %: common practice (defaults.ts).
         expect(r.rear.sagTargets.raceSagMm / c.spec.rear.wheelTravelMm).toBeGreaterThan(0.3);
         expect(r.rear.sagTargets.raceSagMm / c.spec.rear.wheelTravelMm).toBeLessThan(0.36);
@@ -66,38 +69,39 @@ describe("end to end: every generic class × light, medium, heavy rider", () => 
         // Natural frequencies f = √(k/m)/2π from the reported wheel rate and sprung mass (Rao, Mechanical Vibrations).
         expect(r.rear.naturalFrequencyHz).toBeCloseTo(Math.sqrt((r.rear.wheelRateAtSagNmm * 1000) / r.rear.sprungMassKg) / (2 * Math.PI), 9);
         expect(r.frequencyRatio).toBeCloseTo(r.front.naturalFrequencyHz / r.rear.naturalFrequencyHz, 12);
-        expect(r.warnings.filter((w) => w.severity === "critical")).toEqual([]);
+        expect(r.warnings.filter((w) => w.severity === "critical" || w.requiresAcknowledgement)).toEqual([]);
         expect(r.engineVersion).toBe(ENGINE_VERSION);
       });
 });
 
 describe("loads", () => {
   it("follow the axle-load formulas of the model", () => {
-    // Source: static equilibrium (sizing-model.md, Loads), hand arithmetic for the 450 class, 80 kg + 8 kg gear:
-    // W_rs = (111·0.52 − 15)·9.80665 = 42.72·9.80665 = 418.940 N; W_rr = W_rs + 88·0.65·9.80665 = 979.880 N;
-    // W_fs = (111·0.48 − 10)·9.80665·cos 27° = 43.28·9.80665·0.891007 = 378.172 N;
-    // W_fr = W_fs + 88·0.35·9.80665·0.891007 = 647.295 N.
+    // Source: static equilibrium (lib/sizing/README.md, loads), hand arithmetic for the 450 class, 80 kg + 8 kg gear:
+    // W_rs = (111·0.51 − 15)·9.80665 = 41.61·9.80665 = 408.055 N; W_rr = W_rs + 88·0.65·9.80665 = 968.995 N;
+    // W_fs = (111·0.49 − 10)·9.80665·cos 27° = 44.39·9.80665·0.891007 = 387.870 N;
+    // W_fr = W_fs + 88·0.35·9.80665·0.891007 = 656.994 N.
     const r = recommend(classInput("mx-450-4t", "medium"));
     expect(r.resolved.riderMassWithGearKg).toBe(88);
-    expect(r.resolved.loads.rearStaticN).toBeCloseTo(418.94, 2);
-    expect(r.resolved.loads.rearRaceN).toBeCloseTo(979.88, 2);
-    expect(r.resolved.loads.frontStaticN).toBeCloseTo(378.172, 2);
-    expect(r.resolved.loads.frontRaceN).toBeCloseTo(647.295, 2);
+    expect(r.resolved.loads.rearStaticN).toBeCloseTo(408.055, 2);
+    expect(r.resolved.loads.rearRaceN).toBeCloseTo(968.995, 2);
+    expect(r.resolved.loads.frontStaticN).toBeCloseTo(387.87, 2);
+    expect(r.resolved.loads.frontRaceN).toBeCloseTo(656.994, 2);
   });
 
-  it("a single-spring fork needs twice the per-leg rate of a two-spring fork", () => {
-    // Closed form (sizing-model.md): the coil force is n_s·k·(p + s) and the air is the same, so the
-    // ideal per-leg rate scales as 1/n_s.
-    const both = recommend(classInput("mx-450-4t", "medium"));
-    const single = classInput("mx-450-4t", "medium");
+  it("a single-spring fork carries the load on one spring: its per-leg rate is about twice", () => {
+    // The coil force is n_s·k·(p + s); the air differs only by one spring's steel (lib/sizing/README.md),
+    // so the single spring's rate sits between 1.9 and 2.1 times the per-leg rate of two springs.
+    const both = recommend(classInput("mx-450-4t", "medium", { targets: { rateBasis: "sag-window" } }));
+    const single = classInput("mx-450-4t", "medium", { targets: { rateBasis: "sag-window" } });
     single.bike.fork.kind = "coil-single";
     const r = recommend(single);
     expect(r.front.sprungLegs).toBe(1);
-    expect(r.front.idealRate!.nMm).toBeCloseTo(2 * both.front.idealRate!.nMm, 9);
+    expect(r.front.idealRate!.nMm / both.front.idealRate!.nMm).toBeGreaterThan(1.9);
+    expect(r.front.idealRate!.nMm / both.front.idealRate!.nMm).toBeLessThan(2.1);
   });
 
   it("when no spring can meet both sag targets it sizes on race sag and says so", () => {
-    const r = recommend(classInput("mx-450-4t", "light", { rider: { massKg: 20, gearIncluded: true, skill: "beginner", style: "smooth" }, targets: { riderRearShare: 0.95 } }));
+    const r = recommend(classInput("mx-450-4t", "light", { rider: { massKg: 20, gearIncluded: true, skill: "beginner", style: "smooth" }, targets: { riderRearShare: 0.95, rateBasis: "sag-window" } }));
     const w = r.warnings.find((x) => x.code === "FRONT_SAG_TARGETS_UNREACHABLE");
     expect(w?.field).toBe("front.sagTargets");
     expect(r.front.idealRate!.nMm).toBeGreaterThan(0);
@@ -112,8 +116,8 @@ describe("loads", () => {
 });
 
 describe("stock selection and ordering", () => {
-  it("with nothing on the shelf the ideal rate is to order", () => {
-    const r = recommend(classInput("mx-450-4t", "medium", { stock: { forkRatesNmm: [], shockRatesNmm: [] } }));
+  it("with nothing on the shelf the ideal rate is to order (sag-window basis: both targets met)", () => {
+    const r = recommend(classInput("mx-450-4t", "medium", { stock: { forkRatesNmm: [], shockRatesNmm: [] }, targets: { rateBasis: "sag-window" } }));
     expect(r.rear.source).toBe("order");
     expect(r.rear.chosenRate.nMm).toBeCloseTo(r.rear.idealRate.nMm, 9);
     expect(r.warnings.map((w) => w.code)).toContain("REAR_TO_ORDER");
@@ -131,7 +135,7 @@ describe("stock selection and ordering", () => {
   });
 
   it("the bike's reference rider on the stock spring keeps the stock oil level", () => {
-    // The oil level rule (sizing-model.md) holds bottoming resistance at the stock bike's value for
+    // The oil level rule (lib/sizing/README.md) holds bottoming resistance at the stock bike's value for
     // its reference rider: that rider, on the stock spring, must land on the stock level.
     const c = sizingDefaults.GENERIC_BIKE_CLASSES[0]!;
     const input = classInput(c.id, "medium", { rider: { massKg: c.spec.referenceRiderMassKg, gearIncluded: true, skill: "intermediate", style: "moderate" } });
@@ -157,19 +161,35 @@ describe("air fork", () => {
     expect(r.front.chosenRate).toBeNull();
     expect(r.front.oilLevelMm).toBeNull();
     const p = r.front.airPressure!;
-    // Boyle's law check at race sag: (P₀ + P_atm)·V₀ = (W/A + P_atm)·(V₀ − A·s), in MPa and mm³.
+    // Boyle's law, two chambers (lib/sizing/README.md): charge p₀ at top-out, equalised at s_eq, so at
+    // race sag s: F = p₀·V_p·A·(1/(V_p − A·s) − (V_n + A·s_eq)/((V_p − A·s_eq)(V_n + A·s))) = W_fr.
     const s = r.front.sagTargets.raceSagMm;
-    expect((p.kpaGauge / 1000 + 0.101325) * 400_000).toBeCloseTo((r.resolved.loads.frontRaceN / 900 + 0.101325) * (400_000 - 900 * s), 6);
+    const { volumeMm3: Vn, equalizeAtMm: se, typical } = r.front.negativeChamber!;
+    expect(typical).toBe(true);
+    const p0 = p.kpaGauge / 1000 + 0.101325;
+    const F = p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
+    expect(F).toBeCloseTo(r.resolved.loads.frontRaceN, 6);
     expect(r.front.predicted.raceSagMm).toBeCloseTo(s, 3);
     expect(p.barGauge).toBeCloseTo(p.kpaGauge / 100, 12); // 1 bar = 100 kPa (definition)
+  });
+  it("a typical air fork's static sag comes out of the same force law, inside its window", () => {
+    // Negative chamber volume and port position typical (defaults, from memory); window: defaults.
+    const r = recommend(air());
+    expect(r.front.predicted.staticState).toBe("ok");
+    expect(r.front.predicted.staticSagMm).toBeGreaterThanOrEqual(r.front.sagTargets.staticSagMinMm);
+    expect(r.front.predicted.staticSagMm).toBeLessThanOrEqual(r.front.sagTargets.staticSagMaxMm);
+    expect(r.warnings.map((w) => w.code)).not.toContain("FRONT_STATIC_SAG_OUTSIDE_WINDOW");
   });
   it("an overridden pressure moves race sag the way Boyle's law says, and coil-only overrides are flagged", () => {
     const r = evaluateSetup(air(), { front: { airPressureKpaGauge: 400, rateNmm: 4.5 } });
     expect(r.front.airPressure!.kpaGauge).toBe(400);
-    // At the predicted sag s: (P₀ + P_atm)·V₀ = (W/A + P_atm)·(V₀ − A·s), solved for s.
+    // At the predicted sag the two-chamber force above equals the load.
+    const s = r.front.predicted.raceSagMm;
+    const { volumeMm3: Vn, equalizeAtMm: se } = r.front.negativeChamber!;
     const p0 = 0.4 + 0.101325;
-    const s = (400_000 - (p0 * 400_000) / (r.resolved.loads.frontRaceN / 900 + 0.101325)) / 900;
-    expect(r.front.predicted.raceSagMm).toBeCloseTo(s, 4);
+    const F = p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
+    expect(F).toBeCloseTo(r.resolved.loads.frontRaceN, 4);
+    expect(s).toBeGreaterThan(r.front.sagTargets.raceSagMm); // less pressure than needed: deeper sag
     expect(r.warnings.find((w) => w.code === "OVERRIDE_NOT_APPLICABLE")?.field).toBe("overrides.front.rateNmm");
   });
   it("refuses an air fork without chamber data, naming the field", () => {

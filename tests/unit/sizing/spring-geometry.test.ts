@@ -44,7 +44,7 @@ describe("helical spring rate from geometry", () => {
 
 describe("Wahl factor", () => {
   it("equals Shigley's expression at hand-computed points", () => {
-    // Source: Shigley 10th ed., Wahl factor K_W = (4C − 1)/(4C − 4) + 0.615/C (eq. 10-4 per issue 3).
+    // Source: Shigley 10th ed., Wahl factor K_W = (4C − 1)/(4C − 4) + 0.615/C (eq. 10-4).
     // Hand arithmetic: C = 8 → 31/28 + 0.615/8 = 1.107143 + 0.076875 = 1.184018.
     expect(wahlFactor(8)).toBeCloseTo(1.184018, 6);
     // C = 5 → 19/16 + 0.123 = 1.3105; tabulated Wahl factor for C = 5 is 1.31 (from memory).

@@ -11,7 +11,7 @@ import { coilForkOf } from "../../../lib/sizing/front";
 import { firstCrossing } from "../../../lib/sizing/solve";
 import { classInput } from "./fixtures";
 
-// The follow-up rule (sizing-model.md, common practice, no published source): with race sag reset
+// The follow-up rule (lib/sizing/README.md, common practice, no published source): with race sag reset
 // to target by preload, static sag below the window means the spring is too soft, above it too stiff.
 // Each test "measures" sag on a rider whose real mass differs from what was entered, using the force
 // law, and checks the verdict's direction and its arithmetic.
