@@ -6,7 +6,7 @@ import path from "node:path";
 import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
 import { getEnv } from "@/lib/env";
 import * as schema from "./schema";
-import { acquireDataDirLock } from "./lock";
+import { acquireDataDirLock, type LockOptions } from "./lock";
 import { applyMigrations } from "./migrate";
 
 export type AppDb = PgDatabase<PgQueryResultHKT, typeof schema>;
@@ -19,32 +19,35 @@ export type Executor = AppDb | Tx;
 export interface DatabaseHandle {
   db: AppDb;
   kind: DatabaseKind;
+  /** The PGlite instance (embedded database only): backups dump its data folder. */
+  client?: import("@electric-sql/pglite").PGlite;
   close(): Promise<void>;
 }
 
 const holder = globalThis as unknown as { __sagwiseDb?: Promise<DatabaseHandle> };
 
-export async function openPglite(dataDir: string): Promise<DatabaseHandle> {
+export async function openPglite(dataDir: string, lockOptions?: LockOptions): Promise<DatabaseHandle> {
   const { createPglite } = await import("./pglite");
   const { drizzle } = await import("drizzle-orm/pglite");
   const absolute = path.resolve(dataDir);
   // PGlite creates only the last folder of its path.
   mkdirSync(path.dirname(absolute), { recursive: true });
   // PGlite has no lock of its own: a second process on the same folder would silently lose writes.
-  const release = acquireDataDirLock(absolute);
+  const release = await acquireDataDirLock(absolute, lockOptions);
   try {
     const client = await createPglite({ dataDir: absolute });
     const db = drizzle({ client, schema }) as unknown as AppDb;
     return {
       db,
       kind: "pglite",
+      client,
       async close() {
         await client.close();
-        release();
+        await release();
       },
     };
   } catch (error) {
-    release();
+    await release();
     throw error;
   }
 }

@@ -1,11 +1,9 @@
-import { spawnSync } from "node:child_process";
-import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
+import { mkdtempSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { openPglite, type DatabaseHandle } from "@/db/client";
-import { DataDirLockedError } from "@/db/lock";
 import { applyMigrations, latestAppliedMigration, readJournal } from "@/db/migrate";
 import { shopSettings } from "@/db/schema";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
@@ -56,41 +54,4 @@ describe("PGlite on disk", () => {
     expect(rows[0]?.name).toBe("Reopen test");
     await second.close();
   }, 60_000);
-
-  it("refuses a second process on the same folder while the first holds it", async () => {
-    const dataDir = path.join(dir, "locked");
-    const first = await openPglite(dataDir);
-    try {
-      // A real second process (the seed, another server) trying the same folder.
-      const script = `import("./db/client.ts").then(m => m.openPglite(${JSON.stringify(dataDir)}))
-        .then(() => { console.log("opened"); process.exit(0); })
-        .catch((e) => { console.error(e.message); process.exit(3); });`;
-      const child = spawnSync("npx", ["tsx", "--eval", script], { encoding: "utf8", timeout: 60_000 });
-      expect(child.status).toBe(3);
-      expect(child.stderr).toContain(`in use by process ${process.pid}`);
-    } finally {
-      await first.close();
-    }
-    // Once released, the folder opens again.
-    const again = await openPglite(dataDir);
-    await again.close();
-  }, 90_000);
-
-  it("takes over a lock left by a process that no longer exists", async () => {
-    const dataDir = path.join(dir, "stale");
-    const { writeFileSync } = await import("node:fs");
-    mkdirSync(dir, { recursive: true });
-    // pid_max on Linux is at most 4194304, so this pid cannot be alive.
-    writeFileSync(`${dataDir}.lock`, "4194399");
-    const handle = await openPglite(dataDir);
-    await handle.close();
-  }, 60_000);
-
-  it("fails clearly when another live process holds the lock file", async () => {
-    const dataDir = path.join(dir, "held");
-    const { writeFileSync } = await import("node:fs");
-    writeFileSync(`${dataDir}.lock`, String(process.ppid));
-    await expect(openPglite(dataDir)).rejects.toBeInstanceOf(DataDirLockedError);
-    rmSync(`${dataDir}.lock`);
-  });
 });
