@@ -1,4 +1,5 @@
 import type { NextConfig } from "next";
+import { STATIC_SECURITY_HEADERS } from "./lib/security-headers";
 
 const nextConfig: NextConfig = {
   // PGlite loads its WebAssembly and data files next to its own module, and pg has optional native
@@ -7,6 +8,10 @@ const nextConfig: NextConfig = {
   poweredByHeader: false,
   // forbidden() renders app/forbidden.tsx with a 403 for a signed-in user of the wrong role.
   experimental: { authInterrupts: true },
+  // Every response, pages and API; the pages' Content-Security-Policy (with a nonce) comes from proxy.ts.
+  async headers() {
+    return [{ source: "/:path*", headers: STATIC_SECURITY_HEADERS }];
+  },
 };
 
 export default nextConfig;

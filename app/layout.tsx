@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import type { ReactNode } from "react";
 import { inter } from "./fonts";
 import "./globals.css";
@@ -10,7 +11,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#123f36" };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+// Rendered per request: each page's scripts carry that response's CSP nonce (proxy.ts), which a
+// page prerendered at build time could not.
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="min-h-dvh font-sans">{children}</body>

@@ -1,2 +1,3 @@
 export * from "./photos";
-export * from "./disk";
+export * from "./store";
+export { uploadsDir } from "./disk";

@@ -5,6 +5,14 @@ import { readFileSync } from "node:fs";
 import { randomBytes } from "node:crypto";
 import { closeDatabase, openPostgres, installTestDatabase, type DatabaseHandle } from "@/db/client";
 
+let currentUrl: string | undefined;
+
+/** The PostgreSQL URL of this file's database (for tests that start app processes of their own). */
+export function testDatabaseUrl(): string {
+  if (!currentUrl) throw new Error("No PostgreSQL test database: DATABASE_URL is not set");
+  return currentUrl;
+}
+
 export async function createTestDatabase(): Promise<DatabaseHandle> {
   const template = process.env.SAGWISE_TEST_PG_TEMPLATE;
   const url = process.env.DATABASE_URL;
@@ -18,7 +26,8 @@ export async function createTestDatabase(): Promise<DatabaseHandle> {
     await admin.end();
     const dbUrl = new URL(url);
     dbUrl.pathname = `/${name}`;
-    handle = await openPostgres(dbUrl.toString());
+    currentUrl = dbUrl.toString();
+    handle = await openPostgres(currentUrl);
   } else {
     const dumpPath = process.env.SAGWISE_TEST_PGLITE_DUMP;
     if (!dumpPath) throw new Error("tests/helpers/global-setup.ts did not run");

@@ -23,14 +23,22 @@ export const GET = route(
     }
     const upload = await findUploadForViewer(id, viewer);
     if (!upload) throw new NotFoundError("No such photo.");
-    const type = (upload.contentType in PHOTO_TYPES ? upload.contentType : "application/octet-stream") as PhotoContentType;
-    const ext = PHOTO_TYPES[type] ?? "bin";
-    const bytes = await readUpload(upload.storageKey);
+    // The type sniffed at upload; anything else (an old or tampered row) is a download, never rendered.
+    const isPhoto = upload.contentType in PHOTO_TYPES;
+    const type = isPhoto ? (upload.contentType as PhotoContentType) : "application/octet-stream";
+    const ext = isPhoto ? PHOTO_TYPES[upload.contentType as PhotoContentType] : "bin";
+    let bytes: Uint8Array;
+    try {
+      bytes = await readUpload(upload.storageKey);
+    } catch (error) {
+      if ((error as { code?: string }).code === "ENOENT") throw new NotFoundError("The photo's file is missing from storage.");
+      throw error;
+    }
     return new Response(new Uint8Array(bytes), {
       headers: {
         "Content-Type": type,
         "Content-Length": String(bytes.byteLength),
-        "Content-Disposition": `inline; filename="photo-${upload.n}.${ext}"`,
+        "Content-Disposition": `${isPhoto ? "inline" : "attachment"}; filename="photo-${upload.n}.${ext}"`,
         "X-Content-Type-Options": "nosniff",
         "Cache-Control": "private, no-store",
         "Content-Security-Policy": "default-src 'none'; img-src 'self'; sandbox",
