@@ -1,6 +1,7 @@
 "use client";
 
-// One TanStack Query client per browser tab for the workspace's live data (queue, request detail).
+// One TanStack Query client per browser tab, for the workspace's live data (queue, request detail)
+// and the rider form's bike search.
 import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useState, type ReactNode } from "react";
 

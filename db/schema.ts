@@ -1,4 +1,4 @@
-// The whole data model (product.md, "Data kept"), split by area under db/tables.
+// The whole data model (docs/architecture.md, "Data"), split by area under db/tables.
 export * from "./tables/auth";
 export * from "./tables/shop";
 export * from "./tables/requests";

@@ -151,7 +151,7 @@ function demoSagReading(input: SizingInput, output: Recommendation) {
   const verdict = Object.fromEntries(
     (["front", "rear"] as const).map((e) => [e, sagVerdict({ input, recommendation: output, end: e, measured: { staticSagMm: mm[e].staticMm, raceSagMm: mm[e].raceMm } })]),
   );
-  return { measured: { asGiven: { unit: "mm", ...given }, mm }, verdict };
+  return { measured: { asGiven: { unit: "mm" as const, ...given }, mm }, verdict };
 }
 
 async function seedRequest(

@@ -34,8 +34,8 @@ export function SagCharts({ rows }: { rows: ReportComparison[] }) {
   if (!rear && !front) return null;
   return (
     <div className="grid gap-4 lg:grid-cols-2">
-      {rear ? <ForceChart id="calibration-rear" title="Rear race sag against rider mass" spec={rear} /> : null}
-      {front ? <ForceChart id="calibration-front" title="Front race sag against rider mass" spec={front} /> : null}
+      {rear ? <ForceChart title="Rear race sag against rider mass" spec={rear} /> : null}
+      {front ? <ForceChart title="Front race sag against rider mass" spec={front} /> : null}
     </div>
   );
 }

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { callApi } from "./form-utils";
+import { callApi } from "@/lib/api-client";
 
 /** Duplicate a model, or retire it / bring it back. */
 export function BikeActions({ id, retired }: { id: string; retired: boolean }) {

@@ -7,11 +7,11 @@ import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { applyServerErrors, errorAt, toNumber } from "@/components/ui/apply-server-errors";
+import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import { bikeModelSchema, type BikeModelInput, type BikeModelValues } from "@/lib/validations/bike";
 import { AIR_FIELDS, CLICKERS, FORK_FIELDS, FORK_KIND_LABELS, FORK_SPRING_FIELDS, MASS_FIELDS, REAR_FIELDS, type NumField } from "./bike-fields";
 import { CurveTable } from "./curve-table";
-import { callApi } from "./form-utils";
+import { callApi } from "@/lib/api-client";
 import { LeveragePreview } from "./leverage-preview";
 
 export type BikeFormValues = BikeModelInput;

@@ -4,6 +4,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import { callApi } from "@/lib/api-client";
 
 interface Report {
   saved: { row: number; slug: string; action: string }[];
@@ -20,11 +21,10 @@ export function CsvImport() {
     setBusy(true);
     setError(null);
     setReport(null);
-    const response = await fetch("/api/shop/catalog/csv", { method: "POST", body: new FormData(form) });
-    const body = (await response.json()) as Report & { error?: string };
+    const result = await callApi<Report>("/api/shop/catalog/csv", "POST", new FormData(form), { fallback: "The file could not be read." });
     setBusy(false);
-    if (!response.ok) return setError(body.error ?? "The file could not be read.");
-    setReport(body);
+    if (!result.ok) return setError(result.error);
+    setReport(result.data);
     router.refresh();
   }
 

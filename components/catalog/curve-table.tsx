@@ -3,7 +3,7 @@
 import { useFieldArray, type Control, type FieldErrors, type UseFormGetValues, type UseFormRegister } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { errorAt, toNumber } from "@/components/ui/apply-server-errors";
+import { errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import type { BikeModelInput, BikeModelValues } from "@/lib/validations/bike";
 
 const LIST = "spec.rear.leverageCurve" as const;

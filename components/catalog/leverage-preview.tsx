@@ -6,7 +6,7 @@
 import { forceChartGeometry } from "@/lib/charts/force-curve";
 import { rearWheelForceN, shockTravelAtMm, type LeveragePoint } from "@/lib/sizing";
 import { STROKE_TOLERANCE_FRACTION, STROKE_TOLERANCE_MIN_MM } from "@/lib/validations/bike";
-import { LineChart } from "./line-chart";
+import { LineChart } from "@/components/charts/line-chart";
 
 interface Props {
   curve: LeveragePoint[];

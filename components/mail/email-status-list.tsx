@@ -1,8 +1,9 @@
 // The e-mails of one request with how each went: a failed one stands out in words, colour and
 // border, with its attempts and the last error, so the tuner knows to reach the rider another way.
-import { listOutboundEmailsForRequest, type OutboundEmailRow } from "@/db/queries/outbound-emails";
+import type { OutboundEmailRow } from "@/db/queries/outbound-emails";
 import type { EmailStatus } from "@/db/schema";
 import { emailTemplates } from "@/emails";
+import { formatDateTime } from "@/lib/format";
 
 const STATUS_TEXT: Record<EmailStatus, string> = { sent: "Sent", queued: "Sending", failed: "Failed" };
 const STATUS_CLASS: Record<EmailStatus, string> = {
@@ -15,8 +16,6 @@ function templateLabel(name: string): string {
   return (emailTemplates as Record<string, { description: string }>)[name]?.description ?? name;
 }
 
-// Server time in UTC, as the audit trail shows it: the same on every screen.
-const when = (d: Date) => `${d.toISOString().slice(0, 16).replace("T", " ")} UTC`;
 
 function EmailItem({ mail }: { mail: OutboundEmailRow }) {
   const failed = mail.status === "failed";
@@ -35,7 +34,7 @@ function EmailItem({ mail }: { mail: OutboundEmailRow }) {
         <dd className="break-all">{mail.toAddress}</dd>
         <dt>{mail.sentAt ? "Sent" : "Created"}</dt>
         <dd>
-          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>{when(mail.sentAt ?? mail.createdAt)}</time>
+          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>{formatDateTime(mail.sentAt ?? mail.createdAt)}</time>
         </dd>
         <dt>Attempts</dt>
         <dd>{mail.attempts}</dd>
@@ -43,7 +42,7 @@ function EmailItem({ mail }: { mail: OutboundEmailRow }) {
       {failed ? (
         <p role="alert" className="mt-2 text-sm text-red-900">
           Not delivered after {mail.attempts} {mail.attempts === 1 ? "attempt" : "attempts"}
-          {mail.lastError ? `: ${mail.lastError}` : "."} Reach the rider another way or send it again.
+          {mail.lastError ? `: ${mail.lastError}` : "."} Reach the rider another way.
         </p>
       ) : null}
     </li>
@@ -58,18 +57,5 @@ export function EmailStatusItems({ emails }: { emails: OutboundEmailRow[] }) {
         <EmailItem key={mail.id} mail={mail} />
       ))}
     </ul>
-  );
-}
-
-/** Server component: `<EmailStatusList requestId={id} />` on the request page. */
-export async function EmailStatusList({ requestId }: { requestId: string }) {
-  const emails = await listOutboundEmailsForRequest(requestId);
-  return (
-    <section aria-labelledby="request-emails-heading" className="flex flex-col gap-2">
-      <h2 id="request-emails-heading" className="text-lg font-semibold">
-        E-mails to the rider
-      </h2>
-      <EmailStatusItems emails={emails} />
-    </section>
   );
 }

@@ -1,5 +1,6 @@
 // The queue's client-side data: filters as URL parameters, and the fetch of GET /api/requests.
 import type { RequestStatus } from "@/db/schema";
+import { getJson } from "@/lib/api-client";
 
 export interface QueueFilters {
   status: string;
@@ -62,16 +63,8 @@ export function paramsFrom(f: QueueFilters): URLSearchParams {
   return p;
 }
 
-export class QueueError extends Error {}
-
 export async function fetchQueue(f: QueueFilters): Promise<QueuePage> {
   const params = paramsFrom(f);
   params.set("counts", "1");
-  const response = await fetch(`/api/requests?${params}`, { headers: { accept: "application/json" } });
-  const body = (await response.json().catch(() => ({}))) as Partial<QueuePage> & { error?: string; fields?: Record<string, string> };
-  if (!response.ok) {
-    const fields = body.fields ? Object.entries(body.fields).map(([k, m]) => `${k}: ${m}`).join("; ") : "";
-    throw new QueueError([body.error ?? "The queue could not load.", fields].filter(Boolean).join(" "));
-  }
-  return body as QueuePage;
+  return getJson<QueuePage>(`/api/requests?${params}`, { fallback: "The queue could not load." });
 }

@@ -12,6 +12,7 @@ import {
 import Link from "next/link";
 import { StatusBadge } from "@/components/ui/status-badge";
 import type { QueueRow } from "./queue-data";
+import { formatDay } from "@/lib/format";
 
 const SORT_OF: Record<string, { asc: string; desc: string }> = {
   number: { asc: "number_asc", desc: "number" },
@@ -36,7 +37,6 @@ export function sortFrom(sorting: SortingState): string {
 }
 
 const col = createColumnHelper<QueueRow>();
-const dateFormat = new Intl.DateTimeFormat("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 
 const columns = [
   col.accessor("number", { header: "No.", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
@@ -55,7 +55,7 @@ const columns = [
   col.accessor("discipline", { header: "Discipline", enableSorting: false, cell: (c) => <span className="capitalize">{c.getValue().replace("-", " ")}</span> }),
   col.accessor("assignedTunerName", { header: "Tuner", enableSorting: false, cell: (c) => c.getValue() ?? <span className="text-stone-500">Not assigned</span> }),
   col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
-  col.accessor("createdAt", { header: "Received", cell: (c) => dateFormat.format(new Date(c.getValue())) }),
+  col.accessor("createdAt", { header: "Received", cell: (c) => formatDay(c.getValue()) }),
 ];
 
 export function QueueTable({

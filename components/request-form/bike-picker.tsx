@@ -6,6 +6,7 @@ import { useDeferredValue, useState } from "react";
 import type { UseFormRegisterReturn } from "react-hook-form";
 import { ErrorText } from "./fields";
 import { NOT_LISTED } from "./prepare";
+import { getJson } from "@/lib/api-client";
 
 interface BikeItem {
   id: string;
@@ -16,9 +17,7 @@ interface BikeItem {
 }
 
 async function fetchBikes(q: string): Promise<BikeItem[]> {
-  const response = await fetch(`/api/bikes?q=${encodeURIComponent(q)}`);
-  if (!response.ok) throw new Error(`bikes ${response.status}`);
-  return ((await response.json()) as { items: BikeItem[] }).items;
+  return (await getJson<{ items: BikeItem[] }>(`/api/bikes?q=${encodeURIComponent(q)}`)).items;
 }
 
 interface BikePickerProps {

@@ -126,4 +126,4 @@ export function TextAreaField({ id, label, register, error, hint, ...rest }: Tex
 }
 
 /** Nested error messages by dotted path: the one reader shared with the shop's forms. */
-export { errorAt } from "@/components/ui/apply-server-errors";
+export { errorAt } from "@/components/forms/apply-server-errors";

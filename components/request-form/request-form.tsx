@@ -2,10 +2,11 @@
 
 // The rider's setup request, one step at a time. Every change goes to the draft in localStorage;
 // the request is sent once from the review step and the draft is cleared only after a 201.
-import { QueryClient, QueryClientProvider } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { Providers } from "@/components/providers";
 import { Button } from "@/components/ui/button";
+import { callApi } from "@/lib/api-client";
 import { BikeStep } from "./bike-step";
 import { clearDraft, emptyDraft, loadDraft, saveDraft, STEP_KEYS, type Draft, type StepKey } from "./draft";
 import { FeelStep } from "./feel-step";
@@ -17,22 +18,21 @@ import { STEP_TITLES, StepIndicator } from "./step-indicator";
 
 const HEADINGS = ["About you", "Your riding", "Your bike", "How it feels", "Check and send"];
 
-async function send(draft: Draft, photos: File[]): Promise<Response> {
+const OFFLINE = "No connection: your answers are kept on this phone. Check your signal and press send again.";
+
+function send(draft: Draft, photos: File[]) {
   const answers = {
     ...Object.fromEntries(STEP_KEYS.slice(0, 4).map((k) => [k, prepareStep(k, draft.values[k])])),
     review: { consent: draft.values.review?.consent === true },
   };
-  if (!photos.length) {
-    return fetch("/api/requests", { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(answers) });
-  }
+  if (!photos.length) return callApi<{ statusUrl: string }>("/api/requests", "POST", answers, { offline: OFFLINE });
   const body = new FormData();
   body.set("answers", JSON.stringify(answers));
   for (const photo of photos) body.append("photos", photo);
-  return fetch("/api/requests", { method: "POST", body });
+  return callApi<{ statusUrl: string }>("/api/requests", "POST", body, { offline: OFFLINE });
 }
 
 export function RequestForm({ metric }: { metric: boolean }) {
-  const [queryClient] = useState(() => new QueryClient());
   const router = useRouter();
   const [draft, setDraft] = useState<Draft | null>(null);
   const [restored, setRestored] = useState(false);
@@ -92,21 +92,14 @@ export function RequestForm({ metric }: { metric: boolean }) {
     setSubmitting(true);
     setProblem(null);
     try {
-      const response = await send(current, photos);
-      if (response.status === 201) {
-        const { statusUrl } = (await response.json()) as { statusUrl: string };
+      const result = await send(current, photos);
+      if (result.ok) {
         clearDraft();
-        router.push(`${statusUrl}?sent=1`);
+        router.push(`${result.data.statusUrl}?sent=1`);
         return;
       }
-      const body = (await response.json().catch(() => ({}))) as ServerProblem;
-      if (response.status === 429) {
-        setProblem({ error: body.error ?? "Too many requests from this connection. Try again later; your answers are kept." });
-      } else {
-        setProblem({ error: body.error ?? "The shop could not take the request just now.", fields: body.fields });
-      }
-    } catch {
-      setProblem({ error: "No connection: your answers are kept on this phone. Check your signal and press send again." });
+      // A refusal may name fields (each with a way back to its step); 429 or no connection only say what to do.
+      setProblem({ error: result.error, ...(Object.keys(result.fields).length ? { fields: result.fields } : {}) });
     } finally {
       setSubmitting(false);
     }
@@ -122,7 +115,7 @@ export function RequestForm({ metric }: { metric: boolean }) {
   const photoError = problem?.fields ? Object.entries(problem.fields).find(([k]) => k.startsWith("photos"))?.[1] : undefined;
 
   return (
-    <QueryClientProvider client={queryClient}>
+    <Providers>
       <div className="flex flex-col gap-5">
         <StepIndicator step={draft.step} reached={draft.reached} onGo={go} />
         {restored ? (
@@ -154,6 +147,6 @@ export function RequestForm({ metric }: { metric: boolean }) {
           <ReviewStep key={`review-${generation}`} {...common("review")} onNext={submit} draft={draft} photos={photos} submitting={submitting} problem={problem} onGo={go} />
         ) : null}
       </div>
-    </QueryClientProvider>
+    </Providers>
   );
 }

@@ -2,8 +2,8 @@
 // rider's sag reports with the engine's verdicts.
 import { EmailStatusItems } from "@/components/mail/email-status-list";
 import type { RequestDetail } from "@/db/queries/review";
+import { formatDateTime } from "@/lib/format";
 
-const time = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 const box = "rounded-xl border border-stone-200 bg-white p-4";
 
 export function MessagesPanel({ messages }: { messages: RequestDetail["messages"] }) {
@@ -15,7 +15,7 @@ export function MessagesPanel({ messages }: { messages: RequestDetail["messages"
         {messages.map((m) => (
           <li key={m.id} className={`rounded-lg p-2 ${m.author === "tuner" ? "bg-pine-50" : "bg-amber-50"}`}>
             <p className="text-stone-600">
-              {m.author === "tuner" ? `Question from ${m.authorName ?? "the shop"}` : "Rider's answer"} · {time.format(m.createdAt)} UTC
+              {m.author === "tuner" ? `Question from ${m.authorName ?? "the shop"}` : "Rider's answer"} · {formatDateTime(m.createdAt)}
             </p>
             <p className="whitespace-pre-line">{m.body}</p>
           </li>
@@ -84,7 +84,7 @@ export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReport
       <ol className="flex flex-col gap-3 text-sm">
         {reports.map((r) => (
           <li key={r.id} className="rounded-lg border border-stone-200 p-2">
-            <p className="text-stone-600">{time.format(r.createdAt)} UTC</p>
+            <p className="text-stone-600">{formatDateTime(r.createdAt)}</p>
             <p>Measured: {measuredText(r.measured).join("; ")}</p>
             <ul className="mt-1 flex flex-col gap-1">
               {verdictsIn(r.verdict).map((v, i) => (

@@ -1,6 +1,7 @@
 // The request's audit trail as a timeline: who did what, when, with old and new values.
 import type { RequestStatus } from "@/db/schema";
 import { STATUS_LABELS } from "@/lib/requests/status";
+import { formatDateTime } from "@/lib/format";
 
 export interface AuditItem {
   id: number;
@@ -55,7 +56,6 @@ function Detail({ action, detail }: { action: string; detail: Record<string, unk
   return null;
 }
 
-const time = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "short", timeZone: "UTC" });
 
 export function AuditTimeline({ events }: { events: AuditItem[] }) {
   return (
@@ -64,7 +64,7 @@ export function AuditTimeline({ events }: { events: AuditItem[] }) {
       <ol className="flex flex-col gap-2 border-l-2 border-pine-100 pl-4 text-sm">
         {events.map((e) => (
           <li key={e.id} className={e.action === "email.failed" ? "rounded bg-red-50 p-1 text-red-900" : ""}>
-            <time dateTime={e.createdAt.toISOString()} className="text-stone-600">{time.format(e.createdAt)} UTC</time>{" "}
+            <time dateTime={e.createdAt.toISOString()} className="text-stone-600">{formatDateTime(e.createdAt)}</time>{" "}
             <span className="font-medium">{e.actorLabel}</span> {ACTION_WORDS[e.action] ?? e.action}{" "}
             <Detail action={e.action} detail={(e.detail ?? {}) as Record<string, unknown>} />
           </li>

@@ -1,8 +1,10 @@
 // The editor's form values (strings, as typed) to the engine's overrides and back. Empty means
 // "the engine's choice". Rates may be typed in any rate unit and are converted to N/mm with the
 // engine's exact factors (convertRate).
+import { z } from "zod";
 import { compactOverrides } from "@/lib/review/overrides-diff";
 import { CLICKER_IDS, convertRate, type ClickerId, type RateBasis, type RateUnit, type SetupOverrides } from "@/lib/sizing";
+import { saveRecommendationSchema } from "@/lib/validations/review";
 
 export interface EditorValues {
   /** "" keeps the shop's default basis. */
@@ -94,4 +96,31 @@ export function overridesFrom(v: EditorValues, airFork: boolean): { overrides: S
     ),
   };
   return { overrides: compactOverrides(overrides), errors };
+}
+
+/**
+ * The editor's schema for react-hook-form: the typed strings must read as numbers, and the overrides
+ * they make must pass the same schema the save endpoint uses (saveRecommendationSchema). Errors are
+ * keyed by the engine's paths ("rear.rateNmm"), as the inputs and the server name them.
+ */
+export function editorSchema(airFork: boolean) {
+  return z.custom<EditorValues>((v) => typeof v === "object" && v !== null).superRefine((values, ctx) => {
+    const { overrides, errors } = overridesFrom(values, airFork);
+    for (const [path, message] of Object.entries(errors)) ctx.addIssue({ code: "custom", path: [path], message });
+    const checked = saveRecommendationSchema.shape.overrides.safeParse(overrides);
+    if (!checked.success)
+      for (const issue of checked.error.issues) ctx.addIssue({ code: "custom", path: [issue.path.join(".")], message: issue.message });
+  });
+}
+
+/** react-hook-form's nested errors back to `{ "rear.rateNmm": message }`. */
+export function flatErrors(errors: object, prefix = ""): FieldErrors {
+  const out: FieldErrors = {};
+  for (const [key, value] of Object.entries(errors)) {
+    if (!value || typeof value !== "object") continue;
+    const path = prefix ? `${prefix}.${key}` : key;
+    if (typeof (value as { message?: unknown }).message === "string") out[path] = (value as { message: string }).message;
+    else Object.assign(out, flatErrors(value, path));
+  }
+  return out;
 }

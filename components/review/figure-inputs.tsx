@@ -3,6 +3,7 @@
 // Inputs of the adjust editor. Every input is empty when the engine's own choice stands; the
 // placeholder shows that choice.
 import { Field } from "@/components/ui/field";
+import { formatNumber } from "@/lib/format";
 import { RATE_UNITS, convertRate, type ClickerId, type RateUnit, type Recommendation } from "@/lib/sizing";
 import type { EditorValues, FieldErrors } from "./editor-state";
 import { CLICKER_LABELS } from "./figures";
@@ -27,6 +28,9 @@ function NumberInput(props: { id: string; label: string; value: string; engine: 
   );
 }
 
+const threeUnits = (nMm: number) =>
+  `${formatNumber(nMm, 1)} N/mm (${formatNumber(convertRate(nMm, "N/mm", "kgf/mm"), 2)} kgf/mm, ${formatNumber(convertRate(nMm, "N/mm", "lbf/in"), 0)} lbf/in)`;
+
 function RateInput(props: {
   id: string;
   label: string;
@@ -34,6 +38,8 @@ function RateInput(props: {
   unit: RateUnit;
   engineNmm: number | null;
   stockNmm: number[];
+  /** The spring the rider has fitted now (N/mm), when they told us. */
+  currentNmm?: number;
   error?: string;
   onChange: (value: string, unit: RateUnit) => void;
 }) {
@@ -52,11 +58,20 @@ function RateInput(props: {
           <option value="">Pick a spring on the shelf…</option>
           {props.stockNmm.map((r) => (
             <option key={r} value={r}>
-              {r.toFixed(1)} N/mm ({convertRate(r, "N/mm", "kgf/mm").toFixed(2)} kgf/mm, {convertRate(r, "N/mm", "lbf/in").toFixed(0)} lbf/in)
+              {threeUnits(r)}
             </option>
           ))}
         </select>
       </label>
+      <p className="text-sm text-stone-700">
+        {props.currentNmm === undefined ? (
+          "The rider did not give the spring fitted now."
+        ) : (
+          <>
+            Rider&apos;s spring now: {threeUnits(props.currentNmm)}
+          </>
+        )}
+      </p>
       <div className="grid grid-cols-[1fr_auto] items-start gap-2">
         <NumberInput id={props.id} label={props.label} value={props.value} engine={engine} error={props.error} onChange={(v) => props.onChange(v, props.unit)} />
         <label className="flex flex-col gap-1 text-sm font-medium text-stone-800">
@@ -83,12 +98,22 @@ function RateInput(props: {
   );
 }
 
-export function RearInputs({ v, set, engine, errors, stock }: { v: EditorValues; set: Set; engine: Recommendation; errors: FieldErrors; stock: number[] }) {
+interface EndInputsProps {
+  v: EditorValues;
+  set: Set;
+  engine: Recommendation;
+  errors: FieldErrors;
+  stock: number[];
+  /** The rider's spring fitted now at this end (N/mm). */
+  current?: number;
+}
+
+export function RearInputs({ v, set, engine, errors, stock, current }: EndInputsProps) {
   const t = engine.rear.sagTargets;
   return (
     <fieldset className="flex flex-col gap-3">
       <legend className="mb-2 text-lg font-semibold">Shock</legend>
-      <RateInput id="rear-rate" label="Shock spring rate" value={v.rearRate} unit={v.rearRateUnit} engineNmm={engine.rear.chosenRate.nMm} stockNmm={stock} error={errors["rear.rateNmm"]} onChange={(rearRate, rearRateUnit) => set({ rearRate, rearRateUnit })} />
+      <RateInput id="rear-rate" label="Shock spring rate" value={v.rearRate} unit={v.rearRateUnit} engineNmm={engine.rear.chosenRate.nMm} stockNmm={stock} currentNmm={current} error={errors["rear.rateNmm"]} onChange={(rearRate, rearRateUnit) => set({ rearRate, rearRateUnit })} />
       <NumberInput id="rear-preload" label="Shock preload (mm)" value={v.rearPreload} engine={fixed(engine.rear.preloadMm, 1)} error={errors["rear.preloadMm"]} onChange={(rearPreload) => set({ rearPreload })} />
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-3">
         <NumberInput id="rear-race" label="Rear race sag target (mm)" value={v.rearRaceSag} engine={fixed(t.raceSagMm, 0)} error={errors["rear.raceSagMm"]} onChange={(rearRaceSag) => set({ rearRaceSag })} />
@@ -99,7 +124,7 @@ export function RearInputs({ v, set, engine, errors, stock }: { v: EditorValues;
   );
 }
 
-export function FrontInputs({ v, set, engine, errors, stock }: { v: EditorValues; set: Set; engine: Recommendation; errors: FieldErrors; stock: number[] }) {
+export function FrontInputs({ v, set, engine, errors, stock, current }: EndInputsProps) {
   const f = engine.front;
   const t = f.sagTargets;
   const air = f.kind === "air";
@@ -110,7 +135,7 @@ export function FrontInputs({ v, set, engine, errors, stock }: { v: EditorValues
         <NumberInput id="front-air" label="Fork air pressure (kPa, gauge)" value={v.frontAirKpa} engine={fixed(f.airPressure?.kpaGauge, 0)} error={errors["front.airPressureKpaGauge"]} onChange={(frontAirKpa) => set({ frontAirKpa })} />
       ) : (
         <>
-          <RateInput id="front-rate" label="Fork spring rate (per spring)" value={v.frontRate} unit={v.frontRateUnit} engineNmm={f.chosenRate?.nMm ?? null} stockNmm={stock} error={errors["front.rateNmm"]} onChange={(frontRate, frontRateUnit) => set({ frontRate, frontRateUnit })} />
+          <RateInput id="front-rate" label="Fork spring rate (per spring)" value={v.frontRate} unit={v.frontRateUnit} engineNmm={f.chosenRate?.nMm ?? null} stockNmm={stock} currentNmm={current} error={errors["front.rateNmm"]} onChange={(frontRate, frontRateUnit) => set({ frontRate, frontRateUnit })} />
           <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
             <NumberInput id="front-preload" label="Fork preload (mm)" value={v.frontPreload} engine={fixed(f.preloadMm, 1)} error={errors["front.preloadMm"]} onChange={(frontPreload) => set({ frontPreload })} />
             <NumberInput id="front-oil" label="Fork oil level (mm from top)" value={v.frontOilLevel} engine={fixed(f.oilLevelMm, 0)} error={errors["front.oilLevelMm"]} onChange={(frontOilLevel) => set({ frontOilLevel })} />

@@ -3,21 +3,25 @@
 // The adjust editor: every change re-runs the engine at once and shows the consequences against the
 // engine's own proposal; "Save draft" stores the overrides (the server recomputes), "Approve" freezes
 // the saved draft and e-mails the rider.
+import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
+import { useForm, useWatch, type Resolver } from "react-hook-form";
 import { ForceChart } from "@/components/charts/force-chart";
 import { Button } from "@/components/ui/button";
 import { forkForceChart, rearForceChart } from "@/lib/charts/recommendation-charts";
+import { callApi, errorWithFields } from "@/lib/api-client";
 import { diffOverrides } from "@/lib/review/overrides-diff";
 import type { SetupOverrides, SizingInput } from "@/lib/sizing";
-import { overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
+import { editorSchema, flatErrors, overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
 import { ClickerInputs, FrontInputs, RearInputs } from "./figure-inputs";
 import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
 import { RateBasisInput } from "./rate-basis-input";
 import { ResultsTable } from "./results-table";
 import { ReasonsList, SafetyNote, WarningsList } from "./warnings-list";
-import { postJson } from "./post-json";
+
+const NOT_SENT = "No connection to the server. Nothing was changed; try again.";
 
 export interface EditableVersion {
   version: number;
@@ -30,7 +34,6 @@ export interface EditableVersion {
 export function RecommendationEditor({ requestId, input, latest }: { requestId: string; input: SizingInput; latest: EditableVersion }) {
   const router = useRouter();
   const initial = useMemo(() => valuesFrom(latest.overrides, latest.notesForRider, latest.internalNotes), [latest]);
-  const [values, setValues] = useState<EditorValues>(initial);
   const [message, setMessage] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
@@ -38,7 +41,16 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
 
   const engine = useMemo(() => evaluateLive(input, {}), [input]);
   const air = engine.ok && engine.rec.front.kind === "air";
-  const { overrides, errors: parseErrors } = overridesFrom(values, air);
+  // The form's state lives in react-hook-form; its resolver checks the typed values with the save
+  // endpoint's own schema. Every change re-renders (useWatch), so the engine runs on every keystroke.
+  const form = useForm<EditorValues>({
+    defaultValues: initial,
+    mode: "onChange",
+    resolver: zodResolver(editorSchema(air) as never) as unknown as Resolver<EditorValues>,
+  });
+  const values = { ...initial, ...useWatch({ control: form.control }) } as EditorValues;
+  const schemaErrors = flatErrors(form.formState.errors);
+  const { overrides } = overridesFrom(values, air);
   // Re-run on every render: the engine takes well under a millisecond.
   const live = evaluateLive(input, overrides);
   // The last figures that computed (by value), so the screen does not jump while a value is half typed.
@@ -46,36 +58,37 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   const [lastGood, setLastGood] = useState(() => ({ key: overridesKey, rec: live.ok ? live.rec : null }));
   if (live.ok && lastGood.key !== overridesKey) setLastGood({ key: overridesKey, rec: live.rec });
   const shown = live.ok ? live.rec : lastGood.rec;
-  const errors = { ...serverErrors, ...parseErrors, ...(live.ok ? {} : live.errors) };
+  const errors = { ...serverErrors, ...schemaErrors, ...(live.ok ? {} : live.errors) };
 
   const dirty =
     diffOverrides(latest.overrides, overrides).length > 0 ||
     values.notesForRider.trim() !== (latest.notesForRider ?? "") ||
     values.internalNotes.trim() !== (latest.internalNotes ?? "");
   const frozen = latest.state !== "draft";
-  const invalid = Object.keys(parseErrors).length > 0 || !live.ok;
+  const invalid = Object.keys(schemaErrors).length > 0 || !live.ok;
 
   if (!engine.ok || !shown) return <p role="alert">The engine could not size this request: {Object.values(engine.ok ? {} : engine.errors).join("; ")}</p>;
 
   const set = (patch: Partial<EditorValues>) => {
-    setValues((v) => ({ ...v, ...patch }));
+    for (const [name, value] of Object.entries(patch))
+      form.setValue(name as keyof EditorValues, value as never, { shouldDirty: true, shouldValidate: true });
     setServerErrors({});
     setMessage(null);
   };
 
   async function save(): Promise<number | null> {
-    const r = await postJson(`/api/requests/${requestId}/recommendation`, "PATCH", {
-      basedOnVersion: latest.version,
-      overrides,
-      notesForRider: values.notesForRider,
-      internalNotes: values.internalNotes,
-    });
+    const r = await callApi<{ version: number }>(
+      `/api/requests/${requestId}/recommendation`,
+      "PATCH",
+      { basedOnVersion: latest.version, overrides, notesForRider: values.notesForRider, internalNotes: values.internalNotes },
+      { offline: NOT_SENT },
+    );
     if (!r.ok) {
-      setServerErrors(Object.fromEntries(Object.entries(r.fields ?? {}).map(([k, m]) => [k.replace(/^overrides\./, ""), m])));
-      setMessage({ kind: "error", text: r.error });
+      setServerErrors(Object.fromEntries(Object.entries(r.fields).map(([k, m]) => [k.replace(/^overrides\./, ""), m])));
+      setMessage({ kind: "error", text: errorWithFields(r) });
       return null;
     }
-    return (r.body as { version: number }).version;
+    return r.data.version;
   }
 
   async function run(action: "save" | "approve") {
@@ -87,8 +100,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       if (version === null) return;
       if (action === "approve") {
         const acknowledgedWarnings = acknowledged && shown ? shown.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code) : [];
-        const r = await postJson(`/api/requests/${requestId}/approve`, "POST", { version, acknowledgedWarnings });
-        if (!r.ok) return setMessage({ kind: "error", text: r.error });
+        const r = await callApi(`/api/requests/${requestId}/approve`, "POST", { version, acknowledgedWarnings }, { offline: NOT_SENT });
+        if (!r.ok) return setMessage({ kind: "error", text: errorWithFields(r) });
         // The e-mail is queued with the approval and goes out at once; E-mails below shows how it went.
         setMessage({ kind: "ok", text: `Version ${version} approved. The rider is being e-mailed the sheet link (see E-mails below).` });
       } else setMessage({ kind: "ok", text: `Saved as draft version ${version}.` });
@@ -115,10 +128,10 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
         {!live.ok ? " (Showing the last valid figures: fix the marked field.)" : ""}
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
-        <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={(e) => { e.preventDefault(); void run("save"); }}>
+        <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={form.handleSubmit(() => run("save"))}>
           <RateBasisInput value={values.rateBasis} onChange={(rateBasis) => set({ rateBasis })} used={r.resolved.rateBasis} />
-          <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} />
-          <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} />
+          <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} current={input.currentSprings?.shockRateNmm} />
+          <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} current={input.currentSprings?.forkRateNmm} />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
           <NotesInputs v={values} set={set} />
           {message ? (
@@ -139,10 +152,10 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             <Button type="submit" variant="secondary" disabled={busy || invalid || !dirty}>
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
-            <Button onClick={() => void run("approve")} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
+            <Button onClick={() => void form.handleSubmit(() => run("approve"))()} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
               {dirty ? "Save and approve" : "Approve"} — e-mail the rider
             </Button>
-            <Button variant="ghost" disabled={busy || !dirty} onClick={() => { setValues(initial); setServerErrors({}); setMessage(null); }}>
+            <Button variant="ghost" disabled={busy || !dirty} onClick={() => { form.reset(initial); setServerErrors({}); setMessage(null); }}>
               Undo unsaved changes
             </Button>
           </div>
@@ -154,8 +167,8 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
         </div>
       </div>
       <div className="grid gap-6 lg:grid-cols-2">
-        <ForceChart id="live-rear" title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
-        <ForceChart id="live-fork" title="Fork: force against fork travel" spec={forkForceChart(r)} />
+        <ForceChart title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
+        <ForceChart title="Fork: force against fork travel" spec={forkForceChart(r)} />
       </div>
       <details className="rounded-lg border border-stone-200 bg-white p-3">
         <summary className="cursor-pointer font-medium">Why these figures (engine reasons)</summary>

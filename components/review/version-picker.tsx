@@ -1,6 +1,7 @@
 // Every version of the recommendation, the shown one marked; each with its sheet link.
 import Link from "next/link";
 import { sheetPath } from "@/lib/requests/token";
+import { formatDay } from "@/lib/format";
 
 const STATE_WORDS = { draft: "Draft", approved: "Approved", superseded: "Superseded" } as const;
 
@@ -12,7 +13,6 @@ export interface VersionSummary {
   approvedByName: string | null;
 }
 
-const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeZone: "UTC" });
 
 export function sheetLinkFor(requestId: string, v: { version: number; state: string }) {
   return v.state === "draft"
@@ -37,7 +37,7 @@ export function VersionPicker({ requestId, versions, shown }: { requestId: strin
                 Version {v.version}: {STATE_WORDS[v.state]}
               </Link>
               <span className="text-stone-600">
-                {v.approvedAt ? `approved ${day.format(v.approvedAt)}${v.approvedByName ? ` by ${v.approvedByName}` : ""}` : `made ${day.format(v.createdAt)}`}
+                {v.approvedAt ? `approved ${formatDay(v.approvedAt)}${v.approvedByName ? ` by ${v.approvedByName}` : ""}` : `made ${formatDay(v.createdAt)}`}
               </span>
               <a href={sheet.href} className="inline-flex min-h-11 items-center text-pine-700 underline" target="_blank" rel="noreferrer">
                 {sheet.label}

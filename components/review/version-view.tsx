@@ -25,8 +25,8 @@ export function VersionView(props: { version: number; state: string; input: Sizi
         </div>
       </div>
       <div className="grid gap-6 lg:grid-cols-2">
-        <ForceChart id={`v${props.version}-rear`} title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
-        <ForceChart id={`v${props.version}-fork`} title="Fork: force against fork travel" spec={forkForceChart(r)} />
+        <ForceChart title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
+        <ForceChart title="Fork: force against fork travel" spec={forkForceChart(r)} />
       </div>
     </section>
   );

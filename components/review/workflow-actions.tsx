@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import type { RequestStatus } from "@/db/schema";
-import { postJson } from "./post-json";
+import { callApi, errorWithFields } from "@/lib/api-client";
 
 const area = "min-h-20 rounded-lg border border-stone-300 bg-white px-3 py-2 text-base";
 const open = (s: RequestStatus) => s === "submitted" || s === "in_review" || s === "waiting_for_rider";
@@ -15,9 +15,9 @@ function useAction(url: string) {
   const [state, setState] = useState<{ busy: boolean; error?: string; done?: string }>({ busy: false });
   async function run(body: unknown, done: (result: unknown) => string) {
     setState({ busy: true });
-    const r = await postJson(url, "POST", body);
-    if (!r.ok) return setState({ busy: false, error: r.error });
-    setState({ busy: false, done: done(r.body) });
+    const r = await callApi<unknown>(url, "POST", body, { offline: "No connection to the server. Nothing was changed; try again." });
+    if (!r.ok) return setState({ busy: false, error: errorWithFields(r) });
+    setState({ busy: false, done: done(r.data) });
     router.refresh();
     return true;
   }

@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
+import { cn } from "@/components/ui/cn";
 
 export interface NavItem {
   href: string;
@@ -20,9 +21,10 @@ export function ShopNav({ items }: { items: NavItem[] }) {
             key={item.href}
             href={item.href}
             aria-current={active ? "page" : undefined}
-            className={`inline-flex min-h-11 items-center rounded-lg px-3 text-sm font-medium ${
-              active ? "bg-white text-pine-900" : "text-pine-50 hover:bg-pine-800"
-            }`}
+            className={cn(
+              "inline-flex min-h-11 items-center rounded-lg px-3 text-sm font-medium",
+              active ? "bg-white text-pine-900" : "text-pine-50 hover:bg-pine-800",
+            )}
           >
             {item.label}
           </Link>

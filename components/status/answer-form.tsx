@@ -9,6 +9,7 @@ import type { z } from "zod";
 import { TextAreaField } from "@/components/request-form/fields";
 import { Button } from "@/components/ui/button";
 import { riderAnswerSchema } from "@/lib/validations/status";
+import { callApi } from "@/lib/api-client";
 
 type Input = z.input<typeof riderAnswerSchema>;
 
@@ -21,22 +22,18 @@ export function AnswerForm({ requestId, token }: { requestId: string; token?: st
   });
   const onSubmit = handleSubmit(async (values) => {
     setProblem(null);
-    try {
-      const response = await fetch(`/api/status/${requestId}/answer`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ ...values, token }),
-      });
-      if (response.status === 201) {
-        router.refresh();
-        return;
-      }
-      const body = (await response.json().catch(() => ({}))) as { error?: string; fields?: Record<string, string> };
-      if (body.fields?.body) setError("body", { message: body.fields.body });
-      setProblem(body.error ?? "The answer could not be sent.");
-    } catch {
-      setProblem("No connection. Your answer is still in the box: send again when you have signal.");
+    const sent = await callApi(
+      `/api/status/${requestId}/answer`,
+      "POST",
+      { ...values, token },
+      { offline: "No connection. Your answer is still in the box: send again when you have signal.", fallback: "The answer could not be sent." },
+    );
+    if (sent.ok) {
+      router.refresh();
+      return;
     }
+    if (sent.fields.body) setError("body", { message: sent.fields.body });
+    setProblem(sent.error);
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Answer the shop">

@@ -11,6 +11,7 @@ import type { SagVerdict } from "@/lib/sizing";
 import { friendlyError } from "@/lib/validations/messages";
 import { sagReportSchema } from "@/lib/validations/status";
 import { VerdictCard } from "./verdict-card";
+import { callApi } from "@/lib/api-client";
 
 const READINGS = [
   ["static", "Static sag"],
@@ -32,23 +33,19 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
   const onSubmit = form.handleSubmit(async () => {
     setProblem(null);
     const raw = form.getValues();
-    try {
-      const response = await fetch(`/api/status/${requestId}/sag`, {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({ ...raw, token }),
-      });
-      const body = (await response.json().catch(() => ({}))) as { verdict?: typeof result; error?: string; fields?: Record<string, string> };
-      if (response.status === 201) {
-        setResult(body.verdict ?? {});
-        router.refresh();
-        return;
-      }
-      for (const [field, message] of Object.entries(body.fields ?? {})) setError(field, { message });
-      setProblem(body.error ?? "The report could not be sent.");
-    } catch {
-      setProblem("No connection. Your figures are still in the form: send again when you have signal.");
+    const sent = await callApi<{ verdict?: typeof result }>(
+      `/api/status/${requestId}/sag`,
+      "POST",
+      { ...raw, token },
+      { offline: "No connection. Your figures are still in the form: send again when you have signal.", fallback: "The report could not be sent." },
+    );
+    if (sent.ok) {
+      setResult(sent.data?.verdict ?? {});
+      router.refresh();
+      return;
     }
+    for (const [field, message] of Object.entries(sent.fields)) setError(field, { message });
+    setProblem(sent.error);
   });
 
   return (

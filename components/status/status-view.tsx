@@ -5,20 +5,19 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import type { RiderStatus } from "@/db/queries/status";
 import { STATUS_NEXT_STEP } from "@/lib/requests/status";
 import { sheetPath } from "@/lib/requests/token";
-import type { SagVerdict } from "@/lib/sizing";
 import { AnswerForm } from "./answer-form";
 import { AnswersList } from "./answers-list";
 import { SafetyCaution } from "./safety-caution";
 import { SagForm } from "./sag-form";
 import { VerdictCard } from "./verdict-card";
+import { formatDay } from "@/lib/format";
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
 const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4";
 
 export function StatusView({ data, token, justSent }: { data: RiderStatus; token?: string; justSent?: boolean }) {
   const { request, versions, messages, photos, reports } = data;
   const withToken = (path: string) => (token ? `${path}${path.includes("?") ? "&" : "?"}token=${encodeURIComponent(token)}` : path);
-  const answers = request.answers as { rider?: { weight?: { unit?: string } } };
+  const answers = request.answers;
   const metric = answers.rider?.weight?.unit !== "lb";
   const lastQuestion = [...messages].reverse().find((m) => m.author === "tuner");
   return (
@@ -31,7 +30,7 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
       <header className="flex flex-col gap-2">
         <h1 className="text-2xl font-bold">Request {request.number}</h1>
         <p className="text-stone-700">
-          {request.bikeLabel} · sent {day(request.createdAt)}
+          {request.bikeLabel} · sent {formatDay(request.createdAt)}
         </p>
         <div className="flex flex-wrap items-center gap-2">
           <StatusBadge status={request.status} />
@@ -54,7 +53,7 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
           <ul className="flex flex-col gap-2">
             {messages.map((m) => (
               <li key={m.id} className={`rounded-lg p-3 ${m.author === "tuner" ? "bg-violet-50" : "bg-stone-100"}`}>
-                <p className="text-sm font-semibold">{m.author === "tuner" ? "Shop" : "You"} · {day(m.createdAt)}</p>
+                <p className="text-sm font-semibold">{m.author === "tuner" ? "Shop" : "You"} · {formatDay(m.createdAt)}</p>
                 <p className="whitespace-pre-line">{m.body}</p>
               </li>
             ))}
@@ -73,7 +72,7 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
                   Download setup sheet, version {v.version} (PDF)
                 </a>
                 <span className="text-sm text-stone-600">
-                  Approved {v.approvedAt ? day(v.approvedAt) : ""}{i === 0 ? " · current" : " · replaced by a newer version"}
+                  Approved {v.approvedAt ? formatDay(v.approvedAt) : ""}{i === 0 ? " · current" : " · replaced by a newer version"}
                 </span>
                 {i === 0 && v.notesForRider ? <p className="rounded-lg bg-pine-50 p-3">{v.notesForRider}</p> : null}
               </li>
@@ -95,10 +94,10 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
             <div className="flex flex-col gap-2">
               <h3 className="font-semibold">Your earlier reports</h3>
               {reports.map((r) => {
-                const verdict = r.verdict as Partial<Record<"front" | "rear", SagVerdict>>;
+                const verdict = r.verdict;
                 return (
                   <div key={r.id} className="flex flex-col gap-2">
-                    <p className="text-sm text-stone-600">Reported {day(r.createdAt)}</p>
+                    <p className="text-sm text-stone-600">Reported {formatDay(r.createdAt)}</p>
                     {(["rear", "front"] as const).map((end) => (verdict[end] ? <VerdictCard key={end} verdict={verdict[end]} /> : null))}
                   </div>
                 );

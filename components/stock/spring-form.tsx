@@ -7,8 +7,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { applyServerErrors, toNumber } from "@/components/ui/apply-server-errors";
-import { callApi } from "@/components/catalog/form-utils";
+import { applyServerErrors, toNumber } from "@/components/forms/apply-server-errors";
+import { callApi } from "@/lib/api-client";
 import { RATE_UNITS, type RateUnit } from "@/lib/sizing";
 import { springStockSchema } from "@/lib/validations/stock";
 

@@ -4,7 +4,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { callApi } from "@/components/catalog/form-utils";
+import { callApi } from "@/lib/api-client";
 import { rateTriple } from "@/lib/sizing";
 import { SpringForm } from "./spring-form";
 

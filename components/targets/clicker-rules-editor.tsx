@@ -8,8 +8,8 @@ import { useState } from "react";
 import { Controller, useFieldArray, useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
-import { applyServerErrors, errorAt, toNumber } from "@/components/ui/apply-server-errors";
-import { callApi } from "@/components/catalog/form-utils";
+import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-server-errors";
+import { callApi } from "@/lib/api-client";
 import { CLICKER_IDS, COMPLAINTS, TERRAINS, type ClickerRule } from "@/lib/sizing";
 import { clickerRulesSchema } from "@/lib/validations/targets";
 

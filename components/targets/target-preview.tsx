@@ -3,8 +3,8 @@
 // Before/after: the engine's recommendation for a reference rider with the saved row and the edit.
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { NumInput } from "@/components/catalog/num-input";
-import { callApi } from "@/components/catalog/form-utils";
+import { NumInput } from "@/components/forms/num-input";
+import { callApi } from "@/lib/api-client";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 import type { PreviewSummary } from "@/lib/shop/target-preview";
 import type { Discipline, SkillLevel } from "@/lib/sizing";

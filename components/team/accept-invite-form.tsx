@@ -9,8 +9,8 @@ import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormAlert } from "@/components/ui/form-alert";
-import { applyServerErrors } from "@/components/ui/apply-server-errors";
-import { callApi } from "@/components/catalog/form-utils";
+import { applyServerErrors } from "@/components/forms/apply-server-errors";
+import { callApi } from "@/lib/api-client";
 import { acceptInviteSchema } from "@/lib/validations/team";
 
 type Schema = typeof acceptInviteSchema;

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { applyServerErrors } from "@/components/ui/apply-server-errors";
-import { callApi } from "@/components/catalog/form-utils";
+import { applyServerErrors } from "@/components/forms/apply-server-errors";
+import { callApi } from "@/lib/api-client";
 import { inviteSchema } from "@/lib/validations/team";
 
 type Schema = typeof inviteSchema;

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm, useWatch } from "react-hook-form";
 import type { z } from "zod";
 import { Field } from "@/components/ui/field";
-import { toNumber } from "@/components/ui/apply-server-errors";
+import { toNumber } from "@/components/forms/apply-server-errors";
 import { loadTestSchema } from "@/lib/validations/tools";
 import { CalcCard, Result } from "./calc-card";
 import { loadTestRate } from "./spring-math";

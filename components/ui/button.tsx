@@ -1,4 +1,5 @@
 import type { ButtonHTMLAttributes } from "react";
+import { cn } from "./cn";
 
 type Variant = "primary" | "secondary" | "ghost" | "danger";
 
@@ -11,7 +12,11 @@ const variants: Record<Variant, string> = {
 };
 
 export function buttonClass(variant: Variant = "primary", extra = ""): string {
-  return `inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 text-base font-semibold transition-colors disabled:cursor-not-allowed ${variants[variant]} ${extra}`;
+  return cn(
+    "inline-flex min-h-11 items-center justify-center gap-2 rounded-lg px-4 py-2 text-base font-semibold transition-colors disabled:cursor-not-allowed",
+    variants[variant],
+    extra,
+  );
 }
 
 export function Button({

@@ -1,4 +1,5 @@
 import type { InputHTMLAttributes, ReactNode } from "react";
+import { cn } from "./cn";
 
 interface FieldProps extends InputHTMLAttributes<HTMLInputElement> {
   id: string;
@@ -11,7 +12,7 @@ interface FieldProps extends InputHTMLAttributes<HTMLInputElement> {
 export function Field({ id, label, error, hint, className = "", ...input }: FieldProps) {
   const describedBy = describedByFor(id, hint, error);
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
+    <div className={cn("flex flex-col gap-1", className)}>
       <label htmlFor={id} className="text-sm font-medium text-stone-800">
         {label}
       </label>

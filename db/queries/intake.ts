@@ -31,7 +31,7 @@ export async function listActiveBikes(q?: string) {
     .limit(50);
   return rows.map(({ spec, ...row }) => ({
     ...row,
-    forkTravelMm: (spec as BikeSpecInput).fork.travelMm,
+    forkTravelMm: spec.fork.travelMm,
   }));
 }
 

@@ -28,15 +28,6 @@ const summaryColumns = {
   createdAt: setupRequests.createdAt,
 };
 
-export async function listRecentRequests(limit: number) {
-  const db = await getDb();
-  return db
-    .select(summaryColumns)
-    .from(setupRequests)
-    .orderBy(desc(setupRequests.createdAt))
-    .limit(limit);
-}
-
 /** Every request made with this e-mail: the rider's "my requests" after an e-mail-link sign-in. */
 export async function listRequestsForRiderEmail(email: string) {
   const db = await getDb();

@@ -5,7 +5,7 @@ import { and, asc, eq, gt } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { bikeModels, clickerRules, setupTargets, shopSettings, springStock } from "@/db/schema";
 import { specCalibrationFor } from "./calibrations";
-import type { ShopSizingContext, TargetRowValues } from "@/lib/requests/sizing-input";
+import type { ShopSizingContext } from "@/lib/requests/sizing-input";
 import {
   bikeSpecSchema,
   clickerRuleSchema,
@@ -49,7 +49,7 @@ export async function loadShopSizingContext(
   const shop = settings[0];
   return {
     bike,
-    targets: (targetRows[0]?.values as TargetRowValues | undefined) ?? null,
+    targets: targetRows[0]?.values ?? null,
     stock: {
       forkRatesNmm: stock.filter((s) => s.end === "fork").map((s) => s.rateNmm),
       shockRatesNmm: stock.filter((s) => s.end === "shock").map((s) => s.rateNmm),

@@ -12,6 +12,7 @@ import {
   uploads,
 } from "@/db/schema";
 import { hashStatusToken } from "@/lib/requests/token";
+import { ConflictError } from "@/lib/errors";
 
 /** Who is looking: a status-link token, or a signed-in rider's e-mail. */
 export type RiderViewer = { token: string } | { email: string };
@@ -95,8 +96,6 @@ export async function loadRiderStatus(requestId: string) {
 }
 export type RiderStatus = NonNullable<Awaited<ReturnType<typeof loadRiderStatus>>>;
 
-export class StatusConflict extends Error {}
-
 /** The rider answers the tuner's question: message, back to review, audit, all at once. */
 export async function recordRiderAnswer(requestId: string, body: string) {
   const db = await getDb();
@@ -106,7 +105,7 @@ export async function recordRiderAnswer(requestId: string, body: string) {
       .set({ status: "in_review", updatedAt: new Date() })
       .where(and(eq(setupRequests.id, requestId), eq(setupRequests.status, "waiting_for_rider")))
       .returning({ id: setupRequests.id });
-    if (!moved.length) throw new StatusConflict("The shop is not waiting for an answer on this request.");
+    if (!moved.length) throw new ConflictError("The shop is not waiting for an answer on this request.");
     await tx.insert(requestMessages).values({ requestId, author: "rider", body });
     await tx.insert(auditEvents).values({
       requestId,
@@ -141,7 +140,9 @@ export async function findApprovedVersion(requestId: string) {
   return row ?? null;
 }
 
-export async function insertSagReport(report: { requestId: string; versionId: string; version: number; measured: unknown; verdict: unknown }) {
+export async function insertSagReport(
+  report: Pick<typeof sagReports.$inferInsert, "requestId" | "versionId" | "measured" | "verdict"> & { versionId: string; version: number },
+) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [row] = await tx

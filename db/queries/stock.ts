@@ -27,12 +27,6 @@ export async function listSpringStock(): Promise<SpringStockRow[]> {
   return db.select().from(springStock).orderBy(asc(springStock.end), asc(springStock.rateNmm));
 }
 
-export async function getSpringStock(id: string): Promise<SpringStockRow | null> {
-  const db = await getDb();
-  const [row] = await db.select().from(springStock).where(eq(springStock.id, id));
-  return row ?? null;
-}
-
 export async function createSpringStock(values: SpringStockValues): Promise<SpringStockRow> {
   const db = await getDb();
   const [row] = await db.insert(springStock).values(columnsOf(values)).returning();

@@ -8,7 +8,7 @@ import { clickerRuleSchema, type ClickerRule, type Discipline, type SkillLevel }
 export async function listSetupTargets() {
   const db = await getDb();
   const rows = await db.select().from(setupTargets);
-  return rows.map((r) => ({ discipline: r.discipline as Discipline, skill: r.skill as SkillLevel, values: r.values as TargetRowValues, updatedAt: r.updatedAt }));
+  return rows.map((r) => ({ discipline: r.discipline as Discipline, skill: r.skill as SkillLevel, values: r.values, updatedAt: r.updatedAt }));
 }
 
 export async function getSetupTarget(discipline: Discipline, skill: SkillLevel): Promise<TargetRowValues | null> {
@@ -17,7 +17,7 @@ export async function getSetupTarget(discipline: Discipline, skill: SkillLevel):
     .select({ values: setupTargets.values })
     .from(setupTargets)
     .where(and(eq(setupTargets.discipline, discipline), eq(setupTargets.skill, skill)));
-  return (row?.values as TargetRowValues | undefined) ?? null;
+  return row?.values ?? null;
 }
 
 export async function saveSetupTarget(discipline: Discipline, skill: SkillLevel, values: TargetRowValues) {

@@ -15,15 +15,22 @@ import {
 } from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { bikeModels } from "./shop";
+// The status list lives beside its words, so validations need no database import (relative path:
+// drizzle-kit loads this file without the "@/" alias).
+import { REQUEST_STATUSES, type RequestStatus } from "../../lib/requests/status";
+import type { Recommendation, SagVerdict, SetupOverrides, SizingInput } from "@/lib/sizing";
+import type { RequestAnswers } from "@/lib/validations/request";
+import type { SagReport } from "@/lib/validations/status";
 
-export const REQUEST_STATUSES = [
-  "submitted",
-  "in_review",
-  "waiting_for_rider",
-  "approved",
-  "declined",
-] as const;
-export type RequestStatus = (typeof REQUEST_STATUSES)[number];
+type End = "front" | "rear";
+
+/** A sag report as stored: the readings as the rider gave them, and per end in mm. */
+export interface SagMeasured {
+  asGiven: Omit<SagReport, "token">;
+  mm: Partial<Record<End, { freeMm: number | null; staticMm: number; raceMm: number }>>;
+}
+
+export { REQUEST_STATUSES, type RequestStatus };
 
 export const setupRequests = pgTable(
   "setup_requests",
@@ -46,7 +53,8 @@ export const setupRequests = pgTable(
     bikeYear: integer("bike_year"),
     riderMassKg: doublePrecision("rider_mass_kg").notNull(),
     // Everything the rider answered, exactly as given (original units included).
-    answers: jsonb("answers").notNull(),
+    // As the rider sent them (lib/validations/request.ts); rows made by hand may hold less.
+    answers: jsonb("answers").$type<Partial<RequestAnswers>>().notNull(),
     assignedTunerId: text("assigned_tuner_id").references(() => user.id, { onDelete: "set null" }),
     declineReason: text("decline_reason"),
     // Lower-cased rider name, e-mail and bike for the queue's search; a trigram index serves
@@ -106,10 +114,10 @@ export const recommendationVersions = pgTable(
     state: text("state").$type<VersionState>().notNull().default("draft"),
     engineVersion: text("engine_version").notNull(),
     // The engine's full input (SI) and output, so a version can be reproduced and explained.
-    input: jsonb("input").notNull(),
-    output: jsonb("output").notNull(),
+    input: jsonb("input").$type<SizingInput>().notNull(),
+    output: jsonb("output").$type<Recommendation>().notNull(),
     // What the tuner changed against the engine's proposal.
-    overrides: jsonb("overrides").notNull().default({}),
+    overrides: jsonb("overrides").$type<SetupOverrides>().notNull().default({}),
     notesForRider: text("notes_for_rider"),
     internalNotes: text("internal_notes"),
     createdById: text("created_by_id").references(() => user.id, { onDelete: "set null" }),
@@ -166,8 +174,8 @@ export const sagReports = pgTable(
       onDelete: "set null",
     }),
     // Measurements as the rider gave them (values and unit) and in mm.
-    measured: jsonb("measured").notNull(),
-    verdict: jsonb("verdict").notNull(),
+    measured: jsonb("measured").$type<SagMeasured>().notNull(),
+    verdict: jsonb("verdict").$type<Partial<Record<End, SagVerdict>>>().notNull(),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("sag_reports_request_idx").on(t.requestId, t.createdAt)],
@@ -182,7 +190,7 @@ export const auditEvents = pgTable(
     // "rider", "system", or the staff member's name at the time.
     actorLabel: text("actor_label").notNull(),
     action: text("action").notNull(),
-    detail: jsonb("detail").notNull().default({}),
+    detail: jsonb("detail").$type<Record<string, unknown>>().notNull().default({}),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [

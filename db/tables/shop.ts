@@ -2,6 +2,8 @@
 // and clicker rules. Engine-shaped data (bike spec, target values) is jsonb validated by the engine's
 // zod schemas; the columns beside it are the ones the pages list, search and sort by.
 import { sql } from "drizzle-orm";
+import type { TargetRowValues } from "@/lib/requests/sizing-input";
+import type { BikeSpecInput, ClickerRule } from "@/lib/sizing";
 import {
   boolean,
   doublePrecision,
@@ -52,7 +54,7 @@ export const bikeModels = pgTable(
     rearWheelTravelMm: doublePrecision("rear_wheel_travel_mm").notNull(),
     // The whole engine-facing description (masses, leverage-ratio points, fork data, clickers),
     // validated by lib/sizing's bikeSpecSchema on every write.
-    spec: jsonb("spec").notNull(),
+    spec: jsonb("spec").$type<BikeSpecInput>().notNull(),
     notes: text("notes"),
     retiredAt: timestamp("retired_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
@@ -89,7 +91,7 @@ export const setupTargets = pgTable(
     discipline: text("discipline").notNull(),
     skill: text("skill").notNull(),
     // Sag targets, rear share, rate and bottoming factors, shaped by lib/sizing's targets schema.
-    values: jsonb("values").notNull(),
+    values: jsonb("values").$type<TargetRowValues>().notNull(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex("setup_targets_discipline_skill_idx").on(t.discipline, t.skill)],
@@ -101,7 +103,7 @@ export const clickerRules = pgTable(
     id: uuid("id").primaryKey().defaultRandom(),
     // Trigger (complaint, terrain or rate change), clicker, change and reason: lib/sizing's
     // clickerRuleSchema, validated on every write.
-    rule: jsonb("rule").notNull(),
+    rule: jsonb("rule").$type<ClickerRule>().notNull(),
     sortOrder: integer("sort_order").notNull().default(0),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },

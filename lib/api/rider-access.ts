@@ -1,18 +1,32 @@
-// Who may act on a request from the status page: the holder of its status token, or the rider
-// signed in with the e-mail the request was made with. The check is part of the query.
+// Who may act on a request as its rider: the holder of its status token, or the rider signed in
+// with the e-mail the request was made with. The check is part of the query (findRequestForViewer).
 import { findRequestForViewer, type RiderViewer } from "@/db/queries/status";
-import { HttpError } from "@/lib/api/respond";
-import { AuthError, getSessionUser } from "@/lib/auth/guard";
+import { AuthError, getSessionUser, type SessionUser } from "@/lib/auth/guard";
+import { NotFoundError } from "@/lib/errors";
+import { isUuid } from "@/lib/validations/id";
 
-export async function requireRiderAccess(request: Request, requestId: string, token: string | undefined) {
+/**
+ * Whether the caller is the request's rider. 401 when there is neither a token nor a session.
+ * `user` saves a second session look-up when the caller already has it.
+ */
+export async function isRequestRider(
+  request: Request,
+  requestId: string,
+  token: string | undefined,
+  user?: SessionUser | null,
+): Promise<boolean> {
   let viewer: RiderViewer;
   if (token) viewer = { token };
   else {
-    const user = await getSessionUser(request.headers);
-    if (!user) throw new AuthError(401);
-    viewer = { email: user.email };
+    const session = user === undefined ? await getSessionUser(request.headers) : user;
+    if (!session) throw new AuthError(401);
+    viewer = { email: session.email };
   }
-  const ok = /^[0-9a-f-]{36}$/i.test(requestId) ? await findRequestForViewer(viewer, requestId) : null;
-  if (!ok) throw new HttpError(404, "No such request.");
-  return ok;
+  return isUuid(requestId) && (await findRequestForViewer(viewer, requestId)) !== null;
+}
+
+/** The request id when the caller is its rider; otherwise 404, so nothing tells whether it exists. */
+export async function requireRiderAccess(request: Request, requestId: string, token: string | undefined) {
+  if (!(await isRequestRider(request, requestId, token))) throw new NotFoundError("No such request.");
+  return requestId;
 }

@@ -1,5 +1,6 @@
-// The one server-side guard. Every route handler and server action calls requireRole or
-// requireSession first, or is marked public on purpose with `publicRoute`.
+// The one server-side guard. Route handlers reach it through the route builder (lib/api/route.ts:
+// `access: [roles]`, or `access: "public"` for a handler that is public on purpose); pages call
+// requireRole or requireSession with `{ page }` themselves.
 import { headers as nextHeaders } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
 import { getAuth } from "./server";
@@ -54,9 +55,4 @@ export async function requireRole(
   if (roles.includes(user.role)) return user;
   if (options.page !== undefined) forbidden();
   throw new AuthError(403);
-}
-
-/** Marks a handler as public on purpose, so a reader (and a grep) sees the guard was not forgotten. */
-export function publicRoute<T>(handler: T): T {
-  return handler;
 }

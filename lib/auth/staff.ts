@@ -1,13 +1,11 @@
-// Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and, later, the
-// admin's invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
+// Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and the admin's
+// invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
-import { eq } from "drizzle-orm";
-import { getDb, type Tx } from "@/db/client";
 import { findInviteByTokenHash, insertInvite, lockInvite, markInviteAccepted } from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
-import { countActiveAdmins, findUserByEmail, getStaffMember } from "@/db/queries/team";
-import { account, user } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { countActiveAdmins, findUserByEmail, getStaffMember, insertStaffUser, promoteToStaff } from "@/db/queries/team";
+import { inTransaction } from "@/db/queries/transaction";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { appBaseUrl } from "@/lib/env";
 import { kickOutbox, queueTemplateEmail } from "@/lib/mail";
 import type { Role } from "./roles";
@@ -25,28 +23,16 @@ async function hashPassword(password: string): Promise<string> {
   return (await (await getAuth()).$context).password.hash(password);
 }
 
-/** Inserts the user and its password account in the caller's transaction. */
-async function insertStaffUser(tx: Tx, input: Omit<StaffAccount, "password">, passwordHash: string): Promise<string> {
-  const id = randomUUID();
-  await tx.insert(user).values({ id, email: input.email, name: input.name, role: input.role, emailVerified: true });
-  await tx.insert(account).values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: passwordHash });
-  return id;
-}
-
 /** Creates the account if its e-mail is new; returns the user id and whether it was created. */
 export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string; created: boolean }> {
-  const db = await getDb();
-  const email = input.email.toLowerCase();
-  const existing = await db.select({ id: user.id }).from(user).where(eq(user.email, email)).limit(1);
-  if (existing[0]) return { id: existing[0].id, created: false };
-
-  const hash = await hashPassword(input.password);
-  const id = await db.transaction((tx) => insertStaffUser(tx, { ...input, email }, hash));
+  const existing = await findUserByEmail(input.email);
+  if (existing) return { id: existing.id, created: false };
+  const passwordHash = await hashPassword(input.password);
+  const id = await inTransaction((tx) => insertStaffUser(tx, { email: input.email, name: input.name, role: input.role, passwordHash }));
   return { id, created: true };
 }
 
-
-// ---- Team administration (issue 7) ----
+// Team administration.
 // Invitations: a random token goes out by e-mail; only its SHA-256 is stored, so a database reader
 // cannot accept an invitation. Role changes and deactivation go through better-auth's admin plugin,
 // whose banUser deletes every session of the user at once.
@@ -56,19 +42,15 @@ export const INVITE_DAYS = 7;
 
 export const hashInviteToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export async function inviteStaff(
-  input: { email: string; role: "tuner" | "admin" },
-  inviter: { id: string; name: string },
-) {
+export async function inviteStaff(input: { email: string; role: "tuner" | "admin" }, inviter: { id: string; name: string }) {
   const email = input.email.toLowerCase();
   const existing = await findUserByEmail(email);
   if (existing && existing.role !== "rider")
-    throw new HttpError(409, "This person is already on the team.", { email: "Already a staff member" });
+    throw new ConflictError("This person is already on the team.", { email: "Already a staff member" });
   const token = randomBytes(32).toString("base64url");
   const url = new URL(`/invite/${token}`, appBaseUrl()).toString();
-  const db = await getDb();
   // The invitation and its e-mail are stored together: neither exists without the other.
-  const { invite, mail } = await db.transaction(async (tx) => {
+  const { invite, mail } = await inTransaction(async (tx) => {
     const invite = await insertInvite(
       {
         id: randomUUID(),
@@ -92,12 +74,12 @@ export async function inviteStaff(
   return { id: invite.id, email, role: input.role, expiresAt: invite.expiresAt, mailStatus: mail.status };
 }
 
-/** The open invitation behind a token, or an HttpError saying why it cannot be used. */
+/** The open invitation behind a token, or a domain error saying why it cannot be used. */
 export async function openInvite(token: string) {
   const invite = await findInviteByTokenHash(hashInviteToken(token));
-  if (!invite) throw new HttpError(404, "This invitation link is not valid.");
-  if (invite.acceptedAt) throw new HttpError(409, "This invitation has already been used. Sign in instead.");
-  if (invite.expiresAt <= new Date()) throw new HttpError(409, "This invitation has expired. Ask the shop admin for a new one.");
+  if (!invite) throw new NotFoundError("This invitation link is not valid.");
+  if (invite.acceptedAt) throw new ConflictError("This invitation has already been used. Sign in instead.");
+  if (invite.expiresAt <= new Date()) throw new ConflictError("This invitation has expired. Ask the shop admin for a new one.");
   return invite;
 }
 
@@ -111,24 +93,22 @@ export async function acceptInvite(input: { token: string; name: string; passwor
   const opened = await openInvite(input.token);
   const role = opened.role === "admin" ? "admin" : "tuner";
   // Hashed before the transaction: it is slow on purpose and needs no lock.
-  const hash = await hashPassword(input.password);
-  const db = await getDb();
-  const id = await db.transaction(async (tx) => {
+  const passwordHash = await hashPassword(input.password);
+  const id = await inTransaction(async (tx) => {
     const invite = await lockInvite(tx, opened.id);
-    if (!invite || invite.acceptedAt) throw new HttpError(409, "This invitation has already been used.");
+    if (!invite || invite.acceptedAt) throw new ConflictError("This invitation has already been used.");
     const existing = await findUserByEmail(invite.email, tx);
     if (existing && existing.role !== "rider")
-      throw new HttpError(409, "An account with this e-mail already exists. Sign in instead.");
+      throw new ConflictError("An account with this e-mail already exists. Sign in instead.");
     let userId: string;
     if (existing) {
       // A rider who becomes staff keeps their account; the role changes and a password is set.
-      await tx.update(user).set({ role, name: input.name, updatedAt: new Date() }).where(eq(user.id, existing.id));
-      await tx.insert(account).values({ id: randomUUID(), userId: existing.id, accountId: existing.id, providerId: "credential", password: hash });
+      await promoteToStaff(tx, existing.id, { name: input.name, role, passwordHash });
       userId = existing.id;
     } else {
-      userId = await insertStaffUser(tx, { email: invite.email, name: input.name, role }, hash);
+      userId = await insertStaffUser(tx, { email: invite.email, name: input.name, role, passwordHash });
     }
-    if (!(await markInviteAccepted(invite.id, tx))) throw new HttpError(409, "This invitation has already been used.");
+    if (!(await markInviteAccepted(invite.id, tx))) throw new ConflictError("This invitation has already been used.");
     return userId;
   });
   return { id, email: opened.email, role };
@@ -137,7 +117,7 @@ export async function acceptInvite(input: { token: string; name: string; passwor
 /** Refuses a change that would leave the shop with no admin who can sign in (409). */
 async function guardLastAdmin(target: { role: string; banned: boolean | null }) {
   if (target.role === "admin" && !target.banned && (await countActiveAdmins()) <= 1)
-    throw new HttpError(409, "The shop needs at least one active admin. Make someone else admin first.", {
+    throw new ConflictError("The shop needs at least one active admin. Make someone else admin first.", {
       role: "Last active admin",
     });
 }
@@ -148,7 +128,7 @@ export async function updateStaffMember(
   requestHeaders: Headers,
 ) {
   const target = await getStaffMember(targetId);
-  if (!target) throw new HttpError(404, "No such team member.");
+  if (!target) throw new NotFoundError("No such team member.");
   const auth = await getAuth();
   const demotes = change.role === "tuner" && target.role === "admin";
   const deactivates = change.active === false && !target.banned;

@@ -3,8 +3,8 @@
 // the active calibration into the bike spec); every apply and undo is audited.
 import { getBikeModel } from "@/db/queries/bikes";
 import { closeActiveCalibration, getActiveCalibration, insertCalibration, listCalibrations, listModelSagReports, type CalibrationRow } from "@/db/queries/calibrations";
-import { HttpError } from "@/lib/api/respond";
 import type { SessionUser } from "@/lib/auth/guard";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { bikeSpecSchema, catalogParameters, fitCalibration, type BikeSpecInput, type CalibrationFit, type CalibrationParameters } from "@/lib/sizing";
 import { predictSag, usableReports, type PredictedSag, type UsableReport } from "./reports";
 
@@ -22,7 +22,7 @@ interface ModelFit {
 
 async function fitModel(bikeModelId: string): Promise<ModelFit> {
   const model = await getBikeModel(bikeModelId);
-  if (!model) throw new HttpError(404, "No such bike model.");
+  if (!model) throw new NotFoundError("No such bike model.");
   // The catalog's own figures, never a calibration someone stored in the spec.
   const spec: BikeSpecInput = { ...bikeSpecSchema.parse(model.spec), calibration: undefined };
   const [rows, active] = await Promise.all([listModelSagReports(bikeModelId), getActiveCalibration(bikeModelId)]);
@@ -124,9 +124,9 @@ const actorOf = (user: SessionUser) => ({ id: user.id, label: user.name });
 /** Applies the current fit; 409 when the fit refuses or is already the active calibration. */
 export async function applyCalibration(bikeModelId: string, user: SessionUser) {
   const { usable, fit, active } = await fitModel(bikeModelId);
-  if (!fit.ok) throw new HttpError(409, `Nothing to apply: ${fit.reason}`);
+  if (!fit.ok) throw new ConflictError(`Nothing to apply: ${fit.reason}`);
   if (active && sameParameters(parametersOf(active), fit.parameters))
-    throw new HttpError(409, "Nothing to apply: this fit is already the model's calibration.");
+    throw new ConflictError("Nothing to apply: this fit is already the model's calibration.");
   const row = await insertCalibration(
     {
       bikeModelId,
@@ -149,11 +149,11 @@ export async function applyCalibration(bikeModelId: string, user: SessionUser) {
 
 /** Undoes the active calibration: new recommendations go back to the catalog's weight split. */
 export async function undoCalibration(bikeModelId: string, user: SessionUser) {
-  if (!(await getBikeModel(bikeModelId))) throw new HttpError(404, "No such bike model.");
+  if (!(await getBikeModel(bikeModelId))) throw new NotFoundError("No such bike model.");
   const row = await closeActiveCalibration(bikeModelId, actorOf(user), {
     action: "calibration.undone",
     detail: { bikeModelId },
   });
-  if (!row) throw new HttpError(409, "Nothing to undo: this model has no calibration applied.");
+  if (!row) throw new ConflictError("Nothing to undo: this model has no calibration applied.");
   return { ...activeView(row), undoneAt: row.undoneAt?.toISOString() ?? null, undoneBy: row.undoneByLabel };
 }

@@ -5,6 +5,7 @@
 // on later renders. react-pdf copies what it changes (positions are scaled into new objects, glyph
 // arrays are sliced or concatenated), so a run handed out twice is never altered in between.
 import { Font } from "@react-pdf/renderer";
+import { LRUCache } from "lru-cache";
 
 /**
  * Per font, in characters of kept runs (a shaped character is about 80 bytes, so a few MB at most);
@@ -17,7 +18,7 @@ export const SHAPING_CACHE_MAX_RUN = 500;
 type Layout = (text: string, features?: unknown, script?: string, language?: string, direction?: string) => unknown;
 interface ShapingFont {
   layout: Layout;
-  [CACHED]?: Map<string, unknown>;
+  [CACHED]?: ShapingCache;
 }
 interface FontSourceLike {
   data: unknown;
@@ -25,6 +26,9 @@ interface FontSourceLike {
 }
 
 const CACHED = Symbol("sagwise.shapingCache");
+
+/** Shaped runs by key; least recently used go first once full, so the sheet's own text stays. */
+export type ShapingCache = LRUCache<string, object>;
 
 function featureKey(features: unknown): string {
   if (features === undefined || features === null) return "";
@@ -34,31 +38,19 @@ function featureKey(features: unknown): string {
 }
 
 /** Makes a loaded fontkit font reuse its shaped runs; calling it again on the same font does nothing. */
-export function cacheShaping(font: ShapingFont): Map<string, unknown> {
+export function cacheShaping(font: ShapingFont): ShapingCache {
   const existing = font[CACHED];
   if (existing) return existing;
-  const cache = new Map<string, unknown>();
-  let chars = 0;
+  // The text is the tail of its key, so a key's length stands in for the run's size.
+  const cache: ShapingCache = new LRUCache({ maxSize: SHAPING_CACHE_CHARS, sizeCalculation: (_run, key) => key.length });
   const layout = font.layout.bind(font);
   font.layout = (text, features, script, language, direction) => {
     if (typeof text !== "string" || text.length > SHAPING_CACHE_MAX_RUN) return layout(text, features, script, language, direction);
     const key = `${featureKey(features)}\u0000${script ?? ""}\u0000${language ?? ""}\u0000${direction ?? ""}\u0000${text}`;
     const hit = cache.get(key);
-    if (hit !== undefined) {
-      // Least recently used goes first once full: the sheet's own text stays, one-off notes leave.
-      cache.delete(key);
-      cache.set(key, hit);
-      return hit;
-    }
+    if (hit !== undefined) return hit;
     const run = layout(text, features, script, language, direction);
-    // The text is the tail of its key, so a key's length stands in for the run's size.
-    for (const oldest of cache.keys()) {
-      if (chars + key.length <= SHAPING_CACHE_CHARS) break;
-      cache.delete(oldest);
-      chars -= oldest.length;
-    }
-    cache.set(key, run);
-    chars += key.length;
+    if (typeof run === "object" && run !== null) cache.set(key, run);
     return run;
   };
   font[CACHED] = cache;

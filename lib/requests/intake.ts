@@ -5,7 +5,7 @@
 // removed again if the transaction fails, so a refused or failed request leaves nothing behind.
 import { findActiveBike, findNearestGenericBike, insertSetupRequest, type CatalogBike } from "@/db/queries/intake";
 import { loadShopSizingContext } from "@/db/queries/sizing-context";
-import { HttpError } from "@/lib/api/respond";
+import { ValidationError } from "@/lib/errors";
 import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { buildSizingInput, toKg, toMm } from "@/lib/requests/sizing-input";
@@ -48,13 +48,13 @@ interface ResolvedBike {
 async function resolveBike(bike: RequestAnswers["bike"]): Promise<ResolvedBike> {
   if (bike.modelId) {
     const found = await findActiveBike(bike.modelId);
-    if (!found) throw new HttpError(400, "Some fields need attention.", { "bike.modelId": "That bike is no longer in the shop's list: pick another or choose “not listed”" });
+    if (!found) throw new ValidationError("Some fields need attention.", { "bike.modelId": "That bike is no longer in the shop's list: pick another or choose “not listed”" });
     return { modelId: found.id, bikeClass: found.bikeClass, label: found.name, spec: found.spec };
   }
   const notListed = bike.notListed!;
   const travelMm = toMm(notListed.rearWheelTravel.value, notListed.rearWheelTravel.unit);
   const basis = await findNearestGenericBike(travelMm);
-  if (!basis) throw new HttpError(400, "Some fields need attention.", { "bike.modelId": "The shop has no bikes to size against yet" });
+  if (!basis) throw new ValidationError("Some fields need attention.", { "bike.modelId": "The shop has no bikes to size against yet" });
   const spec = notListed.mass ? { ...basis.spec, massKg: toKg(notListed.mass) } : basis.spec;
   return { modelId: null, bikeClass: null, label: notListed.description, spec, basis };
 }
@@ -83,7 +83,7 @@ export async function submitSetupRequest(answers: RequestAnswers, photos: Incomi
   try {
     output = recommend(input);
   } catch (error) {
-    if (error instanceof SizingInputError) throw new HttpError(400, "Some answers cannot be sized.", engineFields(error));
+    if (error instanceof SizingInputError) throw new ValidationError("Some answers cannot be sized.", engineFields(error));
     throw error;
   }
   if (bike.basis) output = markNotListed(output, bike, answers);

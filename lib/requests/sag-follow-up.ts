@@ -2,9 +2,9 @@
 // version: per end, spring right / too soft / too stiff and the preload change that puts race sag
 // on target. Values are kept as given and in mm.
 import { findApprovedVersion, insertSagReport } from "@/db/queries/status";
-import { HttpError } from "@/lib/api/respond";
+import { ConflictError, ValidationError } from "@/lib/errors";
 import { toMm } from "@/lib/requests/sizing-input";
-import { SizingInputError, sagVerdict, type Recommendation, type SagVerdict, type SizingInput } from "@/lib/sizing";
+import { SizingInputError, sagVerdict, type SagVerdict } from "@/lib/sizing";
 import type { SagReport } from "@/lib/validations/status";
 
 type End = "front" | "rear";
@@ -18,9 +18,8 @@ const round = (v: number) => Math.round(v * 100) / 100;
 
 export async function reportSag(requestId: string, report: SagReport) {
   const approved = await findApprovedVersion(requestId);
-  if (!approved) throw new HttpError(409, "Sag can be reported once the shop has approved your setup.");
-  const input = approved.input as SizingInput;
-  const recommendation = approved.output as Recommendation;
+  if (!approved) throw new ConflictError("Sag can be reported once the shop has approved your setup.");
+  const { input, output: recommendation } = approved;
   const mm: Partial<Record<End, EndMm>> = {};
   const verdict: Partial<Record<End, SagVerdict>> = {};
   for (const end of ["front", "rear"] as const) {
@@ -43,7 +42,7 @@ export async function reportSag(requestId: string, report: SagReport) {
       if (!(error instanceof SizingInputError)) throw error;
       const issue = error.issues[0];
       const field = issue?.path.endsWith("staticSagMm") ? "static" : "race";
-      throw new HttpError(400, "Some measurements need attention.", { [`${end}.${field}`]: issue?.message ?? "Check this value" });
+      throw new ValidationError("Some measurements need attention.", { [`${end}.${field}`]: issue?.message ?? "Check this value" });
     }
   }
   const { token: _token, ...asGiven } = report;

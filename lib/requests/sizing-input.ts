@@ -4,6 +4,7 @@ import {
   INCH_MM,
   POUND_KG,
   convertRate,
+  sizingInputSchema,
   type BikeSpecInput,
   type ClickerRule,
   type RateBasis,
@@ -92,12 +93,26 @@ export function buildSizingInput(answers: RequestAnswers, shop: ShopSizingContex
     shop: { gearMassKg: shop.gearMassKg, frequencyRatioWindow: shop.frequencyRatioWindow },
     stock: shop.stock,
     clickerRules: shop.clickerRules,
+    currentSprings: currentSpringsNmm(answers),
   };
 }
 
-/** The rider's current springs in N/mm, for the sheet's comparison with the stock rate. */
-export function currentSpringsNmm(answers: RequestAnswers) {
-  const rate = (r?: { value: number; unit: "N/mm" | "kgf/mm" | "lbf/in" }) =>
-    r ? convertRate(r.value, r.unit, "N/mm") : undefined;
-  return { fork: rate(answers.bike.currentForkSpring), shock: rate(answers.bike.currentShockSpring) };
+const currentSpringsSchema = sizingInputSchema.shape.currentSprings.unwrap();
+
+/**
+ * The springs the rider has fitted now, in N/mm, as the engine takes them (shown beside the shelf's
+ * stock; they do not change the sizing). A rate outside the engine's range (for example a fork
+ * figure given for both legs together) is left out rather than refusing the whole request; the
+ * rider's own figure stays in the answers.
+ */
+export function currentSpringsNmm(answers: RequestAnswers): SizingInput["currentSprings"] {
+  const rate = (r: { value: number; unit: "N/mm" | "kgf/mm" | "lbf/in" } | undefined, key: "forkRateNmm" | "shockRateNmm") => {
+    if (!r) return undefined;
+    const nMm = convertRate(r.value, r.unit, "N/mm");
+    return currentSpringsSchema.shape[key].safeParse(nMm).success ? nMm : undefined;
+  };
+  const forkRateNmm = rate(answers.bike.currentForkSpring, "forkRateNmm");
+  const shockRateNmm = rate(answers.bike.currentShockSpring, "shockRateNmm");
+  if (forkRateNmm === undefined && shockRateNmm === undefined) return undefined;
+  return { ...(forkRateNmm !== undefined ? { forkRateNmm } : {}), ...(shockRateNmm !== undefined ? { shockRateNmm } : {}) };
 }

@@ -1,5 +1,8 @@
-// Words for each request status, shared by the queue, the rider's status page and e-mails.
-import type { RequestStatus } from "@/db/schema";
+// The request statuses and the words for each, shared by the database enum, the queue, the rider's
+// status page and e-mails.
+
+export const REQUEST_STATUSES = ["submitted", "in_review", "waiting_for_rider", "approved", "declined"] as const;
+export type RequestStatus = (typeof REQUEST_STATUSES)[number];
 
 export const STATUS_LABELS: Record<RequestStatus, string> = {
   submitted: "Submitted",

@@ -3,7 +3,7 @@
 import Papa from "papaparse";
 import type { BikeSpecInput } from "@/lib/sizing";
 import { bikeModelSchema, type BikeModelValues } from "./bike";
-import { fieldErrors } from "@/lib/api/respond";
+import { fieldMessages } from "@/lib/errors";
 
 const CURVE = "spec.rear.leverageCurve";
 
@@ -96,7 +96,7 @@ export function parseCatalogCsv(text: string): { results: CsvRowResult[]; fileEr
     const slug = (raw.slug ?? "").trim() || null;
     if (Object.keys(fields).length) return { row, ok: false, slug, fields };
     const result = bikeModelSchema.safeParse(model);
-    if (!result.success) return { row, ok: false, slug, fields: fieldErrors(result.error) };
+    if (!result.success) return { row, ok: false, slug, fields: fieldMessages(result.error.issues) };
     const retired = /^(yes|true|1)$/i.test((raw.retired ?? "").trim());
     return { row, ok: true, slug: result.data.slug, values: result.data, retired };
   });

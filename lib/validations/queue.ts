@@ -1,6 +1,6 @@
 import { z } from "zod";
+import { REQUEST_STATUSES } from "@/lib/requests/status";
 import { text } from "./text";
-import { REQUEST_STATUSES } from "@/db/schema";
 import { disciplineSchema } from "@/lib/sizing";
 
 export const QUEUE_SORTS = [

@@ -31,7 +31,7 @@ const queue = (cookie?: string, query = "") =>
 
 describe("GET /api/health", () => {
   it("names the database and the newest applied migration", async () => {
-    const response = await health();
+    const response = await health(new Request(`${ORIGIN()}/api/health`));
     expect(response.status).toBe(200);
     const journal = readJournal();
     expect(await response.json()).toEqual({

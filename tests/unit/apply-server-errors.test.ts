@@ -1,7 +1,7 @@
 // Server 400 `fields` (lib/api/respond.ts fieldErrors, produced by the same schemas the routes use)
 // are put back onto the admin forms' own field paths.
 import { describe, expect, it } from "vitest";
-import { applyServerErrors, errorAt, serverErrorsToForm, toNumber } from "@/components/ui/apply-server-errors";
+import { applyServerErrors, errorAt, serverErrorsToForm, toNumber } from "@/components/forms/apply-server-errors";
 import { fieldErrors } from "@/lib/api/respond";
 import { saveTargetSchema } from "@/lib/validations/targets";
 import { inviteSchema } from "@/lib/validations/team";

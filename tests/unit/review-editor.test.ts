@@ -1,9 +1,37 @@
 // The adjust editor's pure parts: typed values → engine overrides (rate units converted with exact
 // factors), the figure-by-figure audit diff, and which workflow step may start from which status.
 import { describe, expect, it } from "vitest";
-import { overridesFrom, valuesFrom } from "@/components/review/editor-state";
+import { editorSchema, flatErrors, overridesFrom, valuesFrom } from "@/components/review/editor-state";
 import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
 import { canStart, conflictMessage } from "@/lib/review/transitions";
+
+describe("editorSchema (the form's resolver schema)", () => {
+  const empty = valuesFrom({}, null, null);
+  const issues = (values: typeof empty, air = false) => {
+    const parsed = editorSchema(air).safeParse(values);
+    return parsed.success ? {} : Object.fromEntries(parsed.error.issues.map((i) => [i.path.join("."), i.message]));
+  };
+
+  it("accepts an untouched form (every figure left to the engine)", () => {
+    expect(issues(empty)).toEqual({});
+  });
+
+  it("names a value that is not a number, under the engine's path", () => {
+    expect(Object.keys(issues({ ...empty, rearPreload: "ten" }))).toEqual(["rear.preloadMm"]);
+  });
+
+  it("refuses a figure the save endpoint's schema refuses (shock rate 1 to 400 N/mm)", () => {
+    expect(Object.keys(issues({ ...empty, rearRate: "0.5" }))).toEqual(["rear.rateNmm"]);
+    // 3000 lbf/in is about 525 N/mm (1 lbf/in = 4.4482216152605 N / 25.4 mm, NIST SP 811).
+    expect(Object.keys(issues({ ...empty, rearRate: "3000", rearRateUnit: "lbf/in" }))).toEqual(["rear.rateNmm"]);
+    expect(issues({ ...empty, rearRate: "300", rearRateUnit: "lbf/in" })).toEqual({});
+  });
+
+  it("flattens react-hook-form's nested errors back to paths", () => {
+    const nested = { rear: { rateNmm: { type: "custom", message: "Too soft" } }, clickers: { forkRebound: { type: "custom", message: "0 to 100" } } };
+    expect(flatErrors(nested)).toEqual({ "rear.rateNmm": "Too soft", "clickers.forkRebound": "0 to 100" });
+  });
+});
 
 describe("overridesFrom", () => {
   const empty = valuesFrom({}, null, null);

@@ -5,6 +5,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { listRequestsForRiderEmail } from "@/db/queries/requests";
 import { requireSession } from "@/lib/auth/guard";
 import { STATUS_NEXT_STEP } from "@/lib/requests/status";
+import { formatDay } from "@/lib/format";
 
 export const metadata: Metadata = { title: "My requests" };
 export const dynamic = "force-dynamic";
@@ -32,7 +33,7 @@ export default async function MyRequestsPage() {
                 <StatusBadge status={r.status} />
               </div>
               <p className="mt-1 text-sm text-stone-600">
-                Sent {r.createdAt.toISOString().slice(0, 10)} · {STATUS_NEXT_STEP[r.status]}
+                Sent {formatDay(r.createdAt)} · {STATUS_NEXT_STEP[r.status]}
               </p>
             </li>
           ))}

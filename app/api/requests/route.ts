@@ -2,12 +2,13 @@
 // with `counts=1`). Filters: status, discipline, bikeClass, tuner (user id | "me" | "unassigned"),
 // from/to (UTC days), q (rider name, e-mail, bike); page, pageSize, sort.
 // POST /api/requests: a rider's new setup request (public), 201 `{ id, statusUrl }`.
-import { NextResponse } from "next/server";
+import { z } from "zod";
 import { countRequestsByStatus, listQueue } from "@/db/queries/requests";
-import { HttpError, withErrors } from "@/lib/api/respond";
+import { HttpError } from "@/lib/api/respond";
 import { createLimiter } from "@/lib/api/rate-limit";
-import { publicRoute, requireRole } from "@/lib/auth/guard";
+import { json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
+import { TooLargeError, ValidationError } from "@/lib/errors";
 import { submitSetupRequest } from "@/lib/requests/intake";
 import { statusPath } from "@/lib/requests/token";
 import { MAX_PHOTO_BYTES, MAX_PHOTOS, PhotoError, displayName, type IncomingPhoto } from "@/lib/storage";
@@ -17,14 +18,12 @@ import { requestAnswersSchema } from "@/lib/validations/request";
 
 export const dynamic = "force-dynamic";
 
-export const GET = withErrors(async (request: Request) => {
-  const caller = await requireRole(STAFF_ROLES, { headers: request.headers });
-  const query = queueQuerySchema.parse(queueParams(new URL(request.url).searchParams));
-  const [page, counts] = await Promise.all([
-    listQueue(query, caller.id),
-    query.counts ? countRequestsByStatus() : undefined,
-  ]);
-  return NextResponse.json(counts ? { ...page, counts } : page);
+// Empty filters (a cleared field) mean "no filter".
+const queueQuery = z.preprocess((raw) => queueParams(new URLSearchParams(raw as Record<string, string>)), queueQuerySchema);
+
+export const GET = route({ access: STAFF_ROLES, query: queueQuery }, async ({ user, query }) => {
+  const [page, counts] = await Promise.all([listQueue(query, user.id), query.counts ? countRequestsByStatus() : undefined]);
+  return json(counts ? { ...page, counts } : page);
 });
 
 // A rider sends one request, maybe a corrected second: 8 per 15 minutes per client stops floods
@@ -32,7 +31,7 @@ export const GET = withErrors(async (request: Request) => {
 const limitSubmissions = createLimiter("submit", 8, 15 * 60);
 
 const bad = (field: string, message: string, status: 400 | 413 = 400) =>
-  new HttpError(status, message, { [field]: message });
+  status === 413 ? new TooLargeError(message, { [field]: message }) : new ValidationError(message, { [field]: message });
 
 async function readBody(request: Request): Promise<{ answers: unknown; photos: IncomingPhoto[] }> {
   const type = request.headers.get("content-type") ?? "";
@@ -73,19 +72,18 @@ async function readBody(request: Request): Promise<{ answers: unknown; photos: I
   throw new HttpError(415, "Send the answers as application/json or multipart/form-data.");
 }
 
-export const POST = publicRoute(
-  withErrors(async (request: Request) => {
-    await limitSubmissions(request);
-    const body = await readBody(request);
-    const answers = requestAnswersSchema.parse(body.answers, { error: friendlyError });
-    let created;
-    try {
-      created = await submitSetupRequest(answers, body.photos);
-    } catch (error) {
-      if (error instanceof PhotoError) throw bad(error.field, error.message, error.status);
-      throw error;
-    }
-    // Committed with its confirmation e-mail queued; the outbox worker sends it (no waiting here).
-    return NextResponse.json({ id: created.id, statusUrl: statusPath(created.statusToken) }, { status: 201 });
-  }),
-);
+// Public on purpose: riders send requests without an account. The body is JSON or multipart (with
+// photos), so it is read here rather than by a body schema.
+export const POST = route({ access: "public", limit: limitSubmissions }, async ({ request }) => {
+  const body = await readBody(request);
+  const answers = requestAnswersSchema.parse(body.answers, { error: friendlyError });
+  let created;
+  try {
+    created = await submitSetupRequest(answers, body.photos);
+  } catch (error) {
+    if (error instanceof PhotoError) throw bad(error.field, error.message, error.status);
+    throw error;
+  }
+  // Committed with its confirmation e-mail queued; the outbox worker sends it (no waiting here).
+  return json({ id: created.id, statusUrl: statusPath(created.statusToken) }, 201);
+});

@@ -6,7 +6,7 @@ import { listBikeModels } from "@/db/queries/bikes";
 import { listClickerRules, listSetupTargets } from "@/db/queries/targets";
 import { requireRole } from "@/lib/auth/guard";
 import { defaultTargetValues } from "@/lib/shop/targets";
-import { DISCIPLINES, SKILL_LEVELS, disciplineSchema, sizingDefaults, skillLevelSchema, type BikeSpecInput } from "@/lib/sizing";
+import { DISCIPLINES, SKILL_LEVELS, disciplineSchema, sizingDefaults, skillLevelSchema } from "@/lib/sizing";
 
 export const metadata: Metadata = { title: "Setup targets" };
 export const dynamic = "force-dynamic";
@@ -60,7 +60,7 @@ export default async function TargetsPage({ searchParams }: { searchParams: Prom
         discipline={discipline}
         skill={skill}
         saved={valuesOf(discipline, skill)}
-        bikes={bikes.map((b) => ({ id: b.id, name: b.name, rearTravelMm: b.rearWheelTravelMm, forkTravelMm: (b.spec as BikeSpecInput).fork.travelMm }))}
+        bikes={bikes.map((b) => ({ id: b.id, name: b.name, rearTravelMm: b.rearWheelTravelMm, forkTravelMm: b.spec.fork.travelMm }))}
       />
       <ClickerRulesEditor initial={rules.length ? rules : sizingDefaults.DEFAULT_CLICKER_RULES} />
     </div>

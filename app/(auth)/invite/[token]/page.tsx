@@ -2,8 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { AcceptInviteForm } from "@/components/team/accept-invite-form";
-import { HttpError } from "@/lib/api/respond";
 import { openInvite } from "@/lib/auth/staff";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 
 export const metadata: Metadata = { title: "Join the workspace", robots: { index: false } };
 export const dynamic = "force-dynamic";
@@ -15,8 +15,8 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   try {
     invite = await openInvite(token);
   } catch (error) {
-    if (error instanceof HttpError && error.status === 404) notFound();
-    if (error instanceof HttpError)
+    if (error instanceof NotFoundError) notFound();
+    if (error instanceof ConflictError)
       return (
         <div className="flex flex-col gap-3">
           <h1 className="text-2xl font-bold">This invitation cannot be used</h1>

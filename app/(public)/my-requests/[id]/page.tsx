@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { StatusView } from "@/components/status/status-view";
 import { findRequestForViewer, loadRiderStatus } from "@/db/queries/status";
 import { requireSession } from "@/lib/auth/guard";
+import { isUuid } from "@/lib/validations/id";
 
 export const metadata: Metadata = { title: "Your request", robots: { index: false, follow: false } };
 export const dynamic = "force-dynamic";
@@ -12,7 +13,7 @@ export default async function MyRequestPage({ params }: { params: Promise<{ id: 
   const { id } = await params;
   const user = await requireSession({ page: `/my-requests/${id}` });
   // Only a request made with the signed-in e-mail opens: the check is in the query.
-  const requestId = /^[0-9a-f-]{36}$/i.test(id) ? await findRequestForViewer({ email: user.email }, id) : null;
+  const requestId = isUuid(id) ? await findRequestForViewer({ email: user.email }, id) : null;
   if (!requestId) notFound();
   const data = await loadRiderStatus(requestId);
   if (!data) notFound();

@@ -1,17 +1,14 @@
 // GET /api/requests/[id] (staff): the request with its versions, messages, photos, sag reports,
 // e-mails and audit trail.
-import { NextResponse } from "next/server";
 import { getRequestDetail } from "@/db/queries/review";
-import { HttpError, withErrors } from "@/lib/api/respond";
-import { requireRole } from "@/lib/auth/guard";
+import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import { requestIdFrom, type IdContext } from "@/lib/review/route-input";
+import { NotFoundError } from "@/lib/errors";
 
 export const dynamic = "force-dynamic";
 
-export const GET = withErrors(async (request: Request, context: IdContext) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
-  const detail = await getRequestDetail(await requestIdFrom(context));
-  if (!detail) throw new HttpError(404, "No such request.");
-  return NextResponse.json(detail);
+export const GET = route({ access: STAFF_ROLES, params: idParams, notFound: "No such request." }, async ({ params }) => {
+  const detail = await getRequestDetail(params.id);
+  if (!detail) throw new NotFoundError("No such request.");
+  return json(detail);
 });

@@ -1,30 +1,28 @@
 // GET /api/uploads/:id[?token=]: a rider's photo, only to staff or to that request's rider (status
 // token or e-mail sign-in). Served with the type sniffed at upload, never the rider's file name.
-import { z } from "zod";
 import { findUploadForViewer, type RiderViewer } from "@/db/queries/status";
-import { HttpError, withErrors } from "@/lib/api/respond";
-import { AuthError, getSessionUser, publicRoute } from "@/lib/auth/guard";
-import { STAFF_ROLES } from "@/lib/auth/roles";
+import { idParams, route } from "@/lib/api/route";
+import { AuthError, getSessionUser } from "@/lib/auth/guard";
+import { isStaff } from "@/lib/auth/roles";
+import { NotFoundError } from "@/lib/errors";
 import { PHOTO_TYPES, readUpload, type PhotoContentType } from "@/lib/storage";
 
 export const dynamic = "force-dynamic";
 
-const uuid = z.uuid();
-
 // Public on purpose: the status token is the rider's credential; otherwise a session is required.
-export const GET = publicRoute(
-  withErrors(async (request: Request, context: { params: Promise<{ id: string }> }) => {
-    const { id } = await context.params;
+export const GET = route(
+  { access: "public", params: idParams, notFound: "No such photo." },
+  async ({ request, params: { id } }) => {
     const token = new URL(request.url).searchParams.get("token");
     let viewer: RiderViewer | "staff";
     if (token) viewer = { token };
     else {
       const user = await getSessionUser(request.headers);
       if (!user) throw new AuthError(401);
-      viewer = (STAFF_ROLES as readonly string[]).includes(user.role) ? "staff" : { email: user.email };
+      viewer = isStaff(user.role) ? "staff" : { email: user.email };
     }
-    const upload = uuid.safeParse(id).success ? await findUploadForViewer(id, viewer) : null;
-    if (!upload) throw new HttpError(404, "No such photo.");
+    const upload = await findUploadForViewer(id, viewer);
+    if (!upload) throw new NotFoundError("No such photo.");
     // The type sniffed at upload; anything else (an old or tampered row) is a download, never rendered.
     const isPhoto = upload.contentType in PHOTO_TYPES;
     const type = isPhoto ? (upload.contentType as PhotoContentType) : "application/octet-stream";
@@ -33,7 +31,7 @@ export const GET = publicRoute(
     try {
       bytes = await readUpload(upload.storageKey);
     } catch (error) {
-      if ((error as { code?: string }).code === "ENOENT") throw new HttpError(404, "The photo's file is missing from storage.");
+      if ((error as { code?: string }).code === "ENOENT") throw new NotFoundError("The photo's file is missing from storage.");
       throw error;
     }
     return new Response(new Uint8Array(bytes), {
@@ -46,5 +44,5 @@ export const GET = publicRoute(
         "Content-Security-Policy": "default-src 'none'; img-src 'self'; sandbox",
       },
     });
-  }),
+  },
 );

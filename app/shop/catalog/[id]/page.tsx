@@ -1,13 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { z } from "zod";
 import { BikeActions } from "@/components/catalog/bike-actions";
 import { BikeForm } from "@/components/catalog/bike-form";
 import { getBikeModel } from "@/db/queries/bikes";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import type { BikeSpecInput } from "@/lib/sizing";
+import { formatDay } from "@/lib/format";
+import { isUuid } from "@/lib/validations/id";
 
 export const metadata: Metadata = { title: "Bike model" };
 export const dynamic = "force-dynamic";
@@ -15,7 +15,7 @@ export const dynamic = "force-dynamic";
 export default async function BikePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireRole(STAFF_ROLES, { page: `/shop/catalog/${id}` });
-  if (!z.uuid().safeParse(id).success) notFound();
+  if (!isUuid(id)) notFound();
   const model = await getBikeModel(id);
   if (!model) notFound();
   return (
@@ -32,7 +32,7 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
       ) : null}
       {model.retiredAt ? (
         <p className="rounded-lg bg-stone-100 p-3 text-sm">
-          Retired on {model.retiredAt.toISOString().slice(0, 10)}: riders no longer see it in the picker; requests that used it
+          Retired on {formatDay(model.retiredAt)}: riders no longer see it in the picker; requests that used it
           still show it.
         </p>
       ) : null}
@@ -42,7 +42,7 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
       <BikeForm
         key={model.updatedAt.toISOString()}
         id={model.id}
-        initial={{ name: model.name, slug: model.slug, bikeClass: model.bikeClass, yearFrom: model.yearFrom, yearTo: model.yearTo, notes: model.notes, spec: model.spec as BikeSpecInput }}
+        initial={{ name: model.name, slug: model.slug, bikeClass: model.bikeClass, yearFrom: model.yearFrom, yearTo: model.yearTo, notes: model.notes, spec: model.spec }}
       />
     </div>
   );

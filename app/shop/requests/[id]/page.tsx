@@ -11,21 +11,20 @@ import { VersionView } from "@/components/review/version-view";
 import { AssignForm, WorkflowActions } from "@/components/review/workflow-actions";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getRequestDetail, listStaffMembers } from "@/db/queries/review";
-import { startReview } from "@/db/queries/workflow";
+import { startReview } from "@/lib/review/workflow";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
-import type { Recommendation, SetupOverrides, SizingInput } from "@/lib/sizing";
+import { formatDay } from "@/lib/format";
+import { isUuid } from "@/lib/validations/id";
 
 export const metadata: Metadata = { title: "Request" };
 export const dynamic = "force-dynamic";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeZone: "UTC" });
 
 export default async function RequestPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
   const { id } = await params;
   const user = await requireRole(STAFF_ROLES, { page: `/shop/requests/${id}` });
-  if (!UUID.test(id)) notFound();
+  if (!isUuid(id)) notFound();
   let detail = await getRequestDetail(id);
   if (!detail) notFound();
   // A tuner opening a new request starts its review (audited like any status change).
@@ -48,9 +47,9 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
           <StatusBadge status={detail.status} />
         </div>
         <p className="text-stone-700">
-          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {day.format(detail.createdAt)}
+          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {formatDay(detail.createdAt)}
         </p>
-        {shown ? <CalibrationNote output={shown.output as Recommendation} /> : null}
+        {shown ? <CalibrationNote output={shown.output} /> : null}
         {detail.status === "declined" && detail.declineReason ? (
           <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm"><span className="font-semibold">Declined:</span> {detail.declineReason}</p>
         ) : null}
@@ -76,11 +75,11 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         <RecommendationEditor
           key={shown.version}
           requestId={id}
-          input={shown.input as SizingInput}
+          input={shown.input}
           latest={{
             version: shown.version,
             state: shown.state,
-            overrides: (shown.overrides ?? {}) as SetupOverrides,
+            overrides: shown.overrides ?? {},
             notesForRider: shown.notesForRider,
             internalNotes: shown.internalNotes,
           }}
@@ -89,8 +88,8 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         <VersionView
           version={shown.version}
           state={shown.state}
-          input={shown.input as SizingInput}
-          output={shown.output as Recommendation}
+          input={shown.input}
+          output={shown.output}
           notesForRider={shown.notesForRider}
           internalNotes={shown.internalNotes}
         />

@@ -1,22 +1,19 @@
 // PUT /api/shop/stock/[id]: change a spring line. DELETE: remove it from the shelf list.
-import { NextResponse } from "next/server";
 import { deleteSpringStock, updateSpringStock } from "@/db/queries/stock";
-import { HttpError, withErrors } from "@/lib/api/respond";
-import { requireRole } from "@/lib/auth/guard";
+import { idParams, json, route } from "@/lib/api/route";
 import { STAFF_ROLES } from "@/lib/auth/roles";
+import { NotFoundError } from "@/lib/errors";
 import { springStockSchema } from "@/lib/validations/stock";
-import { jsonBody, uuidParam, type IdContext } from "../../_lib/body";
 
-export const PUT = withErrors(async (request: Request, { params }: IdContext) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
-  const id = await uuidParam(params, "spring");
-  const row = await updateSpringStock(id, springStockSchema.parse(await jsonBody(request)));
-  if (!row) throw new HttpError(404, "No such spring.");
-  return NextResponse.json(row);
+const springRoute = { access: STAFF_ROLES, params: idParams, notFound: "No such spring." } as const;
+
+export const PUT = route({ ...springRoute, body: springStockSchema }, async ({ params, body }) => {
+  const row = await updateSpringStock(params.id, body);
+  if (!row) throw new NotFoundError("No such spring.");
+  return json(row);
 });
 
-export const DELETE = withErrors(async (request: Request, { params }: IdContext) => {
-  await requireRole(STAFF_ROLES, { headers: request.headers });
-  if (!(await deleteSpringStock(await uuidParam(params, "spring")))) throw new HttpError(404, "No such spring.");
+export const DELETE = route(springRoute, async ({ params }) => {
+  if (!(await deleteSpringStock(params.id))) throw new NotFoundError("No such spring.");
   return new Response(null, { status: 204 });
 });

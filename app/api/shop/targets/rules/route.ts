@@ -1,25 +1,19 @@
 // PUT /api/shop/targets/rules { rules }: replace the clicker rules table (admin); DELETE: back to
 // the engine's default rules.
-import { NextResponse } from "next/server";
 import { replaceClickerRules } from "@/db/queries/targets";
-import { withErrors } from "@/lib/api/respond";
-import { requireRole } from "@/lib/auth/guard";
+import { json, route } from "@/lib/api/route";
 import { sizingDefaults } from "@/lib/sizing";
 import { clickerRulesSchema } from "@/lib/validations/targets";
-import { jsonBody } from "../../_lib/body";
 import { auditShop } from "../../_lib/audit";
 
-export const PUT = withErrors(async (request: Request) => {
-  const user = await requireRole(["admin"], { headers: request.headers });
-  const { rules } = clickerRulesSchema.parse(await jsonBody(request));
+export const PUT = route({ access: ["admin"], body: clickerRulesSchema }, async ({ user, body: { rules } }) => {
   await replaceClickerRules(rules);
   await auditShop(user, "clicker-rules.saved", { count: rules.length });
-  return NextResponse.json({ rules });
+  return json({ rules });
 });
 
-export const DELETE = withErrors(async (request: Request) => {
-  const user = await requireRole(["admin"], { headers: request.headers });
+export const DELETE = route({ access: ["admin"] }, async ({ user }) => {
   await replaceClickerRules(sizingDefaults.DEFAULT_CLICKER_RULES);
   await auditShop(user, "clicker-rules.reset");
-  return NextResponse.json({ rules: sizingDefaults.DEFAULT_CLICKER_RULES });
+  return json({ rules: sizingDefaults.DEFAULT_CLICKER_RULES });
 });

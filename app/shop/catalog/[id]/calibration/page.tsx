@@ -1,7 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { z } from "zod";
 import { CalibrationActions } from "@/components/calibration/calibration-actions";
 import { ParametersTable } from "@/components/calibration/parameters-table";
 import { ReportsTable } from "@/components/calibration/reports-table";
@@ -9,6 +8,7 @@ import { SagCharts } from "@/components/calibration/sag-charts";
 import { getBikeModel } from "@/db/queries/bikes";
 import { requireRole } from "@/lib/auth/guard";
 import { getCalibrationPage } from "@/lib/calibration/service";
+import { isUuid } from "@/lib/validations/id";
 import { MIN_CALIBRATION_REPORTS } from "@/lib/sizing";
 
 export const metadata: Metadata = { title: "Calibration from sag reports" };
@@ -19,7 +19,7 @@ const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeStyle: "
 export default async function CalibrationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   await requireRole(["admin"], { page: `/shop/catalog/${id}/calibration` });
-  if (!z.uuid().safeParse(id).success) notFound();
+  if (!isUuid(id)) notFound();
   const model = await getBikeModel(id);
   if (!model) notFound();
   const { summary, comparisons, history } = await getCalibrationPage(id);

@@ -1,40 +1,38 @@
 // Saving a tuner's adjustments as a draft version. The server recomputes the recommendation from the
 // version's stored input and the overrides (never trusting figures from the browser); a draft is
 // updated in place, an approved latest version gets a new draft after it ("revising after approval").
-import { eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { recommendationVersions } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { recordAudit } from "@/db/queries/audit";
+import { insertVersion, updateDraftVersion } from "@/db/queries/review-steps";
+import { inTransaction } from "@/db/queries/transaction";
+import { getLatestVersion } from "@/db/queries/versions";
+import { ConflictError, ValidationError } from "@/lib/errors";
 import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
 import { ALLOWED_FROM } from "@/lib/review/transitions";
 import { SizingInputError, evaluateSetup, type SetupOverrides, type SizingInput } from "@/lib/sizing";
 import type { SaveRecommendationBody } from "@/lib/validations/review";
-import { recordAudit } from "./audit";
-import { getLatestVersion } from "./versions";
 import { assertCanStart, auditBy, lockRequest, moveStatus, type Actor } from "./workflow";
 
-function recompute(input: unknown, overrides: SetupOverrides) {
+function recompute(input: SizingInput, overrides: SetupOverrides) {
   try {
-    return evaluateSetup(input as SizingInput, overrides);
+    return evaluateSetup(input, overrides);
   } catch (error) {
     if (!(error instanceof SizingInputError)) throw error;
     const fields = Object.fromEntries(error.issues.map((i) => [i.path, i.message]));
-    throw new HttpError(400, "These figures cannot be used.", fields);
+    throw new ValidationError("These figures cannot be used.", fields);
   }
 }
 
 export async function saveRecommendationDraft(requestId: string, body: SaveRecommendationBody, actor: Actor) {
-  const db = await getDb();
   const overrides = compactOverrides(body.overrides);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("save", req.status);
     const latest = await getLatestVersion(requestId, tx);
-    if (!latest) throw new HttpError(409, "This request has no recommendation to adjust yet.");
+    if (!latest) throw new ConflictError("This request has no recommendation to adjust yet.");
     if (latest.version !== body.basedOnVersion)
-      throw new HttpError(409, `Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
+      throw new ConflictError(`Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
     const output = recompute(latest.input, overrides);
-    const changes = diffOverrides(latest.overrides as SetupOverrides, overrides);
+    const changes = diffOverrides(latest.overrides, overrides);
     const notesForRider = body.notesForRider || null;
     const internalNotes = body.internalNotes || null;
     const notesChanged = {
@@ -44,13 +42,10 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     const now = new Date();
     let version = latest.version;
     if (latest.state === "draft") {
-      await tx
-        .update(recommendationVersions)
-        .set({ output, overrides, notesForRider, internalNotes, engineVersion: output.engineVersion, updatedAt: now })
-        .where(eq(recommendationVersions.id, latest.id));
+      await updateDraftVersion(tx, latest.id, { output, overrides, notesForRider, internalNotes, engineVersion: output.engineVersion });
     } else {
       version = latest.version + 1;
-      await tx.insert(recommendationVersions).values({
+      await insertVersion(tx, {
         requestId,
         version,
         state: "draft",

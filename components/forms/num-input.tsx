@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { describedByFor } from "@/components/ui/field";
+import { cn } from "@/components/ui/cn";
 
 interface NumInputProps {
   id: string;
@@ -27,7 +28,7 @@ export function NumInput({ id, label, value, onChange, error, hint, step = "any"
   }
   const describedBy = describedByFor(id, hint, error);
   return (
-    <div className={`flex flex-col gap-1 ${className}`}>
+    <div className={cn("flex flex-col gap-1", className)}>
       <label htmlFor={id} className="text-sm font-medium text-stone-800">{label}</label>
       <input
         id={id}

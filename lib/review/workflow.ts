@@ -1,35 +1,37 @@
-// The tuner's workflow steps on a request. Each runs in one transaction: the request row is locked,
-// the status change is a guarded `update … where status in (allowed)` (so a race cannot approve
-// twice), and the audit events are written in the same transaction. Rider e-mails are queued in that
+// The tuner's workflow steps on a request (the review service). Each runs in one transaction: the
+// request row is locked, the status change is a guarded update (so a race cannot approve twice),
+// and the audit events are written in the same transaction. Rider e-mails are queued in that
 // transaction too (notifyRider, the outbox) and sent by the outbox worker once it has committed.
-import { and, eq, inArray } from "drizzle-orm";
-import { getDb, type Tx } from "@/db/client";
-import { recommendationVersions, requestMessages, setupRequests, type RequestStatus } from "@/db/schema";
-import { HttpError } from "@/lib/api/respond";
+import { recordAudit, type AuditInsert } from "@/db/queries/audit";
+import {
+  approveDraftVersion,
+  insertTunerMessage,
+  lockRequest as lockRequestRow,
+  moveStatusIf,
+  setAssignedTuner,
+  supersedeApproved,
+} from "@/db/queries/review-steps";
+import { inTransaction, type Tx } from "@/db/queries/transaction";
+import { getLatestVersion, hasEarlierApproval } from "@/db/queries/versions";
+import type { RequestStatus } from "@/db/schema";
 import type { SessionUser } from "@/lib/auth/guard";
+import { ConflictError, NotFoundError } from "@/lib/errors";
 import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { ALLOWED_FROM, conflictMessage, type WorkflowAction } from "@/lib/review/transitions";
-import { recordAudit, type AuditInsert } from "./audit";
-import { getLatestVersion, hasEarlierApproval } from "./versions";
 
-export type { Tx };
 export type Actor = Pick<SessionUser, "id" | "name">;
 
 /** Locks the request row for this transaction; 404 if there is none. */
 export async function lockRequest(tx: Tx, requestId: string) {
-  const [row] = await tx
-    .select({ id: setupRequests.id, status: setupRequests.status, assignedTunerId: setupRequests.assignedTunerId })
-    .from(setupRequests)
-    .where(eq(setupRequests.id, requestId))
-    .for("update");
-  if (!row) throw new HttpError(404, "No such request.");
+  const row = await lockRequestRow(tx, requestId);
+  if (!row) throw new NotFoundError("No such request.");
   return row;
 }
 
 /** Throws 409 with the reason when `action` may not start from `status`. */
 export function assertCanStart(action: WorkflowAction, status: RequestStatus): void {
-  if (!ALLOWED_FROM[action].includes(status)) throw new HttpError(409, conflictMessage(action, status));
+  if (!ALLOWED_FROM[action].includes(status)) throw new ConflictError(conflictMessage(action, status));
 }
 
 export function auditBy(actor: Actor, requestId: string, action: string, detail: Record<string, unknown>): AuditInsert {
@@ -47,21 +49,16 @@ export async function moveStatus(
   from: readonly RequestStatus[],
   to: RequestStatus,
   actor: Actor,
-  extra: Partial<typeof setupRequests.$inferInsert> = {},
+  extra: { declineReason?: string } = {},
 ): Promise<AuditInsert[]> {
-  const updated = await tx
-    .update(setupRequests)
-    .set({ status: to, updatedAt: new Date(), ...extra })
-    .where(and(eq(setupRequests.id, requestId), eq(setupRequests.status, current), inArray(setupRequests.status, [...from])))
-    .returning({ id: setupRequests.id });
-  if (updated.length === 0) throw new HttpError(409, "The request changed meanwhile. Reload and try again.");
+  if (!(await moveStatusIf(tx, requestId, current, from, to, extra)))
+    throw new ConflictError("The request changed meanwhile. Reload and try again.");
   return current === to ? [] : [auditBy(actor, requestId, "request.status_changed", { from: current, to })];
 }
 
 /** A tuner opened a new request: it is now being reviewed. No-op for any other status. */
 export async function startReview(requestId: string, actor: Actor): Promise<void> {
-  const db = await getDb();
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     if (req.status !== "submitted") return;
     await recordAudit(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor), tx);
@@ -69,12 +66,11 @@ export async function startReview(requestId: string, actor: Actor): Promise<void
 }
 
 export async function askRider(requestId: string, question: string, actor: Actor) {
-  const db = await getDb();
-  const mail = await db.transaction(async (tx) => {
+  const mail = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("ask", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.ask, "waiting_for_rider", actor);
-    await tx.insert(requestMessages).values({ requestId, author: "tuner", authorUserId: actor.id, body: question });
+    await insertTunerMessage(tx, requestId, actor.id, question);
     events.push(auditBy(actor, requestId, "request.question_asked", { question }));
     await recordAudit(events, tx);
     return notifyRider(tx, requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
@@ -84,8 +80,7 @@ export async function askRider(requestId: string, question: string, actor: Actor
 }
 
 export async function declineRequest(requestId: string, reason: string, actor: Actor) {
-  const db = await getDb();
-  const mail = await db.transaction(async (tx) => {
+  const mail = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("decline", req.status);
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.decline, "declined", actor, { declineReason: reason });
@@ -98,16 +93,13 @@ export async function declineRequest(requestId: string, reason: string, actor: A
 }
 
 export async function assignRequest(requestId: string, tuner: { id: string; name: string } | null, actor: Actor) {
-  const db = await getDb();
-  await db.transaction(async (tx) => {
+  await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("assign", req.status);
-    const events: AuditInsert[] = [];
-    await tx
-      .update(setupRequests)
-      .set({ assignedTunerId: tuner?.id ?? null, updatedAt: new Date() })
-      .where(eq(setupRequests.id, requestId));
-    events.push(auditBy(actor, requestId, "request.assigned", { from: req.assignedTunerId, to: tuner?.id ?? null, toName: tuner?.name ?? null }));
+    await setAssignedTuner(tx, requestId, tuner?.id ?? null);
+    const events: AuditInsert[] = [
+      auditBy(actor, requestId, "request.assigned", { from: req.assignedTunerId, to: tuner?.id ?? null, toName: tuner?.name ?? null }),
+    ];
     if (req.status === "submitted") events.push(...(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor)));
     await recordAudit(events, tx);
   });
@@ -118,40 +110,30 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
  * and the rider gets the sheet link (the PDF is rendered on demand by the sheet route).
  */
 export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number, acknowledged: readonly string[] = []) {
-  const db = await getDb();
-  const { version, revised, mail } = await db.transaction(async (tx) => {
+  const { version, revised, mail } = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("approve", req.status);
     const latest = await getLatestVersion(requestId, tx);
-    if (!latest) throw new HttpError(409, "There is no recommendation to approve yet.");
+    if (!latest) throw new ConflictError("There is no recommendation to approve yet.");
     if (latest.state !== "draft")
-      throw new HttpError(409, `Version ${latest.version} is already approved. Save a revision first, then approve it.`);
+      throw new ConflictError(`Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
-      throw new HttpError(409, `Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+      throw new ConflictError(`Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
     // Sanity warnings (lib/sizing/README.md, "Sanity limits") hold approval until the tuner acknowledges each.
     const missing = acknowledgementCodes(latest.output).filter((c) => !acknowledged.includes(c));
     if (missing.length)
-      throw new HttpError(409, `Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
+      throw new ConflictError(`Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
         acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
       });
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
-    const superseded = await tx
-      .update(recommendationVersions)
-      .set({ state: "superseded", updatedAt: new Date() })
-      .where(and(eq(recommendationVersions.requestId, requestId), eq(recommendationVersions.state, "approved")))
-      .returning({ version: recommendationVersions.version });
-    const now = new Date();
-    const frozen = await tx
-      .update(recommendationVersions)
-      .set({ state: "approved", approvedById: actor.id, approvedAt: now, updatedAt: now })
-      .where(and(eq(recommendationVersions.id, latest.id), eq(recommendationVersions.state, "draft")))
-      .returning({ id: recommendationVersions.id });
-    if (frozen.length === 0) throw new HttpError(409, "This version was approved meanwhile. Reload the request.");
+    const superseded = await supersedeApproved(tx, requestId);
+    if (!(await approveDraftVersion(tx, latest.id, actor.id)))
+      throw new ConflictError("This version was approved meanwhile. Reload the request.");
     const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.approve, "approved", actor);
     events.push(
       auditBy(actor, requestId, "recommendation.approved", {
         version: latest.version,
-        superseded: superseded.map((s) => s.version),
+        superseded,
         // Approving over a critical warning is the tuner's call (the screen asks to confirm); keep it on record.
         criticalWarnings: criticalCodes(latest.output),
         acknowledgedWarnings: acknowledgementCodes(latest.output),
