@@ -35,9 +35,11 @@ describe("notifyRider", () => {
 
   it("links the approved sheet by version with the rider's token", async () => {
     await notifyRider(await getDb(), requestId, { kind: "sheet-ready", version: 2, tunerName: "Teo", revised: true });
-    await drainOutbox();
-    const mail = app.sent.at(-1)!;
-    expect(mail.subject).toBe("Revised setup sheet (version 2) for request 9");
+    // PostgreSQL stamps the queued row in microseconds: a JS "now" in the same millisecond can fall
+    // before it, so drain a second ahead; and find the message by subject, not by position.
+    await drainOutbox({ now: new Date(Date.now() + 1000) });
+    const mail = app.sent.find((m) => m.subject === "Revised setup sheet (version 2) for request 9")!;
+    expect(mail).toBeDefined();
     const sheet = new RegExp(`/api/requests/${requestId}/sheet\\?version=2&token=([A-Za-z0-9_-]+)`).exec(mail.text);
     expect(sheet).toBeTruthy();
     expect(await findRequestIdByStatusToken(sheet![1]!)).toBe(requestId);
