@@ -198,7 +198,9 @@ function serialised<T>(run: () => Promise<T>): Promise<T> {
 export function drainOutbox(options: { now?: Date; settle?: boolean } = {}): Promise<DrainSummary> {
   return serialised(async () => {
     const summary: DrainSummary = { sent: 0, retried: 0, failed: 0 };
-    let now = options.now ?? new Date();
+    // PostgreSQL stamps rows in microseconds, a JS Date in milliseconds: one millisecond ahead, a row
+    // queued in this very millisecond counts as due.
+    let now = options.now ?? new Date(Date.now() + 1);
     await drainDue(now, summary);
     while (options.settle) {
       const next = await nextEmailDueAt();
