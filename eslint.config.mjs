@@ -22,16 +22,28 @@ const layers = [
   layer(
     ["lib/sizing/**"],
     [
-      { group: ["@/*", "!@/lib/sizing", "!@/lib/sizing/*"], message: "lib/sizing imports nothing of the app (see lib/sizing/README.md)." },
-      { group: ["next", "next/*", "react", "react-dom", "drizzle-orm", "drizzle-orm/*"], message: "lib/sizing is pure TypeScript." },
+      {
+        group: ["@/*", "!@/lib/sizing", "!@/lib/sizing/*"],
+        message: "lib/sizing imports nothing of the app (see lib/sizing/README.md).",
+      },
+      {
+        group: ["next", "next/*", "react", "react-dom", "drizzle-orm", "drizzle-orm/*"],
+        message: "lib/sizing is pure TypeScript.",
+      },
     ],
   ),
   // Data access: rows in, rows out; no HTTP errors, no e-mail, no services.
   layer(
     ["db/**"],
     [
-      { group: ["@/lib/api", "@/lib/api/*"], message: "db never imports lib/api: return null/false and let the service decide." },
-      { group: ["@/lib/mail", "@/lib/mail/*", ...SERVICES], message: "db never imports services or e-mail: services call db/queries." },
+      {
+        group: ["@/lib/api", "@/lib/api/*"],
+        message: "db never imports lib/api: return null/false and let the service decide.",
+      },
+      {
+        group: ["@/lib/mail", "@/lib/mail/*", ...SERVICES],
+        message: "db never imports services or e-mail: services call db/queries.",
+      },
       { group: ["@/app/*", "@/components/*", "next", "next/*"], message: "db knows nothing of pages or Next." },
     ],
     // The seed scripts sit above everything: they create accounts and requests through the services.
@@ -41,7 +53,10 @@ const layers = [
   layer(
     ["lib/validations/**"],
     [
-      { group: ["@/lib/api", "@/lib/api/*", "@/db/*", "@/lib/mail", "@/lib/mail/*", ...SERVICES], message: "lib/validations is shared with the browser: no database, API or service imports." },
+      {
+        group: ["@/lib/api", "@/lib/api/*", "@/db/*", "@/lib/mail", "@/lib/mail/*", ...SERVICES],
+        message: "lib/validations is shared with the browser: no database, API or service imports.",
+      },
     ],
   ),
   // Other lib modules serve pages and routes, never the reverse.
@@ -58,8 +73,15 @@ const layers = [
         "error",
         {
           patterns: [
-            { group: ["@/db/*"], allowTypeImports: true, message: "Components never import db at run time: get rows from the page or the API." },
-            { group: ["@/app/*", "@/lib/api/*", ...SERVICES], message: "Components call services through the API client, never directly." },
+            {
+              group: ["@/db/*"],
+              allowTypeImports: true,
+              message: "Components never import db at run time: get rows from the page or the API.",
+            },
+            {
+              group: ["@/app/*", "@/lib/api/*", ...SERVICES],
+              message: "Components call services through the API client, never directly.",
+            },
           ],
         },
       ],

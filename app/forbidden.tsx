@@ -7,7 +7,10 @@ export default function Forbidden() {
       <p className="mt-2 text-stone-700">
         This part of Sagwise is for shop staff. Riders find their requests under “My requests”.
       </p>
-      <Link href="/my-requests" className="mt-6 inline-flex min-h-11 items-center font-semibold text-pine-700 underline">
+      <Link
+        href="/my-requests"
+        className="mt-6 inline-flex min-h-11 items-center font-semibold text-pine-700 underline"
+      >
         Go to my requests
       </Link>
     </main>

@@ -64,7 +64,11 @@ async function measure(): Promise<Record<string, number>> {
 }
 
 const client = await createPglite();
-const handle: DatabaseHandle = { db: drizzle({ client, schema }) as unknown as DatabaseHandle["db"], kind: "pglite", close: () => client.close() };
+const handle: DatabaseHandle = {
+  db: drizzle({ client, schema }) as unknown as DatabaseHandle["db"],
+  kind: "pglite",
+  close: () => client.close(),
+};
 await applyMigrations(handle);
 installTestDatabase(handle);
 
@@ -74,5 +78,7 @@ await insert(100, 10_000);
 const large = await measure();
 console.log(`${"query".padEnd(22)} ${"100 rows".padStart(10)} ${"10,000 rows".padStart(12)} ${"ratio".padStart(7)}`);
 for (const name of Object.keys(SHAPES))
-  console.log(`${name.padEnd(22)} ${small[name]!.toFixed(2).padStart(8)}ms ${large[name]!.toFixed(2).padStart(10)}ms ${(large[name]! / small[name]!).toFixed(1).padStart(6)}×`);
+  console.log(
+    `${name.padEnd(22)} ${small[name]!.toFixed(2).padStart(8)}ms ${large[name]!.toFixed(2).padStart(10)}ms ${(large[name]! / small[name]!).toFixed(1).padStart(6)}×`,
+  );
 await closeDatabase();

@@ -14,7 +14,11 @@ import { renderSetupSheet } from "../lib/pdf/render";
 registerSheetFonts();
 const coil = demoSheetData();
 const air = demoSheetData({ airFork: true, draft: true, paperSize: "LETTER" });
-const oneLine = h(Document, null, h(Page, { size: "A4" }, h(Text, { style: { fontFamily: SHEET_FONT_STACK } }, "Sagwise")));
+const oneLine = h(
+  Document,
+  null,
+  h(Page, { size: "A4" }, h(Text, { style: { fontFamily: SHEET_FONT_STACK } }, "Sagwise")),
+);
 
 async function run(label: string, fn: () => Promise<unknown>, runs = 15) {
   for (let i = 0; i < 3; i++) await fn(); // warm-up: fonts parsed, JIT
@@ -27,12 +31,18 @@ async function run(label: string, fn: () => Promise<unknown>, runs = 15) {
   times.sort((x, y) => x - y);
   const median = times[Math.floor(times.length / 2)]!;
   const p90 = times[Math.floor(times.length * 0.9)]!;
-  console.log(`${label.padEnd(40)} median ${median.toFixed(1).padStart(8)} ms   p90 ${p90.toFixed(1).padStart(8)} ms   (${runs} runs)`);
+  console.log(
+    `${label.padEnd(40)} median ${median.toFixed(1).padStart(8)} ms   p90 ${p90.toFixed(1).padStart(8)} ms   (${runs} runs)`,
+  );
   return median;
 }
 
 console.log(`setup sheet benchmark: node ${process.version}, one thread`);
-const base = await run("baseline: one-line react-pdf document", () => renderToBuffer(oneLine as Parameters<typeof renderToBuffer>[0]));
+const base = await run("baseline: one-line react-pdf document", () =>
+  renderToBuffer(oneLine as Parameters<typeof renderToBuffer>[0]),
+);
 const sheet = await run("setup sheet, coil fork, A4", () => renderSetupSheet(coil));
 await run("setup sheet, air fork, Letter, draft", () => renderSetupSheet(air));
-console.log(`one sheet is ${(sheet / base).toFixed(1)}× the baseline; median ${sheet.toFixed(0)} ms, target ≤ 300 ms: ${sheet <= 300 ? "met" : "NOT met"}`);
+console.log(
+  `one sheet is ${(sheet / base).toFixed(1)}× the baseline; median ${sheet.toFixed(0)} ms, target ≤ 300 ms: ${sheet <= 300 ? "met" : "NOT met"}`,
+);

@@ -34,7 +34,9 @@ function run(label: string, fn: (i: SizingInput) => unknown, seconds = 2) {
   const median = times[Math.floor(times.length / 2)]!;
   const p95 = times[Math.floor(times.length * 0.95)]!;
   const perSec = (n / total) * 1000;
-  console.log(`${label.padEnd(34)} ${perSec.toFixed(0).padStart(9)} /s   median ${(median * 1000).toFixed(1).padStart(8)} µs   p95 ${(p95 * 1000).toFixed(1).padStart(8)} µs   (${n} runs)`);
+  console.log(
+    `${label.padEnd(34)} ${perSec.toFixed(0).padStart(9)} /s   median ${(median * 1000).toFixed(1).padStart(8)} µs   p95 ${(p95 * 1000).toFixed(1).padStart(8)} µs   (${n} runs)`,
+  );
   return { perSec, median };
 }
 
@@ -42,7 +44,13 @@ console.log(`sizing benchmark: ${inputs.length} fixed inputs, node ${process.ver
 const base = run("baseline: JSON round-trip of input", (i) => JSON.parse(JSON.stringify(i)));
 const rec = run("recommend (full)", (i) => recommend(i));
 const ov = run("evaluateSetup with overrides", (i) =>
-  evaluateSetup(i, { rear: { preloadMm: 10 }, front: { oilLevelMm: i.bike.fork.stockOilLevelMm }, clickers: { forkRebound: 10 } }),
+  evaluateSetup(i, {
+    rear: { preloadMm: 10 },
+    front: { oilLevelMm: i.bike.fork.stockOilLevelMm },
+    clickers: { forkRebound: 10 },
+  }),
 );
-console.log(`recommend is ${(base.perSec / rec.perSec).toFixed(1)}× the baseline's time per call; target ≥ 2000/s: ${rec.perSec >= 2000 ? "met" : "NOT met"}`);
+console.log(
+  `recommend is ${(base.perSec / rec.perSec).toFixed(1)}× the baseline's time per call; target ≥ 2000/s: ${rec.perSec >= 2000 ? "met" : "NOT met"}`,
+);
 console.log(`evaluateSetup median ${(ov.median * 1000).toFixed(0)} µs per keystroke`);

@@ -86,7 +86,12 @@ export async function acquireDataDirLock(dataDir: string, options: LockOptions =
           process.exit(1);
         },
       });
-      const owner: LockOwner = { pid: process.pid, host: hostname(), since: new Date().toISOString(), command: process.argv.slice(1).join(" ").slice(0, 120) || "node" };
+      const owner: LockOwner = {
+        pid: process.pid,
+        host: hostname(),
+        since: new Date().toISOString(),
+        command: process.argv.slice(1).join(" ").slice(0, 120) || "node",
+      };
       writeFileSync(ownerPath, JSON.stringify(owner));
       return async () => {
         rmSync(ownerPath, { force: true });

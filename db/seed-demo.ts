@@ -38,12 +38,22 @@ import {
 import { requestAnswersSchema } from "@/lib/validations/request";
 import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
-import { DEMO_CALIBRATION_TRUTH, DEMO_REQUESTS, DEMO_SHOP, DEMO_STAFF, stableUuid, type DemoRequest } from "./seed-data";
+import {
+  DEMO_CALIBRATION_TRUTH,
+  DEMO_REQUESTS,
+  DEMO_SHOP,
+  DEMO_STAFF,
+  stableUuid,
+  type DemoRequest,
+} from "./seed-data";
 
 export { stableUuid };
 
 async function seedShop(db: AppDb) {
-  await db.insert(shopSettings).values({ id: 1, ...DEMO_SHOP }).onConflictDoNothing();
+  await db
+    .insert(shopSettings)
+    .values({ id: 1, ...DEMO_SHOP })
+    .onConflictDoNothing();
 }
 
 async function seedStaff(): Promise<Map<string, { id: string; name: string }>> {
@@ -139,17 +149,32 @@ function demoSagReading(input: SizingInput, output: Recommendation) {
     { ...input, bike: { ...input.bike, calibration: { ...truth, reports: 1 } } },
     {
       rear: { rateNmm: output.rear.chosenRate.nMm, preloadMm: output.rear.preloadMm },
-      front: { rateNmm: output.front.chosenRate?.nMm, preloadMm: output.front.preloadMm ?? undefined, oilLevelMm: output.front.oilLevelMm ?? undefined },
+      front: {
+        rateNmm: output.front.chosenRate?.nMm,
+        preloadMm: output.front.preloadMm ?? undefined,
+        oilLevelMm: output.front.oilLevelMm ?? undefined,
+      },
     },
   );
-  const end = (p: { staticSagMm: number; raceSagMm: number }) => ({ static: Math.round(p.staticSagMm), race: Math.round(p.raceSagMm) });
+  const end = (p: { staticSagMm: number; raceSagMm: number }) => ({
+    static: Math.round(p.staticSagMm),
+    race: Math.round(p.raceSagMm),
+  });
   const given = { rear: end(real.rear.predicted), front: end(real.front.predicted) };
   const mm = {
     rear: { freeMm: null, staticMm: given.rear.static, raceMm: given.rear.race },
     front: { freeMm: null, staticMm: given.front.static, raceMm: given.front.race },
   };
   const verdict = Object.fromEntries(
-    (["front", "rear"] as const).map((e) => [e, sagVerdict({ input, recommendation: output, end: e, measured: { staticSagMm: mm[e].staticMm, raceSagMm: mm[e].raceMm } })]),
+    (["front", "rear"] as const).map((e) => [
+      e,
+      sagVerdict({
+        input,
+        recommendation: output,
+        end: e,
+        measured: { staticSagMm: mm[e].staticMm, raceSagMm: mm[e].raceMm },
+      }),
+    ]),
   );
   return { measured: { asGiven: { unit: "mm" as const, ...given }, mm }, verdict };
 }
@@ -244,7 +269,13 @@ async function seedRequest(
         ...demoSagReading(input, output),
         createdAt: reportedAt,
       });
-      events.push({ requestId: id, actorLabel: "rider", action: "sag.reported", detail: { sagReportId, version: 1 }, createdAt: reportedAt });
+      events.push({
+        requestId: id,
+        actorLabel: "rider",
+        action: "sag.reported",
+        detail: { sagReportId, version: 1 },
+        createdAt: reportedAt,
+      });
     }
     await tx.insert(auditEvents).values(events);
     if (demo.question && tuner) {

@@ -11,8 +11,7 @@ export interface RequestDeclinedEmailProps {
   statusUrl: string;
 }
 
-export const subject = ({ requestNumber }: RequestDeclinedEmailProps) =>
-  `About your setup request ${requestNumber}`;
+export const subject = ({ requestNumber }: RequestDeclinedEmailProps) => `About your setup request ${requestNumber}`;
 
 export const demoProps: RequestDeclinedEmailProps = {
   shopName: "Sagwise Demo Suspension",
@@ -31,9 +30,7 @@ export function RequestDeclinedEmail(props: RequestDeclinedEmailProps) {
       heading="We cannot take this request"
       action={{ label: "See your request", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>
-        We looked at your request {props.requestNumber} and cannot set it up as asked:
-      </Text>
+      <Text style={s.paragraph}>We looked at your request {props.requestNumber} and cannot set it up as asked:</Text>
       <Quote>{props.reason}</Quote>
       <Text style={s.paragraph}>Reply to this e-mail or call the shop if you want to talk it through.</Text>
     </RiderEmail>

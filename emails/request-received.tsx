@@ -32,12 +32,12 @@ export function RequestReceivedEmail(props: RequestReceivedEmailProps) {
       action={{ label: "Follow your request", url: props.statusUrl }}
     >
       <Text style={s.paragraph}>
-        We have your request {props.requestNumber} for the {props.bikeLabel}. A tuner will check the proposed
-        springs and settings against your answers, and may ask you a question first.
+        We have your request {props.requestNumber} for the {props.bikeLabel}. A tuner will check the proposed springs
+        and settings against your answers, and may ask you a question first.
       </Text>
       <Text style={s.paragraph}>
-        The link below shows where your request stands. When the setup sheet is approved you can download
-        it there, and later report the sag you measure.
+        The link below shows where your request stands. When the setup sheet is approved you can download it there, and
+        later report the sag you measure.
       </Text>
     </RiderEmail>
   );

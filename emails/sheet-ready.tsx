@@ -46,12 +46,12 @@ export function SheetReadyEmail(props: SheetReadyEmailProps) {
       after={
         <>
           <Text style={s.paragraph}>
-            After fitting the springs, measure your sag and report it on your request page so we can
-            confirm the choice: {props.statusUrl}
+            After fitting the springs, measure your sag and report it on your request page so we can confirm the choice:{" "}
+            {props.statusUrl}
           </Text>
           <Text style={s.small}>
-            Springs and gas-charged shocks store energy. Work to the manufacturer&apos;s service manual and
-            local rules, or have a qualified technician do it, and re-check sag and fasteners before riding.
+            Springs and gas-charged shocks store energy. Work to the manufacturer&apos;s service manual and local rules,
+            or have a qualified technician do it, and re-check sag and fasteners before riding.
           </Text>
         </>
       }

@@ -30,8 +30,8 @@ export function SignInLinkEmail({ url, expiresInMinutes, shopName }: SignInLinkE
         Sign in to see your setup requests
       </Heading>
       <Text style={s.paragraph}>
-        Tap the button to open your requests at {shopName}: their status, the tuner&apos;s questions and
-        your approved setup sheets.
+        Tap the button to open your requests at {shopName}: their status, the tuner&apos;s questions and your approved
+        setup sheets.
       </Text>
       <Text style={s.paragraph}>
         <Button href={url} style={s.button}>
@@ -39,8 +39,8 @@ export function SignInLinkEmail({ url, expiresInMinutes, shopName }: SignInLinkE
         </Button>
       </Text>
       <Text style={s.small}>
-        The link can be used once and stops working after {minutes}. If the button does nothing, copy this
-        address into your browser:
+        The link can be used once and stops working after {minutes}. If the button does nothing, copy this address into
+        your browser:
       </Text>
       <Text style={s.urlText}>{url}</Text>
     </EmailLayout>

@@ -14,8 +14,7 @@ export interface StaffInviteEmailProps {
 const ROLE_WORK: Record<StaffRole, string> = {
   tuner:
     "work the request queue, review and adjust the proposed springs, ask riders questions and approve setup sheets, and keep the bike catalog and spring stock current",
-  admin:
-    "do everything a tuner does, and also manage the team, the shop settings and the setup targets",
+  admin: "do everything a tuner does, and also manage the team, the shop settings and the setup targets",
 };
 
 export function subject({ inviterName, shopName }: StaffInviteEmailProps): string {
@@ -40,8 +39,8 @@ export function StaffInviteEmail({ url, role, inviterName, shopName }: StaffInvi
         You are invited as {role === "admin" ? "an admin" : "a tuner"}
       </Heading>
       <Text style={s.paragraph}>
-        {inviterName} has added you to the {shopName} workspace. As {role === "admin" ? "an admin" : "a tuner"}{" "}
-        you can {ROLE_WORK[role]}.
+        {inviterName} has added you to the {shopName} workspace. As {role === "admin" ? "an admin" : "a tuner"} you can{" "}
+        {ROLE_WORK[role]}.
       </Text>
       <Text style={s.paragraph}>
         <Button href={url} style={s.button}>

@@ -4,8 +4,7 @@
 export type FieldErrors = Record<string, string>;
 
 export type ApiResult<T> =
-  | { ok: true; status: number; data: T }
-  | { ok: false; status: number; error: string; fields: FieldErrors };
+  { ok: true; status: number; data: T } | { ok: false; status: number; error: string; fields: FieldErrors };
 
 export interface CallOptions {
   /** Shown when the server cannot be reached; say what became of the user's input. */
@@ -17,13 +16,21 @@ export interface CallOptions {
 const OFFLINE = "No connection to the server. Your entries are still here: try again.";
 
 /** Calls `url`; a FormData body goes as multipart, anything else as JSON. */
-export async function callApi<T>(url: string, method = "GET", body?: unknown, options: CallOptions = {}): Promise<ApiResult<T>> {
+export async function callApi<T>(
+  url: string,
+  method = "GET",
+  body?: unknown,
+  options: CallOptions = {},
+): Promise<ApiResult<T>> {
   const multipart = typeof FormData !== "undefined" && body instanceof FormData;
   let response: Response;
   try {
     response = await fetch(url, {
       method,
-      headers: body === undefined || multipart ? { accept: "application/json" } : { accept: "application/json", "content-type": "application/json" },
+      headers:
+        body === undefined || multipart
+          ? { accept: "application/json" }
+          : { accept: "application/json", "content-type": "application/json" },
       body: body === undefined ? undefined : multipart ? (body as FormData) : JSON.stringify(body),
     });
   } catch {
@@ -34,12 +41,19 @@ export async function callApi<T>(url: string, method = "GET", body?: unknown, op
     return { ok: true, status: response.status, data: data as T };
   }
   const payload = (await response.json().catch(() => ({}))) as { error?: string; fields?: FieldErrors };
-  return { ok: false, status: response.status, error: payload.error ?? options.fallback ?? "Something went wrong.", fields: payload.fields ?? {} };
+  return {
+    ok: false,
+    status: response.status,
+    error: payload.error ?? options.fallback ?? "Something went wrong.",
+    fields: payload.fields ?? {},
+  };
 }
 
 /** The error with each field's message after it, for screens that show one line. */
 export function errorWithFields(result: { error: string; fields: FieldErrors }): string {
-  const fields = Object.entries(result.fields).map(([k, m]) => `${k}: ${m}`).join("; ");
+  const fields = Object.entries(result.fields)
+    .map(([k, m]) => `${k}: ${m}`)
+    .join("; ");
   return fields ? `${result.error} ${fields}` : result.error;
 }
 

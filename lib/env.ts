@@ -21,7 +21,10 @@ const envSchema = z.object({
   S3_REGION: z.string().min(1).default("us-east-1"),
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
-  S3_FORCE_PATH_STYLE: z.enum(["true", "false", "1", "0"]).transform((v) => v === "true" || v === "1").optional(),
+  S3_FORCE_PATH_STYLE: z
+    .enum(["true", "false", "1", "0"])
+    .transform((v) => v === "true" || v === "1")
+    .optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -30,9 +33,7 @@ let cached: Env | undefined;
 
 export function getEnv(): Env {
   if (cached) return cached;
-  const raw = Object.fromEntries(
-    Object.entries(process.env).map(([k, v]) => [k, v === "" ? undefined : v]),
-  );
+  const raw = Object.fromEntries(Object.entries(process.env).map(([k, v]) => [k, v === "" ? undefined : v]));
   const parsed = envSchema.safeParse(raw);
   if (!parsed.success) {
     const lines = parsed.error.issues.map((i) => `${i.path.join(".")}: ${i.message}`);

@@ -21,7 +21,11 @@ const numberFormats = new Map<number, Intl.NumberFormat>();
 export function formatNumber(value: number, digits: number): string {
   let format = numberFormats.get(digits);
   if (!format) {
-    format = new Intl.NumberFormat("en-GB", { minimumFractionDigits: digits, maximumFractionDigits: digits, useGrouping: false });
+    format = new Intl.NumberFormat("en-GB", {
+      minimumFractionDigits: digits,
+      maximumFractionDigits: digits,
+      useGrouping: false,
+    });
     numberFormats.set(digits, format);
   }
   // Intl writes "-0.0" for a tiny negative; a figure never shows a signed zero.

@@ -59,7 +59,13 @@ export async function notifyRider(
     case "request-received":
       return queueTemplateEmail(tx, "request-received", { ...common, bikeLabel: request.bikeLabel }, envelope, audit);
     case "tuner-question":
-      return queueTemplateEmail(tx, "tuner-question", { ...common, question: notice.question, tunerName: notice.tunerName }, envelope, audit);
+      return queueTemplateEmail(
+        tx,
+        "tuner-question",
+        { ...common, question: notice.question, tunerName: notice.tunerName },
+        envelope,
+        audit,
+      );
     case "request-declined":
       return queueTemplateEmail(tx, "request-declined", { ...common, reason: notice.reason }, envelope, audit);
     case "sheet-ready":

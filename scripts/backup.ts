@@ -7,7 +7,11 @@ if (!file) {
   process.exit(2);
 }
 backupTo(file)
-  .then((m) => console.log(`[sagwise] backup written to ${file}: ${m.kind} database${m.migration ? ` at ${m.migration}` : ""}, ${m.uploads} upload(s)`))
+  .then((m) =>
+    console.log(
+      `[sagwise] backup written to ${file}: ${m.kind} database${m.migration ? ` at ${m.migration}` : ""}, ${m.uploads} upload(s)`,
+    ),
+  )
   .catch((error: unknown) => {
     console.error(`[sagwise] ${(error as Error).message}`);
     process.exit(1);

@@ -9,7 +9,9 @@ if (!file) {
   process.exit(2);
 }
 restoreFrom(file, { force: args.includes("--force") })
-  .then((m) => console.log(`[sagwise] restored ${file} (${m.kind} database from ${m.createdAt}, ${m.uploads} upload(s))`))
+  .then((m) =>
+    console.log(`[sagwise] restored ${file} (${m.kind} database from ${m.createdAt}, ${m.uploads} upload(s))`),
+  )
   .catch((error: unknown) => {
     console.error(`[sagwise] ${(error as Error).message}`);
     process.exit(1);

@@ -29,8 +29,9 @@ export default async function HomePage() {
         <p className="text-sm font-semibold uppercase tracking-wide text-pine-700">{shopName}</p>
         <h1 className="text-3xl font-bold tracking-tight">Suspension set up for you, not for the average rider</h1>
         <p className="max-w-2xl text-lg text-stone-700">
-          Off-road forks and shocks come sprung for a rider who is not you. Tell the shop about you, your riding and your bike:
-          a tuner sizes the springs and settings and sends you a setup sheet you can follow in your own garage.
+          Off-road forks and shocks come sprung for a rider who is not you. Tell the shop about you, your riding and
+          your bike: a tuner sizes the springs and settings and sends you a setup sheet you can follow in your own
+          garage.
         </p>
         <div className="flex flex-col gap-3 min-[420px]:flex-row">
           <Link href="/request" className={buttonClass("primary", "min-h-12 text-lg")}>
@@ -48,7 +49,10 @@ export default async function HomePage() {
         <ol className="grid gap-4 md:grid-cols-3">
           {STEPS.map((step, i) => (
             <li key={step.title} className="flex gap-4 rounded-xl border border-stone-200 bg-white p-4 md:flex-col">
-              <span aria-hidden="true" className="flex h-10 w-10 shrink-0 items-center justify-center rounded-full bg-pine-700 text-lg font-bold text-white">
+              <span
+                aria-hidden="true"
+                className="flex h-10 w-10 shrink-0 items-center justify-center rounded-full bg-pine-700 text-lg font-bold text-white"
+              >
                 {i + 1}
               </span>
               <div>
@@ -65,7 +69,8 @@ export default async function HomePage() {
       <section className="rounded-xl bg-amber-soft p-4 text-stone-800">
         <h2 className="font-semibold">No account needed</h2>
         <p className="mt-1">
-          You get a private link by e-mail to follow your request. Already sent one? Sign in with your e-mail to see all your requests.
+          You get a private link by e-mail to follow your request. Already sent one? Sign in with your e-mail to see all
+          your requests.
         </p>
       </section>
     </div>

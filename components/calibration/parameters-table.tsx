@@ -4,7 +4,11 @@ import type { CalibrationParameters } from "@/lib/sizing";
 const ROWS: { key: keyof CalibrationParameters; label: string; format: (v: number) => string }[] = [
   { key: "rearSprungKg", label: "Sprung mass on the rear, bike alone", format: (v) => `${v.toFixed(1)} kg` },
   { key: "frontSprungKg", label: "Sprung mass on the fork, bike alone", format: (v) => `${v.toFixed(1)} kg` },
-  { key: "riderRearShare", label: "Rider's share on the rear (sag stance)", format: (v) => `${(v * 100).toFixed(1)} %` },
+  {
+    key: "riderRearShare",
+    label: "Rider's share on the rear (sag stance)",
+    format: (v) => `${(v * 100).toFixed(1)} %`,
+  },
 ];
 
 interface Props {
@@ -21,16 +25,28 @@ export function ParametersTable({ catalog, fitted, reports, active }: Props) {
         <caption className="sr-only">Loads: catalog, fitted and applied</caption>
         <thead className="bg-stone-100 text-stone-700">
           <tr>
-            <th scope="col" className="px-3 py-2">Load</th>
-            <th scope="col" className="px-3 py-2">Catalog</th>
-            <th scope="col" className="px-3 py-2">Fitted from {reports} report{reports === 1 ? "" : "s"}</th>
-            {active ? <th scope="col" className="px-3 py-2">Applied now ({active.reports} reports)</th> : null}
+            <th scope="col" className="px-3 py-2">
+              Load
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Catalog
+            </th>
+            <th scope="col" className="px-3 py-2">
+              Fitted from {reports} report{reports === 1 ? "" : "s"}
+            </th>
+            {active ? (
+              <th scope="col" className="px-3 py-2">
+                Applied now ({active.reports} reports)
+              </th>
+            ) : null}
           </tr>
         </thead>
         <tbody>
           {ROWS.map((row) => (
             <tr key={row.key} className="border-t border-stone-100">
-              <th scope="row" className="px-3 py-2 font-medium">{row.label}</th>
+              <th scope="row" className="px-3 py-2 font-medium">
+                {row.label}
+              </th>
               <td className="px-3 py-2">{row.format(catalog[row.key])}</td>
               <td className="px-3 py-2">{fitted ? row.format(fitted[row.key]) : "no fit"}</td>
               {active ? <td className="px-3 py-2">{row.format(active.parameters[row.key])}</td> : null}

@@ -26,14 +26,30 @@ export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
         </caption>
         <thead className="bg-stone-100 text-stone-700">
           <tr>
-            <th scope="col" rowSpan={2} className="px-2 py-2">Reported</th>
-            <th scope="col" rowSpan={2} className="px-2 py-2">Rider with gear</th>
-            <th scope="col" rowSpan={2} className="px-2 py-2">Shock spring, preload</th>
-            <th scope="colgroup" colSpan={3} className="px-2 py-1">Rear static</th>
-            <th scope="colgroup" colSpan={3} className="px-2 py-1">Rear race</th>
-            <th scope="col" rowSpan={2} className="px-2 py-2">Fork spring, preload</th>
-            <th scope="colgroup" colSpan={3} className="px-2 py-1">Front static</th>
-            <th scope="colgroup" colSpan={3} className="px-2 py-1">Front race</th>
+            <th scope="col" rowSpan={2} className="px-2 py-2">
+              Reported
+            </th>
+            <th scope="col" rowSpan={2} className="px-2 py-2">
+              Rider with gear
+            </th>
+            <th scope="col" rowSpan={2} className="px-2 py-2">
+              Shock spring, preload
+            </th>
+            <th scope="colgroup" colSpan={3} className="px-2 py-1">
+              Rear static
+            </th>
+            <th scope="colgroup" colSpan={3} className="px-2 py-1">
+              Rear race
+            </th>
+            <th scope="col" rowSpan={2} className="px-2 py-2">
+              Fork spring, preload
+            </th>
+            <th scope="colgroup" colSpan={3} className="px-2 py-1">
+              Front static
+            </th>
+            <th scope="colgroup" colSpan={3} className="px-2 py-1">
+              Front race
+            </th>
           </tr>
           <tr>
             {Array.from({ length: 4 }, (_, i) => (
@@ -52,8 +68,14 @@ export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
                 </Link>
               </td>
               <td className="px-2 py-2">{r.riderMassKg.toFixed(1)} kg</td>
-              <td className="px-2 py-2">{r.rear ? `${r.rear.rateNmm.toFixed(1)} N/mm, ${r.rear.preloadMm.toFixed(1)} mm` : "not measured"}</td>
-              <Cells measured={r.rear?.staticMm} catalog={r.catalog?.rear?.staticMm} fitted={r.fitted?.rear?.staticMm} />
+              <td className="px-2 py-2">
+                {r.rear ? `${r.rear.rateNmm.toFixed(1)} N/mm, ${r.rear.preloadMm.toFixed(1)} mm` : "not measured"}
+              </td>
+              <Cells
+                measured={r.rear?.staticMm}
+                catalog={r.catalog?.rear?.staticMm}
+                fitted={r.fitted?.rear?.staticMm}
+              />
               <Cells measured={r.rear?.raceMm} catalog={r.catalog?.rear?.raceMm} fitted={r.fitted?.rear?.raceMm} />
               <td className="px-2 py-2">
                 {r.front
@@ -62,12 +84,20 @@ export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
                     : `${r.front.rateNmm?.toFixed(2) ?? "–"} N/mm, ${r.front.preloadMm?.toFixed(1) ?? "–"} mm`
                   : "not measured"}
               </td>
-              <Cells measured={r.front?.staticMm} catalog={r.catalog?.front?.staticMm} fitted={r.fitted?.front?.staticMm} />
+              <Cells
+                measured={r.front?.staticMm}
+                catalog={r.catalog?.front?.staticMm}
+                fitted={r.fitted?.front?.staticMm}
+              />
               <Cells measured={r.front?.raceMm} catalog={r.catalog?.front?.raceMm} fitted={r.fitted?.front?.raceMm} />
             </tr>
           ))}
           {rows.length === 0 ? (
-            <tr><td colSpan={16} className="px-3 py-6 text-center text-stone-600">No sag reports on this model yet.</td></tr>
+            <tr>
+              <td colSpan={16} className="px-3 py-6 text-center text-stone-600">
+                No sag reports on this model yet.
+              </td>
+            </tr>
           ) : null}
         </tbody>
       </table>
@@ -78,9 +108,15 @@ export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
 function SubHeads() {
   return (
     <>
-      <th scope="col" className="px-2 py-1 font-medium">measured</th>
-      <th scope="col" className="px-2 py-1 font-medium">catalog</th>
-      <th scope="col" className="px-2 py-1 font-medium">fitted</th>
+      <th scope="col" className="px-2 py-1 font-medium">
+        measured
+      </th>
+      <th scope="col" className="px-2 py-1 font-medium">
+        catalog
+      </th>
+      <th scope="col" className="px-2 py-1 font-medium">
+        fitted
+      </th>
     </>
   );
 }

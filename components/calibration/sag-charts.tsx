@@ -17,9 +17,17 @@ function chartFor(rows: ReportComparison[], end: End): ChartSpec | null {
   const fitted = line("fitted");
   return {
     series: [
-      ...(fitted.length ? [{ id: "fitted", label: "predicted with the fitted loads", emphasis: "main" as const, points: fitted }] : []),
+      ...(fitted.length
+        ? [{ id: "fitted", label: "predicted with the fitted loads", emphasis: "main" as const, points: fitted }]
+        : []),
       { id: "catalog", label: "predicted with the catalog's loads", emphasis: "secondary", points: line("catalog") },
-      { id: "measured", label: "measured by the riders", emphasis: "main", dots: true, points: measured.map((r) => ({ x: r.riderMassKg, y: r[end]!.raceMm })) },
+      {
+        id: "measured",
+        label: "measured by the riders",
+        emphasis: "main",
+        dots: true,
+        points: measured.map((r) => ({ x: r.riderMassKg, y: r[end]!.raceMm })),
+      },
     ],
     xLabel: "Rider with gear (kg)",
     yLabel: "Race sag (mm)",

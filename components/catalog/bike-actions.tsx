@@ -18,11 +18,23 @@ export function BikeActions({ id, retired }: { id: string; retired: boolean }) {
   };
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <Button variant="secondary" onClick={() => run(`/api/shop/catalog/${id}/duplicate`, undefined, (d) => `/shop/catalog/${d.id}`)}>Duplicate</Button>
-      <Button variant={retired ? "secondary" : "danger"} onClick={() => run(`/api/shop/catalog/${id}/retire`, { retired: !retired })}>
+      <Button
+        variant="secondary"
+        onClick={() => run(`/api/shop/catalog/${id}/duplicate`, undefined, (d) => `/shop/catalog/${d.id}`)}
+      >
+        Duplicate
+      </Button>
+      <Button
+        variant={retired ? "secondary" : "danger"}
+        onClick={() => run(`/api/shop/catalog/${id}/retire`, { retired: !retired })}
+      >
         {retired ? "Bring back to the picker" : "Retire"}
       </Button>
-      {error ? <p role="alert" className="text-sm text-red-800">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="text-sm text-red-800">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }

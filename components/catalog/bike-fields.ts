@@ -27,7 +27,11 @@ export const FORK_FIELDS: NumField[] = [
   ["spec.fork.preloadMinMm", "Fork preload, least (mm)"],
   ["spec.fork.preloadMaxMm", "Fork preload, most (mm)"],
   ["spec.fork.stockPreloadMm", "Fork preload, stock (mm)"],
-  ["spec.fork.displacementDiameterMm", "Displacing diameter (mm)", "Inner tube or cartridge rod that pushes into the air"],
+  [
+    "spec.fork.displacementDiameterMm",
+    "Displacing diameter (mm)",
+    "Inner tube or cartridge rod that pushes into the air",
+  ],
   ["spec.fork.freeAreaMm2", "Free oil surface area (mm²)"],
   ["spec.fork.capVolumeMm3", "Air volume in the cap (mm³)"],
   ["spec.fork.oilLevelMinMm", "Oil level, least (mm from top)"],
@@ -39,13 +43,21 @@ export const AIR_FIELDS: NumField[] = [
   ["spec.fork.air.pistonAreaMm2", "Air piston area (mm²)"],
   ["spec.fork.air.chamberVolumeMm3", "Air chamber volume at top-out (mm³)"],
   ["spec.fork.air.stockPressureKpaGauge", "Stock air pressure (kPa, gauge)"],
-  ["spec.fork.air.negativeChamberVolumeMm3", "Negative chamber volume at top-out (mm³)", "Optional; empty: a typical tenth of the main chamber"],
+  [
+    "spec.fork.air.negativeChamberVolumeMm3",
+    "Negative chamber volume at top-out (mm³)",
+    "Optional; empty: a typical tenth of the main chamber",
+  ],
   ["spec.fork.air.equalizeAtMm", "Chambers equalise at (mm of fork travel)", "Optional; empty: 3 % of travel, typical"],
 ];
 
 /** The stock fork spring's geometry: its steel takes air volume above the oil (coil forks, optional). */
 export const FORK_SPRING_FIELDS: NumField[] = [
-  ["spec.fork.stockSpring.wireDiameterMm", "Stock spring wire diameter (mm)", "Optional; empty: a typical spring for the rate"],
+  [
+    "spec.fork.stockSpring.wireDiameterMm",
+    "Stock spring wire diameter (mm)",
+    "Optional; empty: a typical spring for the rate",
+  ],
   ["spec.fork.stockSpring.meanCoilDiameterMm", "Stock spring mean coil diameter (mm)"],
   ["spec.fork.stockSpring.totalCoils", "Stock spring total coils"],
 ];

@@ -9,7 +9,16 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import { bikeModelSchema, type BikeModelInput, type BikeModelValues } from "@/lib/validations/bike";
-import { AIR_FIELDS, CLICKERS, FORK_FIELDS, FORK_KIND_LABELS, FORK_SPRING_FIELDS, MASS_FIELDS, REAR_FIELDS, type NumField } from "./bike-fields";
+import {
+  AIR_FIELDS,
+  CLICKERS,
+  FORK_FIELDS,
+  FORK_KIND_LABELS,
+  FORK_SPRING_FIELDS,
+  MASS_FIELDS,
+  REAR_FIELDS,
+  type NumField,
+} from "./bike-fields";
 import { CurveTable } from "./curve-table";
 import { callApi } from "@/lib/api-client";
 import { LeveragePreview } from "./leverage-preview";
@@ -43,17 +52,36 @@ const section = "flex flex-col gap-4 rounded-xl border border-stone-200 bg-white
 export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string }) {
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
-  const { control, register, handleSubmit, getValues, setError, formState } = useForm<BikeModelInput, unknown, BikeModelValues>({
+  const { control, register, handleSubmit, getValues, setError, formState } = useForm<
+    BikeModelInput,
+    unknown,
+    BikeModelValues
+  >({
     resolver: bikeResolver,
     defaultValues: initial,
   });
   const errors = formState.errors;
   const [forkKind, curve, wheelTravelMm, shockStrokeMm, rateNmm, preloadMm] = useWatch({
     control,
-    name: ["spec.fork.kind", "spec.rear.leverageCurve", "spec.rear.wheelTravelMm", "spec.rear.shockStrokeMm", "spec.rear.stockRateNmm", "spec.rear.preloadMinMm"],
+    name: [
+      "spec.fork.kind",
+      "spec.rear.leverageCurve",
+      "spec.rear.wheelTravelMm",
+      "spec.rear.shockStrokeMm",
+      "spec.rear.stockRateNmm",
+      "spec.rear.preloadMinMm",
+    ],
   });
   const num = ([path, label, hint]: NumField) => (
-    <Field key={path} id={path} label={label} hint={hint} inputMode="decimal" error={errorAt(errors, path)} {...register(path as Path<BikeModelInput>, { setValueAs: toNumber(), deps: DEPS[path] })} />
+    <Field
+      key={path}
+      id={path}
+      label={label}
+      hint={hint}
+      inputMode="decimal"
+      error={errorAt(errors, path)}
+      {...register(path as Path<BikeModelInput>, { setValueAs: toNumber(), deps: DEPS[path] })}
+    />
   );
 
   const save = handleSubmit(
@@ -61,8 +89,15 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
       setMessage(null);
       // The values as typed (minus empty groups), as before: the server parses them with the same schema.
       const payload = withoutEmptyOptionals(getValues());
-      const result = await callApi<{ id: string }>(id ? `/api/shop/catalog/${id}` : "/api/shop/catalog", id ? "PUT" : "POST", payload);
-      if (!result.ok) return setMessage([result.error, ...applyServerErrors(setError, result.fields, { fields: SERVER_FIELDS })].join(" "));
+      const result = await callApi<{ id: string }>(
+        id ? `/api/shop/catalog/${id}` : "/api/shop/catalog",
+        id ? "PUT" : "POST",
+        payload,
+      );
+      if (!result.ok)
+        return setMessage(
+          [result.error, ...applyServerErrors(setError, result.fields, { fields: SERVER_FIELDS })].join(" "),
+        );
       setMessage("Saved.");
       router.push(`/shop/catalog/${result.data.id}`);
       router.refresh();
@@ -73,65 +108,139 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
   return (
     <form onSubmit={save} noValidate aria-label="Bike model" className="flex flex-col gap-5">
       <section className={section} aria-labelledby="bike-identity">
-        <h2 id="bike-identity" className="font-semibold">Model</h2>
+        <h2 id="bike-identity" className="font-semibold">
+          Model
+        </h2>
         <div className="grid gap-4 sm:grid-cols-2">
           <Field id="name" label="Name" error={errors.name?.message} {...register("name")} />
-          <Field id="bikeClass" label="Class" hint="Lower-case with dashes, e.g. mx-450-4t" error={errors.bikeClass?.message} {...register("bikeClass")} />
-          <Field id="slug" label="Slug (optional)" hint="Made from the name when empty" error={errors.slug?.message} {...register("slug")} />
+          <Field
+            id="bikeClass"
+            label="Class"
+            hint="Lower-case with dashes, e.g. mx-450-4t"
+            error={errors.bikeClass?.message}
+            {...register("bikeClass")}
+          />
+          <Field
+            id="slug"
+            label="Slug (optional)"
+            hint="Made from the name when empty"
+            error={errors.slug?.message}
+            {...register("slug")}
+          />
           <div className="grid grid-cols-2 gap-2">
-            <Field id="yearFrom" label="First year" inputMode="numeric" error={errors.yearFrom?.message} {...register("yearFrom", { setValueAs: toNumber(null), deps: ["yearTo"] })} />
-            <Field id="yearTo" label="Last year" inputMode="numeric" error={errors.yearTo?.message} {...register("yearTo", { setValueAs: toNumber(null) })} />
+            <Field
+              id="yearFrom"
+              label="First year"
+              inputMode="numeric"
+              error={errors.yearFrom?.message}
+              {...register("yearFrom", { setValueAs: toNumber(null), deps: ["yearTo"] })}
+            />
+            <Field
+              id="yearTo"
+              label="Last year"
+              inputMode="numeric"
+              error={errors.yearTo?.message}
+              {...register("yearTo", { setValueAs: toNumber(null) })}
+            />
           </div>
         </div>
         <label className="flex flex-col gap-1 text-sm font-medium text-stone-800">
           Notes
-          <textarea className="min-h-20 rounded-lg border border-stone-300 px-3 py-2 text-base font-normal" aria-invalid={errors.notes ? true : undefined} {...register("notes")} />
+          <textarea
+            className="min-h-20 rounded-lg border border-stone-300 px-3 py-2 text-base font-normal"
+            aria-invalid={errors.notes ? true : undefined}
+            {...register("notes")}
+          />
           {errors.notes ? <span className="text-red-700">{errors.notes.message}</span> : null}
         </label>
       </section>
 
       <section className={section} aria-labelledby="bike-masses">
-        <h2 id="bike-masses" className="font-semibold">Masses and geometry</h2>
+        <h2 id="bike-masses" className="font-semibold">
+          Masses and geometry
+        </h2>
         <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">{MASS_FIELDS.map(num)}</div>
       </section>
 
       <section className={section} aria-labelledby="bike-rear">
-        <h2 id="bike-rear" className="font-semibold">Rear suspension</h2>
+        <h2 id="bike-rear" className="font-semibold">
+          Rear suspension
+        </h2>
         <div className="grid gap-4 sm:grid-cols-3">{REAR_FIELDS.map(num)}</div>
         <div className="grid gap-4 lg:grid-cols-[minmax(0,22rem)_1fr]">
           <CurveTable control={control} register={register} getValues={getValues} errors={errors} />
-          <LeveragePreview curve={curve} wheelTravelMm={wheelTravelMm} shockStrokeMm={shockStrokeMm} rateNmm={rateNmm} preloadMm={preloadMm} />
+          <LeveragePreview
+            curve={curve}
+            wheelTravelMm={wheelTravelMm}
+            shockStrokeMm={shockStrokeMm}
+            rateNmm={rateNmm}
+            preloadMm={preloadMm}
+          />
         </div>
       </section>
 
       <section className={section} aria-labelledby="bike-fork">
-        <h2 id="bike-fork" className="font-semibold">Fork</h2>
+        <h2 id="bike-fork" className="font-semibold">
+          Fork
+        </h2>
         <label className="flex max-w-sm flex-col gap-1 text-sm font-medium text-stone-800">
           Fork spring
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base" {...register("spec.fork.kind", { deps: ["spec.fork.air"] as Path<BikeModelInput>[] })}>
-            {Object.entries(FORK_KIND_LABELS).map(([k, label]) => <option key={k} value={k}>{label}</option>)}
+          <select
+            className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base"
+            {...register("spec.fork.kind", { deps: ["spec.fork.air"] as Path<BikeModelInput>[] })}
+          >
+            {Object.entries(FORK_KIND_LABELS).map(([k, label]) => (
+              <option key={k} value={k}>
+                {label}
+              </option>
+            ))}
           </select>
         </label>
-        <div className="grid gap-4 sm:grid-cols-3">{FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}</div>
-        {forkKind === "air" ? <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div> : <div className="grid gap-4 sm:grid-cols-3">{FORK_SPRING_FIELDS.map(num)}</div>}
-        {errorAt(errors, "spec.fork.air") ? <p className="text-sm font-medium text-red-700">{errorAt(errors, "spec.fork.air")}</p> : null}
+        <div className="grid gap-4 sm:grid-cols-3">
+          {FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}
+        </div>
+        {forkKind === "air" ? (
+          <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div>
+        ) : (
+          <div className="grid gap-4 sm:grid-cols-3">{FORK_SPRING_FIELDS.map(num)}</div>
+        )}
+        {errorAt(errors, "spec.fork.air") ? (
+          <p className="text-sm font-medium text-red-700">{errorAt(errors, "spec.fork.air")}</p>
+        ) : null}
       </section>
 
       <section className={section} aria-labelledby="bike-clickers">
-        <h2 id="bike-clickers" className="font-semibold">Clickers, counted out from fully closed</h2>
+        <h2 id="bike-clickers" className="font-semibold">
+          Clickers, counted out from fully closed
+        </h2>
         <div className="grid gap-4 lg:grid-cols-2">
           {CLICKERS.map(([cid, label]) => (
             <fieldset key={cid} className="grid grid-cols-3 gap-2">
               <legend className="mb-1 text-sm font-semibold text-stone-800">{label}</legend>
-              {([["min", "Least"], ["max", "Most"], ["stock", "Stock"]] as const).map(([k, word]) => num([`spec.clickers.${cid}.${k}`, word]))}
+              {(
+                [
+                  ["min", "Least"],
+                  ["max", "Most"],
+                  ["stock", "Stock"],
+                ] as const
+              ).map(([k, word]) => num([`spec.clickers.${cid}.${k}`, word]))}
             </fieldset>
           ))}
         </div>
       </section>
 
-      {message ? <p role="alert" className={`rounded-lg p-3 text-sm font-medium ${message === "Saved." ? "bg-pine-50 text-pine-900" : "bg-red-50 text-red-800"}`}>{message}</p> : null}
+      {message ? (
+        <p
+          role="alert"
+          className={`rounded-lg p-3 text-sm font-medium ${message === "Saved." ? "bg-pine-50 text-pine-900" : "bg-red-50 text-red-800"}`}
+        >
+          {message}
+        </p>
+      ) : null}
       <div className="flex gap-3">
-        <Button type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? "Saving…" : id ? "Save changes" : "Add bike"}</Button>
+        <Button type="submit" disabled={formState.isSubmitting}>
+          {formState.isSubmitting ? "Saving…" : id ? "Save changes" : "Add bike"}
+        </Button>
       </div>
     </form>
   );

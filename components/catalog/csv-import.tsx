@@ -21,7 +21,9 @@ export function CsvImport() {
     setBusy(true);
     setError(null);
     setReport(null);
-    const result = await callApi<Report>("/api/shop/catalog/csv", "POST", new FormData(form), { fallback: "The file could not be read." });
+    const result = await callApi<Report>("/api/shop/catalog/csv", "POST", new FormData(form), {
+      fallback: "The file could not be read.",
+    });
     setBusy(false);
     if (!result.ok) return setError(result.error);
     setReport(result.data);
@@ -29,37 +31,78 @@ export function CsvImport() {
   }
 
   return (
-    <section aria-labelledby="csv-heading" className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
-      <h2 id="csv-heading" className="font-semibold">Import and export</h2>
+    <section
+      aria-labelledby="csv-heading"
+      className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4"
+    >
+      <h2 id="csv-heading" className="font-semibold">
+        Import and export
+      </h2>
       <p className="text-sm text-stone-600">
-        The export holds every model, retired ones too. An import adds new slugs and replaces models with the same slug; each
-        row is checked on its own, so a refused row never stops the others.
+        The export holds every model, retired ones too. An import adds new slugs and replaces models with the same slug;
+        each row is checked on its own, so a refused row never stops the others.
       </p>
       <div className="flex flex-wrap items-end gap-3">
-        <a href="/api/shop/catalog/csv" className="inline-flex min-h-11 items-center rounded-lg border border-stone-300 px-4 font-semibold" download>
+        <a
+          href="/api/shop/catalog/csv"
+          className="inline-flex min-h-11 items-center rounded-lg border border-stone-300 px-4 font-semibold"
+          download
+        >
           Download CSV
         </a>
-        <form onSubmit={(e) => { e.preventDefault(); void upload(e.currentTarget); }} className="flex flex-wrap items-end gap-2">
+        <form
+          onSubmit={(e) => {
+            e.preventDefault();
+            void upload(e.currentTarget);
+          }}
+          className="flex flex-wrap items-end gap-2"
+        >
           <label className="flex flex-col gap-1 text-sm font-medium">
             CSV file
             <input name="file" type="file" accept=".csv,text/csv" required className="min-h-11 text-sm" />
           </label>
-          <Button type="submit" variant="secondary" disabled={busy}>{busy ? "Importing…" : "Import"}</Button>
+          <Button type="submit" variant="secondary" disabled={busy}>
+            {busy ? "Importing…" : "Import"}
+          </Button>
         </form>
       </div>
-      {error ? <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm text-red-800">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm text-red-800">
+          {error}
+        </p>
+      ) : null}
       {report ? (
         <div role="status" className="flex flex-col gap-2 text-sm">
-          <p>{report.saved.length} row(s) saved, {report.refused.length} refused.</p>
+          <p>
+            {report.saved.length} row(s) saved, {report.refused.length} refused.
+          </p>
           {report.refused.length ? (
             <table className="text-left">
-              <thead><tr><th scope="col" className="pr-3">Row</th><th scope="col" className="pr-3">Slug</th><th scope="col">What was wrong</th></tr></thead>
+              <thead>
+                <tr>
+                  <th scope="col" className="pr-3">
+                    Row
+                  </th>
+                  <th scope="col" className="pr-3">
+                    Slug
+                  </th>
+                  <th scope="col">What was wrong</th>
+                </tr>
+              </thead>
               <tbody>
                 {report.refused.map((r) => (
                   <tr key={r.row} className="align-top">
                     <td className="pr-3 tabular-nums">{r.row}</td>
                     <td className="pr-3">{r.slug ?? "—"}</td>
-                    <td><ul>{Object.entries(r.fields).map(([f, m]) => <li key={f}><code>{f}</code>: {m}</li>)}</ul></td>
+                    <td>
+                      <ul>
+                        {Object.entries(r.fields).map(([f, m]) => (
+                          <li key={f}>
+                            <code>{f}</code>: {m}
+                          </li>
+                        ))}
+                      </ul>
+                    </td>
                   </tr>
                 ))}
               </tbody>

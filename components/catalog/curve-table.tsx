@@ -1,6 +1,12 @@
 "use client";
 
-import { useFieldArray, type Control, type FieldErrors, type UseFormGetValues, type UseFormRegister } from "react-hook-form";
+import {
+  useFieldArray,
+  type Control,
+  type FieldErrors,
+  type UseFormGetValues,
+  type UseFormRegister,
+} from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { errorAt, toNumber } from "@/components/forms/apply-server-errors";
@@ -23,14 +29,24 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
   const listError = errorAt(errors, LIST);
   return (
     <fieldset className="flex flex-col gap-2">
-      <legend className="text-sm font-semibold text-stone-800">Leverage-ratio curve (wheel travel per shock travel)</legend>
+      <legend className="text-sm font-semibold text-stone-800">
+        Leverage-ratio curve (wheel travel per shock travel)
+      </legend>
       <table className="text-sm">
         <thead>
           <tr className="text-left text-stone-600">
-            <th scope="col" className="pr-2 font-medium">Point</th>
-            <th scope="col" className="pr-2 font-medium">Wheel travel (mm)</th>
-            <th scope="col" className="pr-2 font-medium">Ratio</th>
-            <th scope="col"><span className="sr-only">Remove</span></th>
+            <th scope="col" className="pr-2 font-medium">
+              Point
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              Wheel travel (mm)
+            </th>
+            <th scope="col" className="pr-2 font-medium">
+              Ratio
+            </th>
+            <th scope="col">
+              <span className="sr-only">Remove</span>
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -38,13 +54,34 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
             <tr key={f.id}>
               <td className="pr-2 tabular-nums">{i + 1}</td>
               <td className="pr-2 py-1">
-                <Field id={`curve-${i}-y`} label={`Point ${i + 1} wheel travel (mm)`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)} {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)} />
+                <Field
+                  id={`curve-${i}-y`}
+                  label={`Point ${i + 1} wheel travel (mm)`}
+                  className="[&>label]:sr-only"
+                  inputMode="decimal"
+                  size={6}
+                  error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)}
+                  {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)}
+                />
               </td>
               <td className="pr-2 py-1">
-                <Field id={`curve-${i}-r`} label={`Point ${i + 1} leverage ratio`} className="[&>label]:sr-only" inputMode="decimal" size={6} error={errorAt(errors, `${LIST}.${i}.ratio`)} {...register(`${LIST}.${i}.ratio`, pointOptions)} />
+                <Field
+                  id={`curve-${i}-r`}
+                  label={`Point ${i + 1} leverage ratio`}
+                  className="[&>label]:sr-only"
+                  inputMode="decimal"
+                  size={6}
+                  error={errorAt(errors, `${LIST}.${i}.ratio`)}
+                  {...register(`${LIST}.${i}.ratio`, pointOptions)}
+                />
               </td>
               <td>
-                <Button variant="ghost" aria-label={`Remove point ${i + 1}`} disabled={fields.length <= 2} onClick={() => remove(i)}>
+                <Button
+                  variant="ghost"
+                  aria-label={`Remove point ${i + 1}`}
+                  disabled={fields.length <= 2}
+                  onClick={() => remove(i)}
+                >
                   Remove
                 </Button>
               </td>
@@ -59,7 +96,10 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
         disabled={fields.length >= 64}
         onClick={() => {
           const last = getValues(LIST).at(-1);
-          append({ wheelTravelMm: (Number.isFinite(last?.wheelTravelMm) ? last!.wheelTravelMm : 0) + 50, ratio: Number.isFinite(last?.ratio) ? last!.ratio : 2 });
+          append({
+            wheelTravelMm: (Number.isFinite(last?.wheelTravelMm) ? last!.wheelTravelMm : 0) + 50,
+            ratio: Number.isFinite(last?.ratio) ? last!.ratio : 2,
+          });
         }}
       >
         Add point

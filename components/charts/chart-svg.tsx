@@ -3,7 +3,15 @@
 // through it; the setup sheet draws the same geometry with react-pdf (lib/pdf/sections/chart.tsx).
 import type { ChartGeometry } from "@/lib/charts/force-curve";
 
-export function ChartSvg({ geometry: g, label, className = "h-auto w-full" }: { geometry: ChartGeometry; label: string; className?: string }) {
+export function ChartSvg({
+  geometry: g,
+  label,
+  className = "h-auto w-full",
+}: {
+  geometry: ChartGeometry;
+  label: string;
+  className?: string;
+}) {
   const midY = (g.plot.top + g.plot.bottom) / 2;
   return (
     <svg viewBox={`0 0 ${g.width} ${g.height}`} role="img" aria-label={label} className={className}>
@@ -33,21 +41,32 @@ export function ChartSvg({ geometry: g, label, className = "h-auto w-full" }: { 
       <line x1={g.plot.left} x2={g.plot.left} y1={g.plot.top} y2={g.plot.bottom} stroke="#78716c" />
       <line x1={g.plot.left} x2={g.plot.right} y1={g.plot.bottom} y2={g.plot.bottom} stroke="#78716c" />
       {g.series.flatMap((s) =>
-        (s.dots ?? []).map((p, i) => <circle key={`${s.id}${i}`} cx={p.x} cy={p.y} r={4} fill={s.emphasis === "main" ? "#b45309" : "#a8a29e"} />),
+        (s.dots ?? []).map((p, i) => (
+          <circle key={`${s.id}${i}`} cx={p.x} cy={p.y} r={4} fill={s.emphasis === "main" ? "#b45309" : "#a8a29e"} />
+        )),
       )}
-      {g.series.filter((s) => !s.dots).map((s) => (
-        <path
-          key={s.id}
-          d={s.d}
-          fill="none"
-          stroke={s.emphasis === "main" ? "#1d5f50" : "#a8a29e"}
-          strokeWidth={s.emphasis === "main" ? 2.5 : 1.5}
-          strokeDasharray={s.emphasis === "main" ? undefined : "5 4"}
-        />
-      ))}
+      {g.series
+        .filter((s) => !s.dots)
+        .map((s) => (
+          <path
+            key={s.id}
+            d={s.d}
+            fill="none"
+            stroke={s.emphasis === "main" ? "#1d5f50" : "#a8a29e"}
+            strokeWidth={s.emphasis === "main" ? 2.5 : 1.5}
+            strokeDasharray={s.emphasis === "main" ? undefined : "5 4"}
+          />
+        ))}
       {g.markers.map((m, i) => (
         <g key={m.label}>
-          <line x1={m.position} x2={m.position} y1={g.plot.top} y2={g.plot.bottom} stroke="#b45309" strokeDasharray="3 3" />
+          <line
+            x1={m.position}
+            x2={m.position}
+            y1={g.plot.top}
+            y2={g.plot.bottom}
+            stroke="#b45309"
+            strokeDasharray="3 3"
+          />
           <text x={m.position + 3} y={g.plot.top + 12 + i * 13} fontSize={11} fill="#92400e">
             {m.label}
           </text>

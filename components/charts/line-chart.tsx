@@ -2,7 +2,15 @@
 import { ChartSvg } from "@/components/charts/chart-svg";
 import type { ChartGeometry } from "@/lib/charts/force-curve";
 
-export function LineChart({ geometry, title, description }: { geometry: ChartGeometry; title: string; description: string }) {
+export function LineChart({
+  geometry,
+  title,
+  description,
+}: {
+  geometry: ChartGeometry;
+  title: string;
+  description: string;
+}) {
   return (
     <figure className="rounded-xl border border-stone-200 bg-white p-3">
       <figcaption className="mb-1 text-sm font-semibold text-stone-800">{title}</figcaption>

@@ -51,7 +51,9 @@ export function errorAt(errors: unknown, path: string): string | undefined {
 export function toNumber(empty: undefined | null = undefined) {
   return (value: unknown): number | undefined | null => {
     if (typeof value === "number") return value;
-    const text = String(value ?? "").trim().replace(",", ".");
+    const text = String(value ?? "")
+      .trim()
+      .replace(",", ".");
     return text === "" ? empty : Number(text);
   };
 }

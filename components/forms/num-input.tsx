@@ -29,7 +29,9 @@ export function NumInput({ id, label, value, onChange, error, hint, step = "any"
   const describedBy = describedByFor(id, hint, error);
   return (
     <div className={cn("flex flex-col gap-1", className)}>
-      <label htmlFor={id} className="text-sm font-medium text-stone-800">{label}</label>
+      <label htmlFor={id} className="text-sm font-medium text-stone-800">
+        {label}
+      </label>
       <input
         id={id}
         type="text"
@@ -45,8 +47,16 @@ export function NumInput({ id, label, value, onChange, error, hint, step = "any"
         }}
         className="min-h-11 w-full rounded-lg border border-stone-300 bg-white px-3 py-2 text-base tabular-nums aria-[invalid=true]:border-red-600"
       />
-      {hint ? <p id={`${id}-hint`} className="text-xs text-stone-600">{hint}</p> : null}
-      {error ? <p id={`${id}-error`} className="text-sm font-medium text-red-700">{error}</p> : null}
+      {hint ? (
+        <p id={`${id}-hint`} className="text-xs text-stone-600">
+          {hint}
+        </p>
+      ) : null}
+      {error ? (
+        <p id={`${id}-error`} className="text-sm font-medium text-red-700">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }

@@ -16,13 +16,14 @@ function templateLabel(name: string): string {
   return (emailTemplates as Record<string, { description: string }>)[name]?.description ?? name;
 }
 
-
 function EmailItem({ mail }: { mail: OutboundEmailRow }) {
   const failed = mail.status === "failed";
   return (
     <li className={`rounded-lg border p-3 ${failed ? "border-red-300 bg-red-50/40" : "border-stone-200 bg-white"}`}>
       <div className="flex flex-wrap items-center gap-2">
-        <span className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-sm font-medium ring-1 ${STATUS_CLASS[mail.status]}`}>
+        <span
+          className={`inline-flex items-center rounded-full px-2.5 py-0.5 text-sm font-medium ring-1 ${STATUS_CLASS[mail.status]}`}
+        >
           {STATUS_TEXT[mail.status]}
         </span>
         <span className="font-medium">{mail.subject}</span>
@@ -34,7 +35,9 @@ function EmailItem({ mail }: { mail: OutboundEmailRow }) {
         <dd className="break-all">{mail.toAddress}</dd>
         <dt>{mail.sentAt ? "Sent" : "Created"}</dt>
         <dd>
-          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>{formatDateTime(mail.sentAt ?? mail.createdAt)}</time>
+          <time dateTime={(mail.sentAt ?? mail.createdAt).toISOString()}>
+            {formatDateTime(mail.sentAt ?? mail.createdAt)}
+          </time>
         </dd>
         <dt>Attempts</dt>
         <dd>{mail.attempts}</dd>

@@ -11,8 +11,7 @@ export interface FilterOptions {
   tuners: { id: string; name: string }[];
 }
 
-const selectClass =
-  "min-h-11 rounded-lg border border-stone-300 bg-white px-3 py-2 text-base text-stone-900";
+const selectClass = "min-h-11 rounded-lg border border-stone-300 bg-white px-3 py-2 text-base text-stone-900";
 const labelClass = "flex flex-col gap-1 text-sm font-medium text-stone-800";
 
 export function QueueFiltersForm({
@@ -44,10 +43,17 @@ export function QueueFiltersForm({
   }
 
   const pick = (key: keyof QueueFilters) => (e: { target: { value: string } }) => onChange({ [key]: e.target.value });
-  const active = ["status", "q", "discipline", "bikeClass", "tuner", "from", "to"].some((k) => filters[k as keyof QueueFilters]);
+  const active = ["status", "q", "discipline", "bikeClass", "tuner", "from", "to"].some(
+    (k) => filters[k as keyof QueueFilters],
+  );
 
   return (
-    <form role="search" aria-label="Filter requests" className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
+    <form
+      role="search"
+      aria-label="Filter requests"
+      className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4"
+      onSubmit={(e) => e.preventDefault()}
+    >
       <label className={`${labelClass} sm:col-span-2`}>
         Search rider, e-mail or bike
         <input type="search" value={q} onChange={(e) => setQ(e.target.value)} className={selectClass} maxLength={100} />
@@ -57,7 +63,9 @@ export function QueueFiltersForm({
         <select value={filters.status} onChange={pick("status")} className={selectClass}>
           <option value="">Any status</option>
           {Object.entries(STATUS_LABELS).map(([v, l]) => (
-            <option key={v} value={v}>{l}</option>
+            <option key={v} value={v}>
+              {l}
+            </option>
           ))}
         </select>
       </label>
@@ -66,7 +74,9 @@ export function QueueFiltersForm({
         <select value={filters.discipline} onChange={pick("discipline")} className={selectClass}>
           <option value="">Any discipline</option>
           {DISCIPLINES.map((d) => (
-            <option key={d} value={d}>{d.charAt(0).toUpperCase() + d.slice(1).replace("-", " ")}</option>
+            <option key={d} value={d}>
+              {d.charAt(0).toUpperCase() + d.slice(1).replace("-", " ")}
+            </option>
           ))}
         </select>
       </label>
@@ -75,7 +85,9 @@ export function QueueFiltersForm({
         <select value={filters.bikeClass} onChange={pick("bikeClass")} className={selectClass}>
           <option value="">Any bike class</option>
           {options.bikeClasses.map((b) => (
-            <option key={b.value} value={b.value}>{b.label}</option>
+            <option key={b.value} value={b.value}>
+              {b.label}
+            </option>
           ))}
         </select>
       </label>
@@ -86,7 +98,9 @@ export function QueueFiltersForm({
           <option value="me">Assigned to me</option>
           <option value="unassigned">Not assigned</option>
           {options.tuners.map((t) => (
-            <option key={t.id} value={t.id}>{t.name}</option>
+            <option key={t.id} value={t.id}>
+              {t.name}
+            </option>
           ))}
         </select>
       </label>
@@ -96,7 +110,13 @@ export function QueueFiltersForm({
       </label>
       <label className={labelClass}>
         Received to
-        <input type="date" value={filters.to} onChange={pick("to")} className={selectClass} min={filters.from || undefined} />
+        <input
+          type="date"
+          value={filters.to}
+          onChange={pick("to")}
+          className={selectClass}
+          min={filters.from || undefined}
+        />
       </label>
       {active ? (
         <div className="flex items-end">

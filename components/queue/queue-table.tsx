@@ -44,7 +44,10 @@ const columns = [
     header: "Rider",
     cell: (c) => (
       <div className="flex flex-col">
-        <Link href={`/shop/requests/${c.row.original.id}`} className="font-medium text-pine-700 underline underline-offset-2 hover:text-pine-900">
+        <Link
+          href={`/shop/requests/${c.row.original.id}`}
+          className="font-medium text-pine-700 underline underline-offset-2 hover:text-pine-900"
+        >
           {c.getValue()}
         </Link>
         <span className="text-xs text-stone-600">{c.row.original.riderEmail}</span>
@@ -52,8 +55,16 @@ const columns = [
     ),
   }),
   col.accessor("bikeLabel", { header: "Bike", enableSorting: false }),
-  col.accessor("discipline", { header: "Discipline", enableSorting: false, cell: (c) => <span className="capitalize">{c.getValue().replace("-", " ")}</span> }),
-  col.accessor("assignedTunerName", { header: "Tuner", enableSorting: false, cell: (c) => c.getValue() ?? <span className="text-stone-500">Not assigned</span> }),
+  col.accessor("discipline", {
+    header: "Discipline",
+    enableSorting: false,
+    cell: (c) => <span className="capitalize">{c.getValue().replace("-", " ")}</span>,
+  }),
+  col.accessor("assignedTunerName", {
+    header: "Tuner",
+    enableSorting: false,
+    cell: (c) => c.getValue() ?? <span className="text-stone-500">Not assigned</span>,
+  }),
   col.accessor("status", { header: "Status", cell: (c) => <StatusBadge status={c.getValue()} /> }),
   col.accessor("createdAt", { header: "Received", cell: (c) => formatDay(c.getValue()) }),
 ];
@@ -108,7 +119,9 @@ export function QueueTable({
                       >
                         {flexRender(h.column.columnDef.header, h.getContext())}
                         <span aria-hidden="true">{dir === "asc" ? "▲" : dir === "desc" ? "▼" : "↕"}</span>
-                        <span className="sr-only">{dir ? `(sorted ${dir === "asc" ? "ascending" : "descending"})` : "(sort)"}</span>
+                        <span className="sr-only">
+                          {dir ? `(sorted ${dir === "asc" ? "ascending" : "descending"})` : "(sort)"}
+                        </span>
                       </button>
                     ) : (
                       flexRender(h.column.columnDef.header, h.getContext())

@@ -50,14 +50,21 @@ export function QueueView({ options }: { options: FilterOptions }) {
       {query.isError ? (
         <div role="alert" className="rounded-xl border border-red-200 bg-red-50 p-4 text-red-900">
           {query.error.message}{" "}
-          <Button variant="secondary" className="ml-2" onClick={() => query.refetch()}>Try again</Button>
+          <Button variant="secondary" className="ml-2" onClick={() => query.refetch()}>
+            Try again
+          </Button>
         </div>
       ) : null}
       <p className="text-sm text-stone-700" aria-live="polite">
         {query.isPending ? "Loading requests…" : `${first}–${last} of ${total} requests`}
         {query.isFetching && !query.isPending ? " (updating…)" : ""}
       </p>
-      <QueueTable rows={query.data?.items ?? []} sort={filters.sort} onSort={(sort) => update({ sort })} busy={query.isFetching} />
+      <QueueTable
+        rows={query.data?.items ?? []}
+        sort={filters.sort}
+        onSort={(sort) => update({ sort })}
+        busy={query.isFetching}
+      />
       <nav aria-label="Pages" className="flex flex-wrap items-center gap-3">
         <Button variant="secondary" disabled={filters.page <= 1} onClick={() => update({ page: filters.page - 1 })}>
           Previous page
@@ -76,7 +83,9 @@ export function QueueView({ options }: { options: FilterOptions }) {
             className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
           >
             {[25, 50, 100].map((n) => (
-              <option key={n} value={n}>{n}</option>
+              <option key={n} value={n}>
+                {n}
+              </option>
             ))}
           </select>
         </label>

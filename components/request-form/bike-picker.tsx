@@ -55,11 +55,22 @@ export function BikePicker({ register, selectedId, selectedName, onPick, error }
         </p>
       ) : null}
       <div className="flex flex-col gap-2" aria-live="polite" aria-busy={bikes.isFetching}>
-        {bikes.isError ? <p className="text-sm text-red-700">The list could not load. Check your signal, or choose “not listed”.</p> : null}
+        {bikes.isError ? (
+          <p className="text-sm text-red-700">The list could not load. Check your signal, or choose “not listed”.</p>
+        ) : null}
         {bikes.data?.length === 0 ? <p className="text-sm text-stone-700">No bike matches “{deferred}”.</p> : null}
         {bikes.data?.map((bike) => (
           <label key={bike.id} className={option}>
-            <input type="radio" value={bike.id} className="h-5 w-5 shrink-0 accent-pine-700" {...register} onChange={(e) => { void register.onChange(e); onPick(bike.name); }} />
+            <input
+              type="radio"
+              value={bike.id}
+              className="h-5 w-5 shrink-0 accent-pine-700"
+              {...register}
+              onChange={(e) => {
+                void register.onChange(e);
+                onPick(bike.name);
+              }}
+            />
             <span className="min-w-0">
               <span className="block">{bike.name}</span>
               <span className="block text-sm text-stone-600">
@@ -69,7 +80,16 @@ export function BikePicker({ register, selectedId, selectedName, onPick, error }
           </label>
         ))}
         <label className={option}>
-          <input type="radio" value={NOT_LISTED} className="h-5 w-5 shrink-0 accent-pine-700" {...register} onChange={(e) => { void register.onChange(e); onPick(""); }} />
+          <input
+            type="radio"
+            value={NOT_LISTED}
+            className="h-5 w-5 shrink-0 accent-pine-700"
+            {...register}
+            onChange={(e) => {
+              void register.onChange(e);
+              onPick("");
+            }}
+          />
           <span>My bike is not listed</span>
         </label>
       </div>

@@ -17,15 +17,32 @@ export function FeelStep(props: StepProps) {
   const { form, submit } = useStepForm(
     "feel",
     feelStepSchema,
-    { complaints: [], notes: "", currentSag: { unit: props.metric ? "mm" : "in", rearStatic: "", rearRace: "", forkStatic: "", forkRace: "" } },
+    {
+      complaints: [],
+      notes: "",
+      currentSag: { unit: props.metric ? "mm" : "in", rearStatic: "", rearRace: "", forkStatic: "", forkRace: "" },
+    },
     props,
   );
   const { register, formState } = form;
   const e = (path: string) => errorAt(formState.errors, path);
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="How it feels">
-      <ChoiceGroup name="complaints" legend="What feels wrong? (tick all that apply)" type="checkbox" options={COMPLAINT_LABELS} register={register("complaints")} error={e("complaints")} />
-      <TextAreaField id="feel-notes" label="Tell us more (optional)" hint="Where and when it happens: a section of track, a kind of bump." register={register("notes")} error={e("notes")} />
+      <ChoiceGroup
+        name="complaints"
+        legend="What feels wrong? (tick all that apply)"
+        type="checkbox"
+        options={COMPLAINT_LABELS}
+        register={register("complaints")}
+        error={e("complaints")}
+      />
+      <TextAreaField
+        id="feel-notes"
+        label="Tell us more (optional)"
+        hint="Where and when it happens: a section of track, a kind of bump."
+        register={register("notes")}
+        error={e("notes")}
+      />
       <fieldset className="flex min-w-0 flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
         <legend className="px-1 text-sm font-medium text-stone-800">Sag you measured (optional)</legend>
         <div className="flex items-center justify-between gap-3">
@@ -33,7 +50,14 @@ export function FeelStep(props: StepProps) {
           <UnitToggle name="sag-unit" legend="Sag unit" units={["mm", "in"]} register={register("currentSag.unit")} />
         </div>
         {SAG_FIELDS.map(([key, text]) => (
-          <MeasureField key={key} id={`sag-${key}`} label={text} register={register(`currentSag.${key}`)} error={e(`currentSag.${key}`)} unit={null} />
+          <MeasureField
+            key={key}
+            id={`sag-${key}`}
+            label={text}
+            register={register(`currentSag.${key}`)}
+            error={e(`currentSag.${key}`)}
+            unit={null}
+          />
         ))}
       </fieldset>
       <StepActions onBack={props.onBack} nextLabel="Review" />

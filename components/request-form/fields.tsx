@@ -19,7 +19,12 @@ interface ChoiceGroupProps {
 
 export function ChoiceGroup({ name, legend, type, options, register, error, hint, columns = 2 }: ChoiceGroupProps) {
   const errorId = `${name}-error`;
-  const grid = columns === 1 ? "grid-cols-1" : columns === 3 ? "grid-cols-2 sm:grid-cols-3" : "grid-cols-1 min-[360px]:grid-cols-2";
+  const grid =
+    columns === 1
+      ? "grid-cols-1"
+      : columns === 3
+        ? "grid-cols-2 sm:grid-cols-3"
+        : "grid-cols-1 min-[360px]:grid-cols-2";
   return (
     <fieldset className="flex min-w-0 flex-col gap-2" aria-describedby={error ? errorId : undefined}>
       <legend className="mb-1 text-sm font-medium text-stone-800">{legend}</legend>
@@ -41,7 +46,17 @@ export function ChoiceGroup({ name, legend, type, options, register, error, hint
 }
 
 /** A segmented toggle between units (kg/lb, mm/in): the number is stored with the unit chosen. */
-export function UnitToggle({ name, legend, units, register }: { name: string; legend: string; units: readonly string[]; register: UseFormRegisterReturn }) {
+export function UnitToggle({
+  name,
+  legend,
+  units,
+  register,
+}: {
+  name: string;
+  legend: string;
+  units: readonly string[];
+  register: UseFormRegisterReturn;
+}) {
   return (
     <fieldset className="flex shrink-0 flex-col">
       <legend className="sr-only">{legend}</legend>

@@ -7,7 +7,15 @@ import { MAX_PHOTOS, MAX_PHOTO_BYTES } from "@/lib/storage/limits";
 
 const ACCEPT = ["image/jpeg", "image/png", "image/webp"];
 
-export function PhotoPicker({ files, onChange, serverError }: { files: File[]; onChange: (files: File[]) => void; serverError?: string }) {
+export function PhotoPicker({
+  files,
+  onChange,
+  serverError,
+}: {
+  files: File[];
+  onChange: (files: File[]) => void;
+  serverError?: string;
+}) {
   const [problem, setProblem] = useState<string | null>(null);
   const add = (list: FileList | null) => {
     if (!list) return;
@@ -18,7 +26,9 @@ export function PhotoPicker({ files, onChange, serverError }: { files: File[]; o
         break;
       }
       if (/\.hei[cf]$/i.test(file.name) || file.type === "image/heic" || file.type === "image/heif") {
-        setProblem(`“${file.name}” is a HEIC photo, which the shop cannot open. Send it as JPEG (most phones can share or export it as JPEG).`);
+        setProblem(
+          `“${file.name}” is a HEIC photo, which the shop cannot open. Send it as JPEG (most phones can share or export it as JPEG).`,
+        );
         continue;
       }
       if (!ACCEPT.includes(file.type)) {
@@ -40,7 +50,8 @@ export function PhotoPicker({ files, onChange, serverError }: { files: File[]; o
         Photos of the bike or suspension (optional, up to {MAX_PHOTOS})
       </label>
       <p id="photos-hint" className="text-sm text-stone-600">
-        JPEG, PNG or WebP, up to 10 MB each. Photos are not kept in your draft: if you close this page before sending, add them again.
+        JPEG, PNG or WebP, up to 10 MB each. Photos are not kept in your draft: if you close this page before sending,
+        add them again.
       </p>
       <input
         id="photos"
@@ -63,7 +74,10 @@ export function PhotoPicker({ files, onChange, serverError }: { files: File[]; o
       {files.length ? (
         <ul className="flex flex-col gap-2">
           {files.map((file, i) => (
-            <li key={`${file.name}-${i}`} className="flex items-center justify-between gap-2 rounded-lg border border-stone-200 bg-white px-3 py-1">
+            <li
+              key={`${file.name}-${i}`}
+              className="flex items-center justify-between gap-2 rounded-lg border border-stone-200 bg-white px-3 py-1"
+            >
               <span className="min-w-0 truncate">{file.name}</span>
               <button
                 type="button"

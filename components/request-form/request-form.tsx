@@ -72,19 +72,29 @@ export function RequestForm({ metric }: { metric: boolean }) {
     });
   }, []);
 
-  const go = useCallback((to: number) => update((d) => ({ ...d, step: to, reached: Math.max(d.reached, to) })), [update]);
+  const go = useCallback(
+    (to: number) => update((d) => ({ ...d, step: to, reached: Math.max(d.reached, to) })),
+    [update],
+  );
 
   // Stable handlers per step, so each step's watch subscription is set up once.
   const handlers = useMemo(
     () =>
       Object.fromEntries(
-        STEP_KEYS.map((key) => [key, (values: Record<string, unknown>) => update((d) => ({ ...d, values: { ...d.values, [key]: values } }))]),
+        STEP_KEYS.map((key) => [
+          key,
+          (values: Record<string, unknown>) => update((d) => ({ ...d, values: { ...d.values, [key]: values } })),
+        ]),
       ) as Record<StepKey, (values: Record<string, unknown>) => void>,
     [update],
   );
 
   if (!draft) {
-    return <p className="text-stone-700" aria-busy="true">Opening the form…</p>;
+    return (
+      <p className="text-stone-700" aria-busy="true">
+        Opening the form…
+      </p>
+    );
   }
 
   const submit = async (values: Record<string, unknown>) => {
@@ -112,14 +122,19 @@ export function RequestForm({ metric }: { metric: boolean }) {
     onBack: draft.step > 0 ? () => go(draft.step - 1) : undefined,
     metric,
   });
-  const photoError = problem?.fields ? Object.entries(problem.fields).find(([k]) => k.startsWith("photos"))?.[1] : undefined;
+  const photoError = problem?.fields
+    ? Object.entries(problem.fields).find(([k]) => k.startsWith("photos"))?.[1]
+    : undefined;
 
   return (
     <Providers>
       <div className="flex flex-col gap-5">
         <StepIndicator step={draft.step} reached={draft.reached} onGo={go} />
         {restored ? (
-          <div role="status" className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-pine-50 p-3 text-pine-900">
+          <div
+            role="status"
+            className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-pine-50 p-3 text-pine-900"
+          >
             <span>We kept your answers from last time{photos.length ? "" : " (photos have to be added again)"}.</span>
             <Button
               variant="ghost"
@@ -141,10 +156,27 @@ export function RequestForm({ metric }: { metric: boolean }) {
         </h2>
         {draft.step === 0 ? <RiderStep key={`rider-${generation}`} {...common("rider")} /> : null}
         {draft.step === 1 ? <RidingStep key={`riding-${generation}`} {...common("riding")} /> : null}
-        {draft.step === 2 ? <BikeStep key={`bike-${generation}`} {...common("bike")} photos={photos} onPhotos={setPhotos} photoError={photoError} /> : null}
+        {draft.step === 2 ? (
+          <BikeStep
+            key={`bike-${generation}`}
+            {...common("bike")}
+            photos={photos}
+            onPhotos={setPhotos}
+            photoError={photoError}
+          />
+        ) : null}
         {draft.step === 3 ? <FeelStep key={`feel-${generation}`} {...common("feel")} /> : null}
         {draft.step === 4 ? (
-          <ReviewStep key={`review-${generation}`} {...common("review")} onNext={submit} draft={draft} photos={photos} submitting={submitting} problem={problem} onGo={go} />
+          <ReviewStep
+            key={`review-${generation}`}
+            {...common("review")}
+            onNext={submit}
+            draft={draft}
+            photos={photos}
+            submitting={submitting}
+            problem={problem}
+            onGo={go}
+          />
         ) : null}
       </div>
     </Providers>

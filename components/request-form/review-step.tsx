@@ -27,7 +27,9 @@ interface ReviewStepProps extends StepProps {
 export function ReviewStep({ draft, photos, submitting, problem, onGo, ...props }: ReviewStepProps) {
   const { form, submit } = useStepForm("review", reviewStepSchema, { consent: false }, props);
   const e = (path: string) => errorAt(form.formState.errors, path);
-  const answers = Object.fromEntries(["rider", "riding", "bike", "feel"].map((k) => [k, prepareStep(k, draft.values[k as "rider"])]));
+  const answers = Object.fromEntries(
+    ["rider", "riding", "bike", "feel"].map((k) => [k, prepareStep(k, draft.values[k as "rider"])]),
+  );
   const bikeName = (draft.values.bike?.bikeName as string) || null;
   const edit = (section: "rider" | "riding" | "bike" | "feel") => (
     <Button variant="ghost" onClick={() => onGo(STEP_OF[section]!)}>
@@ -61,11 +63,20 @@ export function ReviewStep({ draft, photos, submitting, problem, onGo, ...props 
       <AnswersList answers={answers} bikeLabel={bikeName} edit={edit} />
       <section className="rounded-xl border border-stone-200 bg-white p-4">
         <h3 className="text-lg font-semibold">Photos</h3>
-        <p className="mt-1">{photos.length ? `${photos.length} photo${photos.length > 1 ? "s" : ""}: ${photos.map((p) => p.name).join(", ")}` : "No photos added."}</p>
+        <p className="mt-1">
+          {photos.length
+            ? `${photos.length} photo${photos.length > 1 ? "s" : ""}: ${photos.map((p) => p.name).join(", ")}`
+            : "No photos added."}
+        </p>
       </section>
       <div className="flex flex-col gap-1">
         <label className="flex min-h-12 items-start gap-3 rounded-lg border border-stone-300 bg-white p-3">
-          <input type="checkbox" className="mt-0.5 h-5 w-5 shrink-0 accent-pine-700" aria-describedby={e("consent") ? "consent-error" : undefined} {...form.register("consent")} />
+          <input
+            type="checkbox"
+            className="mt-0.5 h-5 w-5 shrink-0 accent-pine-700"
+            aria-describedby={e("consent") ? "consent-error" : undefined}
+            {...form.register("consent")}
+          />
           <span>The shop may contact me by e-mail (and phone, if given) about this request.</span>
         </label>
         <ErrorText id="consent-error" message={e("consent")} />

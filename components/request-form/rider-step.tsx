@@ -38,13 +38,23 @@ export function RiderStep(props: StepProps) {
         error={e("email")}
         {...register("email")}
       />
-      <Field id="rider-phone" label="Phone (optional)" type="tel" inputMode="tel" autoComplete="tel" error={e("phone")} {...register("phone")} />
+      <Field
+        id="rider-phone"
+        label="Phone (optional)"
+        type="tel"
+        inputMode="tel"
+        autoComplete="tel"
+        error={e("phone")}
+        {...register("phone")}
+      />
       <MeasureField
         id="rider-weight"
         label="Your weight"
         register={register("weight.value")}
         error={e("weight.value") ?? e("weight") ?? e("weight.unit")}
-        unit={<UnitToggle name="weight-unit" legend="Weight unit" units={["kg", "lb"]} register={register("weight.unit")} />}
+        unit={
+          <UnitToggle name="weight-unit" legend="Weight unit" units={["kg", "lb"]} register={register("weight.unit")} />
+        }
       />
       <label className="flex min-h-12 items-center gap-3 rounded-lg border border-stone-300 bg-white px-3">
         <input type="checkbox" className="h-5 w-5 accent-pine-700" {...register("gearIncluded")} />
@@ -55,10 +65,27 @@ export function RiderStep(props: StepProps) {
         label="Height (optional)"
         register={register("height.value")}
         error={e("height.value")}
-        unit={<UnitToggle name="height-unit" legend="Height unit" units={["cm", "in"]} register={register("height.unit")} />}
+        unit={
+          <UnitToggle name="height-unit" legend="Height unit" units={["cm", "in"]} register={register("height.unit")} />
+        }
       />
-      <ChoiceGroup name="skill" legend="Skill level" type="radio" options={SKILL_LABELS} register={register("skill")} error={e("skill")} />
-      <ChoiceGroup name="style" legend="Riding style" type="radio" options={STYLE_LABELS} register={register("style")} error={e("style")} columns={1} />
+      <ChoiceGroup
+        name="skill"
+        legend="Skill level"
+        type="radio"
+        options={SKILL_LABELS}
+        register={register("skill")}
+        error={e("skill")}
+      />
+      <ChoiceGroup
+        name="style"
+        legend="Riding style"
+        type="radio"
+        options={STYLE_LABELS}
+        register={register("style")}
+        error={e("style")}
+        columns={1}
+      />
       <StepActions onBack={props.onBack} />
     </form>
   );

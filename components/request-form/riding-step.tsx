@@ -7,14 +7,41 @@ import { StepActions } from "./step-actions";
 import { useStepForm, type StepProps } from "./use-step-form";
 
 export function RidingStep(props: StepProps) {
-  const { form, submit } = useStepForm("riding", ridingStepSchema, { discipline: "", terrain: [], jumpSize: "", hoursPerMonth: "" }, props);
+  const { form, submit } = useStepForm(
+    "riding",
+    ridingStepSchema,
+    { discipline: "", terrain: [], jumpSize: "", hoursPerMonth: "" },
+    props,
+  );
   const { register, formState } = form;
   const e = (path: string) => errorAt(formState.errors, path);
   return (
     <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Your riding">
-      <ChoiceGroup name="discipline" legend="What do you ride most?" type="radio" options={DISCIPLINE_LABELS} register={register("discipline")} error={e("discipline")} />
-      <ChoiceGroup name="terrain" legend="Ground you ride on (tick all that apply)" type="checkbox" options={TERRAIN_LABELS} register={register("terrain")} error={e("terrain")} />
-      <ChoiceGroup name="jumpSize" legend="Typical jumps" type="radio" options={JUMP_LABELS} register={register("jumpSize")} error={e("jumpSize")} columns={1} />
+      <ChoiceGroup
+        name="discipline"
+        legend="What do you ride most?"
+        type="radio"
+        options={DISCIPLINE_LABELS}
+        register={register("discipline")}
+        error={e("discipline")}
+      />
+      <ChoiceGroup
+        name="terrain"
+        legend="Ground you ride on (tick all that apply)"
+        type="checkbox"
+        options={TERRAIN_LABELS}
+        register={register("terrain")}
+        error={e("terrain")}
+      />
+      <ChoiceGroup
+        name="jumpSize"
+        legend="Typical jumps"
+        type="radio"
+        options={JUMP_LABELS}
+        register={register("jumpSize")}
+        error={e("jumpSize")}
+        columns={1}
+      />
       <MeasureField
         id="riding-hours"
         label="Hours ridden per month (optional)"

@@ -3,13 +3,22 @@
 export const STEP_TITLES = ["You", "Riding", "Bike", "Feel", "Review"] as const;
 
 /** Steps already reached are buttons, so the rider can go back (or forward again) to any of them. */
-export function StepIndicator({ step, reached, onGo }: { step: number; reached: number; onGo: (step: number) => void }) {
+export function StepIndicator({
+  step,
+  reached,
+  onGo,
+}: {
+  step: number;
+  reached: number;
+  onGo: (step: number) => void;
+}) {
   return (
     <nav aria-label="Form steps">
       <ol className="grid grid-cols-5 gap-1">
         {STEP_TITLES.map((title, i) => {
           const current = i === step;
-          const base = "flex min-h-12 w-full flex-col items-center justify-center rounded-lg px-1 text-xs font-semibold leading-tight";
+          const base =
+            "flex min-h-12 w-full flex-col items-center justify-center rounded-lg px-1 text-xs font-semibold leading-tight";
           const number = (
             <span className="text-base">
               <span className="sr-only">Step </span>
@@ -25,7 +34,11 @@ export function StepIndicator({ step, reached, onGo }: { step: number; reached: 
                   {title}
                 </span>
               ) : i <= reached ? (
-                <button type="button" onClick={() => onGo(i)} className={`${base} border border-pine-700 bg-white text-pine-800 hover:bg-pine-50`}>
+                <button
+                  type="button"
+                  onClick={() => onGo(i)}
+                  className={`${base} border border-pine-700 bg-white text-pine-800 hover:bg-pine-50`}
+                >
                   {number}
                   {title}
                   <span className="sr-only"> (go to this step)</span>

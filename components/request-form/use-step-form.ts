@@ -24,7 +24,8 @@ export function useStepForm(step: string, schema: z.ZodType, defaults: Record<st
   const { subscribe } = form;
   const { onChange } = props;
   useEffect(
-    () => subscribe({ formState: { values: true }, callback: ({ values }) => onChange(values as Record<string, unknown>) }),
+    () =>
+      subscribe({ formState: { values: true }, callback: ({ values }) => onChange(values as Record<string, unknown>) }),
     [subscribe, onChange],
   );
   // Validated by the schema; the draft keeps the raw values (strings, empty fields), which is what

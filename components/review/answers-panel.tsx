@@ -29,12 +29,18 @@ export function AnswersPanel({ answers, bikeLabel }: { answers: unknown; bikeLab
   const nl = a.bike?.notListed;
   return (
     <section aria-labelledby="answers-heading" className="rounded-xl border border-stone-200 bg-white p-4">
-      <h2 id="answers-heading" className="mb-2 text-lg font-semibold">Rider&apos;s answers (as given)</h2>
+      <h2 id="answers-heading" className="mb-2 text-lg font-semibold">
+        Rider&apos;s answers (as given)
+      </h2>
       <dl className="text-sm">
         <Row label="Name">{a.rider?.name}</Row>
         <Row label="E-mail">{a.rider?.email}</Row>
         <Row label="Phone">{a.rider?.phone}</Row>
-        <Row label="Weight">{a.rider?.weight ? `${withUnit(a.rider.weight)} ${a.rider.gearIncluded ? "with riding gear" : "without gear"}` : undefined}</Row>
+        <Row label="Weight">
+          {a.rider?.weight
+            ? `${withUnit(a.rider.weight)} ${a.rider.gearIncluded ? "with riding gear" : "without gear"}`
+            : undefined}
+        </Row>
         <Row label="Height">{withUnit(a.rider?.height)}</Row>
         <Row label="Skill, style">{[a.rider?.skill, a.rider?.style].filter(Boolean).join(", ")}</Row>
         <Row label="Discipline">{words(a.riding?.discipline)}</Row>
@@ -43,13 +49,17 @@ export function AnswersPanel({ answers, bikeLabel }: { answers: unknown; bikeLab
         <Row label="Hours per month">{a.riding?.hoursPerMonth}</Row>
         <Row label="Bike">{`${bikeLabel}${a.bike?.year ? ` (${a.bike.year})` : ""}`}</Row>
         <Row label="Not in catalog">
-          {nl ? `${nl.description}; rear travel ${withUnit(nl.rearWheelTravel)}, fork travel ${withUnit(nl.forkTravel)}${nl.mass ? `, ${withUnit(nl.mass)}` : ""}` : undefined}
+          {nl
+            ? `${nl.description}; rear travel ${withUnit(nl.rearWheelTravel)}, fork travel ${withUnit(nl.forkTravel)}${nl.mass ? `, ${withUnit(nl.mass)}` : ""}`
+            : undefined}
         </Row>
         <Row label="Fork spring now">{withUnit(a.bike?.currentForkSpring)}</Row>
         <Row label="Shock spring now">{withUnit(a.bike?.currentShockSpring)}</Row>
         <Row label="Modifications">{a.bike?.modifications}</Row>
         <Row label="Complaints">{a.feel?.complaints?.length ? a.feel.complaints.map(words).join(", ") : "none"}</Row>
-        <Row label="Rider's notes">{a.feel?.notes ? <span className="whitespace-pre-line">{a.feel.notes}</span> : undefined}</Row>
+        <Row label="Rider's notes">
+          {a.feel?.notes ? <span className="whitespace-pre-line">{a.feel.notes}</span> : undefined}
+        </Row>
         <Row label="Sag measured now">{sagText}</Row>
       </dl>
     </section>

@@ -23,16 +23,32 @@ const ACTION_WORDS: Record<string, string> = {
   "email.failed": "e-mail FAILED",
 };
 
-const value = (v: unknown) => (v === null || v === undefined ? "engine's choice" : typeof v === "number" ? String(Math.round(v * 1000) / 1000) : String(v));
+const value = (v: unknown) =>
+  v === null || v === undefined
+    ? "engine's choice"
+    : typeof v === "number"
+      ? String(Math.round(v * 1000) / 1000)
+      : String(v);
 const status = (s: unknown) => STATUS_LABELS[s as RequestStatus] ?? String(s);
 
 function Detail({ action, detail }: { action: string; detail: Record<string, unknown> }) {
-  if (action === "request.status_changed") return <>{status(detail.from)} → {status(detail.to)}</>;
+  if (action === "request.status_changed")
+    return (
+      <>
+        {status(detail.from)} → {status(detail.to)}
+      </>
+    );
   if (action === "request.assigned") return <>to {String(detail.toName ?? "nobody")}</>;
   if (action === "request.question_asked") return <>“{String(detail.question)}”</>;
   if (action === "request.declined") return <>reason: “{String(detail.reason)}”</>;
   if (action === "recommendation.approved") return <>version {String(detail.version)}</>;
-  if (action.startsWith("email.")) return <>{String(detail.template)} to {String(detail.to)}{detail.error ? ` (${String(detail.error)})` : ""}</>;
+  if (action.startsWith("email."))
+    return (
+      <>
+        {String(detail.template)} to {String(detail.to)}
+        {detail.error ? ` (${String(detail.error)})` : ""}
+      </>
+    );
   if (action === "recommendation.saved") {
     const changes = (detail.changes as { field: string; from: unknown; to: unknown }[] | undefined) ?? [];
     return (
@@ -56,15 +72,18 @@ function Detail({ action, detail }: { action: string; detail: Record<string, unk
   return null;
 }
 
-
 export function AuditTimeline({ events }: { events: AuditItem[] }) {
   return (
     <section aria-labelledby="audit-heading" className="rounded-xl border border-stone-200 bg-white p-4">
-      <h2 id="audit-heading" className="mb-2 text-lg font-semibold">History</h2>
+      <h2 id="audit-heading" className="mb-2 text-lg font-semibold">
+        History
+      </h2>
       <ol className="flex flex-col gap-2 border-l-2 border-pine-100 pl-4 text-sm">
         {events.map((e) => (
           <li key={e.id} className={e.action === "email.failed" ? "rounded bg-red-50 p-1 text-red-900" : ""}>
-            <time dateTime={e.createdAt.toISOString()} className="text-stone-600">{formatDateTime(e.createdAt)}</time>{" "}
+            <time dateTime={e.createdAt.toISOString()} className="text-stone-600">
+              {formatDateTime(e.createdAt)}
+            </time>{" "}
             <span className="font-medium">{e.actorLabel}</span> {ACTION_WORDS[e.action] ?? e.action}{" "}
             <Detail action={e.action} detail={(e.detail ?? {}) as Record<string, unknown>} />
           </li>

@@ -6,8 +6,8 @@ export function CalibrationNote({ output }: { output: Recommendation }) {
   if (!reports) return null;
   return (
     <p className="rounded-lg bg-pine-50 px-3 py-2 text-sm text-pine-900">
-      <span className="font-semibold">Calibrated loads:</span> this version used the bike model&apos;s calibration from {reports} sag
-      report{reports === 1 ? "" : "s"} of the shop&apos;s riders, not the catalog&apos;s weight split.
+      <span className="font-semibold">Calibrated loads:</span> this version used the bike model&apos;s calibration from{" "}
+      {reports} sag report{reports === 1 ? "" : "s"} of the shop&apos;s riders, not the catalog&apos;s weight split.
     </p>
   );
 }

@@ -3,7 +3,14 @@
 // engine's exact factors (convertRate).
 import { z } from "zod";
 import { compactOverrides } from "@/lib/review/overrides-diff";
-import { CLICKER_IDS, convertRate, type ClickerId, type RateBasis, type RateUnit, type SetupOverrides } from "@/lib/sizing";
+import {
+  CLICKER_IDS,
+  convertRate,
+  type ClickerId,
+  type RateBasis,
+  type RateUnit,
+  type SetupOverrides,
+} from "@/lib/sizing";
 import { saveRecommendationSchema } from "@/lib/validations/review";
 
 export interface EditorValues {
@@ -30,7 +37,11 @@ export interface EditorValues {
 
 const str = (v: number | undefined) => (v === undefined ? "" : String(Math.round(v * 1000) / 1000));
 
-export function valuesFrom(o: SetupOverrides, notesForRider: string | null, internalNotes: string | null): EditorValues {
+export function valuesFrom(
+  o: SetupOverrides,
+  notesForRider: string | null,
+  internalNotes: string | null,
+): EditorValues {
   return {
     rateBasis: o.rateBasis ?? "",
     rearRate: str(o.rear?.rateNmm),
@@ -104,13 +115,16 @@ export function overridesFrom(v: EditorValues, airFork: boolean): { overrides: S
  * keyed by the engine's paths ("rear.rateNmm"), as the inputs and the server name them.
  */
 export function editorSchema(airFork: boolean) {
-  return z.custom<EditorValues>((v) => typeof v === "object" && v !== null).superRefine((values, ctx) => {
-    const { overrides, errors } = overridesFrom(values, airFork);
-    for (const [path, message] of Object.entries(errors)) ctx.addIssue({ code: "custom", path: [path], message });
-    const checked = saveRecommendationSchema.shape.overrides.safeParse(overrides);
-    if (!checked.success)
-      for (const issue of checked.error.issues) ctx.addIssue({ code: "custom", path: [issue.path.join(".")], message: issue.message });
-  });
+  return z
+    .custom<EditorValues>((v) => typeof v === "object" && v !== null)
+    .superRefine((values, ctx) => {
+      const { overrides, errors } = overridesFrom(values, airFork);
+      for (const [path, message] of Object.entries(errors)) ctx.addIssue({ code: "custom", path: [path], message });
+      const checked = saveRecommendationSchema.shape.overrides.safeParse(overrides);
+      if (!checked.success)
+        for (const issue of checked.error.issues)
+          ctx.addIssue({ code: "custom", path: [issue.path.join(".")], message: issue.message });
+    });
 }
 
 /** react-hook-form's nested errors back to `{ "rear.rateNmm": message }`. */
@@ -119,7 +133,8 @@ export function flatErrors(errors: object, prefix = ""): FieldErrors {
   for (const [key, value] of Object.entries(errors)) {
     if (!value || typeof value !== "object") continue;
     const path = prefix ? `${prefix}.${key}` : key;
-    if (typeof (value as { message?: unknown }).message === "string") out[path] = (value as { message: string }).message;
+    if (typeof (value as { message?: unknown }).message === "string")
+      out[path] = (value as { message: string }).message;
     else Object.assign(out, flatErrors(value, path));
   }
   return out;

@@ -12,7 +12,14 @@ type Set = (patch: Partial<EditorValues>) => void;
 const fixed = (v: number | null | undefined, d: number) => (v === null || v === undefined ? "" : v.toFixed(d));
 const selectClass = "min-h-11 rounded-lg border border-stone-300 bg-white px-3 py-2 text-base";
 
-function NumberInput(props: { id: string; label: string; value: string; engine: string; error?: string; onChange: (v: string) => void }) {
+function NumberInput(props: {
+  id: string;
+  label: string;
+  value: string;
+  engine: string;
+  error?: string;
+  onChange: (v: string) => void;
+}) {
   return (
     <Field
       id={props.id}
@@ -67,13 +74,18 @@ function RateInput(props: {
         {props.currentNmm === undefined ? (
           "The rider did not give the spring fitted now."
         ) : (
-          <>
-            Rider&apos;s spring now: {threeUnits(props.currentNmm)}
-          </>
+          <>Rider&apos;s spring now: {threeUnits(props.currentNmm)}</>
         )}
       </p>
       <div className="grid grid-cols-[1fr_auto] items-start gap-2">
-        <NumberInput id={props.id} label={props.label} value={props.value} engine={engine} error={props.error} onChange={(v) => props.onChange(v, props.unit)} />
+        <NumberInput
+          id={props.id}
+          label={props.label}
+          value={props.value}
+          engine={engine}
+          error={props.error}
+          onChange={(v) => props.onChange(v, props.unit)}
+        />
         <label className="flex flex-col gap-1 text-sm font-medium text-stone-800">
           Unit
           <select
@@ -84,12 +96,17 @@ function RateInput(props: {
               const to = e.target.value as RateUnit;
               const n = Number(props.value.replace(",", "."));
               // Keep the same spring when only the unit changes.
-              const converted = props.value.trim() && Number.isFinite(n) ? String(Number(convertRate(n, props.unit, to).toFixed(4))) : props.value;
+              const converted =
+                props.value.trim() && Number.isFinite(n)
+                  ? String(Number(convertRate(n, props.unit, to).toFixed(4)))
+                  : props.value;
               props.onChange(converted, to);
             }}
           >
             {RATE_UNITS.map((u) => (
-              <option key={u} value={u}>{u}</option>
+              <option key={u} value={u}>
+                {u}
+              </option>
             ))}
           </select>
         </label>
@@ -113,12 +130,50 @@ export function RearInputs({ v, set, engine, errors, stock, current }: EndInputs
   return (
     <fieldset className="flex flex-col gap-3">
       <legend className="mb-2 text-lg font-semibold">Shock</legend>
-      <RateInput id="rear-rate" label="Shock spring rate" value={v.rearRate} unit={v.rearRateUnit} engineNmm={engine.rear.chosenRate.nMm} stockNmm={stock} currentNmm={current} error={errors["rear.rateNmm"]} onChange={(rearRate, rearRateUnit) => set({ rearRate, rearRateUnit })} />
-      <NumberInput id="rear-preload" label="Shock preload (mm)" value={v.rearPreload} engine={fixed(engine.rear.preloadMm, 1)} error={errors["rear.preloadMm"]} onChange={(rearPreload) => set({ rearPreload })} />
+      <RateInput
+        id="rear-rate"
+        label="Shock spring rate"
+        value={v.rearRate}
+        unit={v.rearRateUnit}
+        engineNmm={engine.rear.chosenRate.nMm}
+        stockNmm={stock}
+        currentNmm={current}
+        error={errors["rear.rateNmm"]}
+        onChange={(rearRate, rearRateUnit) => set({ rearRate, rearRateUnit })}
+      />
+      <NumberInput
+        id="rear-preload"
+        label="Shock preload (mm)"
+        value={v.rearPreload}
+        engine={fixed(engine.rear.preloadMm, 1)}
+        error={errors["rear.preloadMm"]}
+        onChange={(rearPreload) => set({ rearPreload })}
+      />
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-3">
-        <NumberInput id="rear-race" label="Rear race sag target (mm)" value={v.rearRaceSag} engine={fixed(t.raceSagMm, 0)} error={errors["rear.raceSagMm"]} onChange={(rearRaceSag) => set({ rearRaceSag })} />
-        <NumberInput id="rear-static-min" label="Rear static sag min (mm)" value={v.rearStaticMin} engine={fixed(t.staticSagMinMm, 0)} error={errors["rear.staticSagMinMm"]} onChange={(rearStaticMin) => set({ rearStaticMin })} />
-        <NumberInput id="rear-static-max" label="Rear static sag max (mm)" value={v.rearStaticMax} engine={fixed(t.staticSagMaxMm, 0)} error={errors["rear.staticSagMaxMm"]} onChange={(rearStaticMax) => set({ rearStaticMax })} />
+        <NumberInput
+          id="rear-race"
+          label="Rear race sag target (mm)"
+          value={v.rearRaceSag}
+          engine={fixed(t.raceSagMm, 0)}
+          error={errors["rear.raceSagMm"]}
+          onChange={(rearRaceSag) => set({ rearRaceSag })}
+        />
+        <NumberInput
+          id="rear-static-min"
+          label="Rear static sag min (mm)"
+          value={v.rearStaticMin}
+          engine={fixed(t.staticSagMinMm, 0)}
+          error={errors["rear.staticSagMinMm"]}
+          onChange={(rearStaticMin) => set({ rearStaticMin })}
+        />
+        <NumberInput
+          id="rear-static-max"
+          label="Rear static sag max (mm)"
+          value={v.rearStaticMax}
+          engine={fixed(t.staticSagMaxMm, 0)}
+          error={errors["rear.staticSagMaxMm"]}
+          onChange={(rearStaticMax) => set({ rearStaticMax })}
+        />
       </div>
     </fieldset>
   );
@@ -130,28 +185,92 @@ export function FrontInputs({ v, set, engine, errors, stock, current }: EndInput
   const air = f.kind === "air";
   return (
     <fieldset className="flex flex-col gap-3">
-      <legend className="mb-2 text-lg font-semibold">Fork ({air ? "air spring" : f.kind === "coil-single" ? "one coil spring" : "coil springs in both legs"})</legend>
+      <legend className="mb-2 text-lg font-semibold">
+        Fork ({air ? "air spring" : f.kind === "coil-single" ? "one coil spring" : "coil springs in both legs"})
+      </legend>
       {air ? (
-        <NumberInput id="front-air" label="Fork air pressure (kPa, gauge)" value={v.frontAirKpa} engine={fixed(f.airPressure?.kpaGauge, 0)} error={errors["front.airPressureKpaGauge"]} onChange={(frontAirKpa) => set({ frontAirKpa })} />
+        <NumberInput
+          id="front-air"
+          label="Fork air pressure (kPa, gauge)"
+          value={v.frontAirKpa}
+          engine={fixed(f.airPressure?.kpaGauge, 0)}
+          error={errors["front.airPressureKpaGauge"]}
+          onChange={(frontAirKpa) => set({ frontAirKpa })}
+        />
       ) : (
         <>
-          <RateInput id="front-rate" label="Fork spring rate (per spring)" value={v.frontRate} unit={v.frontRateUnit} engineNmm={f.chosenRate?.nMm ?? null} stockNmm={stock} currentNmm={current} error={errors["front.rateNmm"]} onChange={(frontRate, frontRateUnit) => set({ frontRate, frontRateUnit })} />
+          <RateInput
+            id="front-rate"
+            label="Fork spring rate (per spring)"
+            value={v.frontRate}
+            unit={v.frontRateUnit}
+            engineNmm={f.chosenRate?.nMm ?? null}
+            stockNmm={stock}
+            currentNmm={current}
+            error={errors["front.rateNmm"]}
+            onChange={(frontRate, frontRateUnit) => set({ frontRate, frontRateUnit })}
+          />
           <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-            <NumberInput id="front-preload" label="Fork preload (mm)" value={v.frontPreload} engine={fixed(f.preloadMm, 1)} error={errors["front.preloadMm"]} onChange={(frontPreload) => set({ frontPreload })} />
-            <NumberInput id="front-oil" label="Fork oil level (mm from top)" value={v.frontOilLevel} engine={fixed(f.oilLevelMm, 0)} error={errors["front.oilLevelMm"]} onChange={(frontOilLevel) => set({ frontOilLevel })} />
+            <NumberInput
+              id="front-preload"
+              label="Fork preload (mm)"
+              value={v.frontPreload}
+              engine={fixed(f.preloadMm, 1)}
+              error={errors["front.preloadMm"]}
+              onChange={(frontPreload) => set({ frontPreload })}
+            />
+            <NumberInput
+              id="front-oil"
+              label="Fork oil level (mm from top)"
+              value={v.frontOilLevel}
+              engine={fixed(f.oilLevelMm, 0)}
+              error={errors["front.oilLevelMm"]}
+              onChange={(frontOilLevel) => set({ frontOilLevel })}
+            />
           </div>
         </>
       )}
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-3">
-        <NumberInput id="front-race" label="Fork race sag target (mm)" value={v.frontRaceSag} engine={fixed(t.raceSagMm, 0)} error={errors["front.raceSagMm"]} onChange={(frontRaceSag) => set({ frontRaceSag })} />
-        <NumberInput id="front-static-min" label="Fork static sag min (mm)" value={v.frontStaticMin} engine={fixed(t.staticSagMinMm, 0)} error={errors["front.staticSagMinMm"]} onChange={(frontStaticMin) => set({ frontStaticMin })} />
-        <NumberInput id="front-static-max" label="Fork static sag max (mm)" value={v.frontStaticMax} engine={fixed(t.staticSagMaxMm, 0)} error={errors["front.staticSagMaxMm"]} onChange={(frontStaticMax) => set({ frontStaticMax })} />
+        <NumberInput
+          id="front-race"
+          label="Fork race sag target (mm)"
+          value={v.frontRaceSag}
+          engine={fixed(t.raceSagMm, 0)}
+          error={errors["front.raceSagMm"]}
+          onChange={(frontRaceSag) => set({ frontRaceSag })}
+        />
+        <NumberInput
+          id="front-static-min"
+          label="Fork static sag min (mm)"
+          value={v.frontStaticMin}
+          engine={fixed(t.staticSagMinMm, 0)}
+          error={errors["front.staticSagMinMm"]}
+          onChange={(frontStaticMin) => set({ frontStaticMin })}
+        />
+        <NumberInput
+          id="front-static-max"
+          label="Fork static sag max (mm)"
+          value={v.frontStaticMax}
+          engine={fixed(t.staticSagMaxMm, 0)}
+          error={errors["front.staticSagMaxMm"]}
+          onChange={(frontStaticMax) => set({ frontStaticMax })}
+        />
       </div>
     </fieldset>
   );
 }
 
-export function ClickerInputs({ v, set, engine, errors }: { v: EditorValues; set: Set; engine: Recommendation; errors: FieldErrors }) {
+export function ClickerInputs({
+  v,
+  set,
+  engine,
+  errors,
+}: {
+  v: EditorValues;
+  set: Set;
+  engine: Recommendation;
+  errors: FieldErrors;
+}) {
   return (
     <fieldset className="grid grid-cols-1 gap-3 sm:grid-cols-2">
       <legend className="mb-2 text-lg font-semibold">Clickers (counted out from fully closed)</legend>

@@ -1,6 +1,12 @@
 // Recomputing in the browser: lib/sizing is pure TypeScript and evaluates in well under a
 // millisecond, so every keystroke re-runs the engine; the server runs it again on save.
-import { SizingInputError, evaluateSetup, type Recommendation, type SetupOverrides, type SizingInput } from "@/lib/sizing";
+import {
+  SizingInputError,
+  evaluateSetup,
+  type Recommendation,
+  type SetupOverrides,
+  type SizingInput,
+} from "@/lib/sizing";
 
 export type LiveResult = { ok: true; rec: Recommendation } | { ok: false; errors: Record<string, string> };
 
@@ -9,7 +15,10 @@ export function evaluateLive(input: SizingInput, overrides: SetupOverrides): Liv
     return { ok: true, rec: evaluateSetup(input, overrides) };
   } catch (error) {
     if (error instanceof SizingInputError)
-      return { ok: false, errors: Object.fromEntries(error.issues.map((i) => [i.path.replace(/^overrides\./, ""), i.message])) };
+      return {
+        ok: false,
+        errors: Object.fromEntries(error.issues.map((i) => [i.path.replace(/^overrides\./, ""), i.message])),
+      };
     throw error;
   }
 }

@@ -2,7 +2,15 @@
 import { RATE_BASIS_LABELS } from "@/components/request-form/labels";
 import { RATE_BASES, type RateBasis } from "@/lib/sizing";
 
-export function RateBasisInput({ value, onChange, used }: { value: RateBasis | ""; onChange: (v: RateBasis | "") => void; used: RateBasis | undefined }) {
+export function RateBasisInput({
+  value,
+  onChange,
+  used,
+}: {
+  value: RateBasis | "";
+  onChange: (v: RateBasis | "") => void;
+  used: RateBasis | undefined;
+}) {
   return (
     <label className="flex flex-col gap-1 text-sm font-medium">
       How the spring rates are found

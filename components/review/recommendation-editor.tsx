@@ -31,7 +31,15 @@ export interface EditableVersion {
   internalNotes: string | null;
 }
 
-export function RecommendationEditor({ requestId, input, latest }: { requestId: string; input: SizingInput; latest: EditableVersion }) {
+export function RecommendationEditor({
+  requestId,
+  input,
+  latest,
+}: {
+  requestId: string;
+  input: SizingInput;
+  latest: EditableVersion;
+}) {
   const router = useRouter();
   const initial = useMemo(() => valuesFrom(latest.overrides, latest.notesForRider, latest.internalNotes), [latest]);
   const [message, setMessage] = useState<{ kind: "error" | "ok"; text: string } | null>(null);
@@ -67,7 +75,12 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   const frozen = latest.state !== "draft";
   const invalid = Object.keys(schemaErrors).length > 0 || !live.ok;
 
-  if (!engine.ok || !shown) return <p role="alert">The engine could not size this request: {Object.values(engine.ok ? {} : engine.errors).join("; ")}</p>;
+  if (!engine.ok || !shown)
+    return (
+      <p role="alert">
+        The engine could not size this request: {Object.values(engine.ok ? {} : engine.errors).join("; ")}
+      </p>
+    );
 
   const set = (patch: Partial<EditorValues>) => {
     for (const [name, value] of Object.entries(patch))
@@ -80,7 +93,12 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
     const r = await callApi<{ version: number }>(
       `/api/requests/${requestId}/recommendation`,
       "PATCH",
-      { basedOnVersion: latest.version, overrides, notesForRider: values.notesForRider, internalNotes: values.internalNotes },
+      {
+        basedOnVersion: latest.version,
+        overrides,
+        notesForRider: values.notesForRider,
+        internalNotes: values.internalNotes,
+      },
       { offline: NOT_SENT },
     );
     if (!r.ok) {
@@ -99,11 +117,20 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
       if (dirty) version = await save();
       if (version === null) return;
       if (action === "approve") {
-        const acknowledgedWarnings = acknowledged && shown ? shown.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code) : [];
-        const r = await callApi(`/api/requests/${requestId}/approve`, "POST", { version, acknowledgedWarnings }, { offline: NOT_SENT });
+        const acknowledgedWarnings =
+          acknowledged && shown ? shown.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code) : [];
+        const r = await callApi(
+          `/api/requests/${requestId}/approve`,
+          "POST",
+          { version, acknowledgedWarnings },
+          { offline: NOT_SENT },
+        );
         if (!r.ok) return setMessage({ kind: "error", text: errorWithFields(r) });
         // The e-mail is queued with the approval and goes out at once; E-mails below shows how it went.
-        setMessage({ kind: "ok", text: `Version ${version} approved. The rider is being e-mailed the sheet link (see E-mails below).` });
+        setMessage({
+          kind: "ok",
+          text: `Version ${version} approved. The rider is being e-mailed the sheet link (see E-mails below).`,
+        });
       } else setMessage({ kind: "ok", text: `Saved as draft version ${version}.` });
       router.refresh();
     } finally {
@@ -116,35 +143,70 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
   const critical = r.warnings.filter((w) => w.severity === "critical" || w.requiresAcknowledgement);
   return (
     <section aria-labelledby="adjust-heading" className="flex flex-col gap-4">
-      <h2 id="adjust-heading" className="text-xl font-semibold">Adjust version {latest.version}{frozen ? " (approved)" : " (draft)"}</h2>
+      <h2 id="adjust-heading" className="text-xl font-semibold">
+        Adjust version {latest.version}
+        {frozen ? " (approved)" : " (draft)"}
+      </h2>
       {frozen ? (
         <p className="rounded-lg border border-sky-200 bg-sky-50 px-3 py-2 text-sm text-sky-900">
-          Version {latest.version} is approved and frozen. Saving a change creates version {latest.version + 1} as a draft; approving it sends the rider the revised sheet.
+          Version {latest.version} is approved and frozen. Saving a change creates version {latest.version + 1} as a
+          draft; approving it sends the rider the revised sheet.
         </p>
       ) : null}
       <p role="status" aria-label="Predicted sag" className="rounded-lg bg-pine-50 px-3 py-2 text-sm text-pine-900">
-        Predicted rear race sag {r.rear.predicted.raceSagMm.toFixed(1)} mm, static {r.rear.predicted.staticSagMm.toFixed(1)} mm; fork race sag{" "}
-        {r.front.predicted.raceSagMm.toFixed(1)} mm, static {r.front.predicted.staticSagMm.toFixed(1)} mm.
+        Predicted rear race sag {r.rear.predicted.raceSagMm.toFixed(1)} mm, static{" "}
+        {r.rear.predicted.staticSagMm.toFixed(1)} mm; fork race sag {r.front.predicted.raceSagMm.toFixed(1)} mm, static{" "}
+        {r.front.predicted.staticSagMm.toFixed(1)} mm.
         {!live.ok ? " (Showing the last valid figures: fix the marked field.)" : ""}
       </p>
       <div className="grid gap-6 lg:grid-cols-2">
-        <form className="flex flex-col gap-6" aria-label="Adjust the recommendation" onSubmit={form.handleSubmit(() => run("save"))}>
-          <RateBasisInput value={values.rateBasis} onChange={(rateBasis) => set({ rateBasis })} used={r.resolved.rateBasis} />
-          <RearInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.shockRatesNmm} current={input.currentSprings?.shockRateNmm} />
-          <FrontInputs v={values} set={set} engine={engine.rec} errors={errors} stock={input.stock.forkRatesNmm} current={input.currentSprings?.forkRateNmm} />
+        <form
+          className="flex flex-col gap-6"
+          aria-label="Adjust the recommendation"
+          onSubmit={form.handleSubmit(() => run("save"))}
+        >
+          <RateBasisInput
+            value={values.rateBasis}
+            onChange={(rateBasis) => set({ rateBasis })}
+            used={r.resolved.rateBasis}
+          />
+          <RearInputs
+            v={values}
+            set={set}
+            engine={engine.rec}
+            errors={errors}
+            stock={input.stock.shockRatesNmm}
+            current={input.currentSprings?.shockRateNmm}
+          />
+          <FrontInputs
+            v={values}
+            set={set}
+            engine={engine.rec}
+            errors={errors}
+            stock={input.stock.forkRatesNmm}
+            current={input.currentSprings?.forkRateNmm}
+          />
           <ClickerInputs v={values} set={set} engine={engine.rec} errors={errors} />
           <NotesInputs v={values} set={set} />
           {message ? (
-            <p role={message.kind === "error" ? "alert" : "status"} className={`rounded-lg px-3 py-2 text-sm ${message.kind === "error" ? "bg-red-50 text-red-900" : "bg-emerald-50 text-emerald-900"}`}>
+            <p
+              role={message.kind === "error" ? "alert" : "status"}
+              className={`rounded-lg px-3 py-2 text-sm ${message.kind === "error" ? "bg-red-50 text-red-900" : "bg-emerald-50 text-emerald-900"}`}
+            >
               {message.text}
             </p>
           ) : null}
           {critical.length ? (
             <label className="flex items-start gap-2 rounded-lg border border-red-300 bg-red-50 px-3 py-2 text-sm text-red-900">
-              <input type="checkbox" className="mt-1 size-5" checked={acknowledged} onChange={(e) => setAcknowledged(e.target.checked)} />
+              <input
+                type="checkbox"
+                className="mt-1 size-5"
+                checked={acknowledged}
+                onChange={(e) => setAcknowledged(e.target.checked)}
+              />
               <span>
-                This setup has {critical.length} warning{critical.length === 1 ? "" : "s"} to check (see the list). I have checked them
-                against the manufacturer&apos;s manual and approve anyway.
+                This setup has {critical.length} warning{critical.length === 1 ? "" : "s"} to check (see the list). I
+                have checked them against the manufacturer&apos;s manual and approve anyway.
               </span>
             </label>
           ) : null}
@@ -152,10 +214,21 @@ export function RecommendationEditor({ requestId, input, latest }: { requestId: 
             <Button type="submit" variant="secondary" disabled={busy || invalid || !dirty}>
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
-            <Button onClick={() => void form.handleSubmit(() => run("approve"))()} disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}>
+            <Button
+              onClick={() => void form.handleSubmit(() => run("approve"))()}
+              disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}
+            >
               {dirty ? "Save and approve" : "Approve"} — e-mail the rider
             </Button>
-            <Button variant="ghost" disabled={busy || !dirty} onClick={() => { form.reset(initial); setServerErrors({}); setMessage(null); }}>
+            <Button
+              variant="ghost"
+              disabled={busy || !dirty}
+              onClick={() => {
+                form.reset(initial);
+                setServerErrors({});
+                setMessage(null);
+              }}
+            >
               Undo unsaved changes
             </Button>
           </div>

@@ -2,7 +2,17 @@
 import type { Recommendation } from "@/lib/sizing";
 import { BALANCE_FIGURES, FRONT_FIGURES, REAR_FIGURES, clickerFigures, formatFigure, type Figure } from "./figures";
 
-function Section({ title, figures, engine, current }: { title: string; figures: Figure[]; engine: Recommendation; current: Recommendation }) {
+function Section({
+  title,
+  figures,
+  engine,
+  current,
+}: {
+  title: string;
+  figures: Figure[];
+  engine: Recommendation;
+  current: Recommendation;
+}) {
   const rows = figures.filter((f) => f.value(engine) !== null || f.value(current) !== null);
   if (rows.length === 0) return null;
   return (
@@ -37,23 +47,49 @@ function Section({ title, figures, engine, current }: { title: string; figures: 
   );
 }
 
-export function ResultsTable({ engine, current, caption }: { engine: Recommendation; current: Recommendation; caption: string }) {
+export function ResultsTable({
+  engine,
+  current,
+  caption,
+}: {
+  engine: Recommendation;
+  current: Recommendation;
+  caption: string;
+}) {
   return (
     <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-sm">
         <caption className="px-3 py-2 text-left font-semibold">{caption}</caption>
         <thead className="bg-stone-100 text-stone-700">
           <tr>
-            <th scope="col" className="px-3 py-2 text-left">Figure</th>
-            <th scope="col" className="px-3 py-2 text-right">Engine proposal</th>
-            <th scope="col" className="px-3 py-2 text-right">This version</th>
-            <th scope="col" className="px-3 py-2 text-left">Against proposal</th>
+            <th scope="col" className="px-3 py-2 text-left">
+              Figure
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              Engine proposal
+            </th>
+            <th scope="col" className="px-3 py-2 text-right">
+              This version
+            </th>
+            <th scope="col" className="px-3 py-2 text-left">
+              Against proposal
+            </th>
           </tr>
         </thead>
         <Section title="Shock (rear)" figures={REAR_FIGURES} engine={engine} current={current} />
-        <Section title={`Fork (${current.front.kind === "air" ? "air spring" : "coil springs"})`} figures={FRONT_FIGURES} engine={engine} current={current} />
+        <Section
+          title={`Fork (${current.front.kind === "air" ? "air spring" : "coil springs"})`}
+          figures={FRONT_FIGURES}
+          engine={engine}
+          current={current}
+        />
         <Section title="Balance" figures={BALANCE_FIGURES} engine={engine} current={current} />
-        <Section title="Clickers (from fully closed)" figures={clickerFigures(current)} engine={engine} current={current} />
+        <Section
+          title="Clickers (from fully closed)"
+          figures={clickerFigures(current)}
+          engine={engine}
+          current={current}
+        />
       </table>
     </div>
   );

@@ -13,14 +13,24 @@ export interface VersionSummary {
   approvedByName: string | null;
 }
 
-
 export function sheetLinkFor(requestId: string, v: { version: number; state: string }) {
   return v.state === "draft"
-    ? { href: `/api/requests/${requestId}/sheet?version=${v.version}&preview=1`, label: `Preview sheet (draft) v${v.version}` }
+    ? {
+        href: `/api/requests/${requestId}/sheet?version=${v.version}&preview=1`,
+        label: `Preview sheet (draft) v${v.version}`,
+      }
     : { href: sheetPath(requestId, v.version), label: `Setup sheet v${v.version} (PDF)` };
 }
 
-export function VersionPicker({ requestId, versions, shown }: { requestId: string; versions: VersionSummary[]; shown: number }) {
+export function VersionPicker({
+  requestId,
+  versions,
+  shown,
+}: {
+  requestId: string;
+  versions: VersionSummary[];
+  shown: number;
+}) {
   return (
     <nav aria-label="Versions" className="rounded-xl border border-stone-200 bg-white p-4">
       <h2 className="mb-2 text-lg font-semibold">Versions</h2>
@@ -37,9 +47,16 @@ export function VersionPicker({ requestId, versions, shown }: { requestId: strin
                 Version {v.version}: {STATE_WORDS[v.state]}
               </Link>
               <span className="text-stone-600">
-                {v.approvedAt ? `approved ${formatDay(v.approvedAt)}${v.approvedByName ? ` by ${v.approvedByName}` : ""}` : `made ${formatDay(v.createdAt)}`}
+                {v.approvedAt
+                  ? `approved ${formatDay(v.approvedAt)}${v.approvedByName ? ` by ${v.approvedByName}` : ""}`
+                  : `made ${formatDay(v.createdAt)}`}
               </span>
-              <a href={sheet.href} className="inline-flex min-h-11 items-center text-pine-700 underline" target="_blank" rel="noreferrer">
+              <a
+                href={sheet.href}
+                className="inline-flex min-h-11 items-center text-pine-700 underline"
+                target="_blank"
+                rel="noreferrer"
+              >
                 {sheet.label}
               </a>
             </li>

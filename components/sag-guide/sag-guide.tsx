@@ -26,8 +26,22 @@ function RearEnd({ drop, rider, stand }: { drop: number; rider?: boolean; stand?
       {stand ? <rect x="120" y="95" width="40" height="45" fill="#d6d3d1" stroke={ink} /> : null}
       <circle cx="70" cy={stand ? axleY - 12 : axleY} r="28" fill="none" stroke={ink} strokeWidth="6" />
       <circle cx="70" cy={stand ? axleY - 12 : axleY} r="4" fill={ink} />
-      <line x1="70" y1={stand ? axleY - 12 : axleY} x2="170" y2={70 + drop / 2} stroke={ink} strokeWidth="6" strokeLinecap="round" />
-      <path d={`M40 ${fenderY} L140 ${fenderY - 6} L200 ${fenderY - 10}`} fill="none" stroke={ink} strokeWidth="4" strokeLinecap="round" />
+      <line
+        x1="70"
+        y1={stand ? axleY - 12 : axleY}
+        x2="170"
+        y2={70 + drop / 2}
+        stroke={ink}
+        strokeWidth="6"
+        strokeLinecap="round"
+      />
+      <path
+        d={`M40 ${fenderY} L140 ${fenderY - 6} L200 ${fenderY - 10}`}
+        fill="none"
+        stroke={ink}
+        strokeWidth="4"
+        strokeLinecap="round"
+      />
       {rider ? (
         <g stroke={pine} strokeWidth="5" strokeLinecap="round" fill="none">
           <circle cx="160" cy={fenderY - 48} r="9" fill={pine} />
@@ -35,7 +49,15 @@ function RearEnd({ drop, rider, stand }: { drop: number; rider?: boolean; stand?
           <line x1="150" y1={fenderY - 12} x2="170" y2={fenderY + 12} />
         </g>
       ) : null}
-      <line x1="70" y1={stand ? axleY - 16 : axleY - 4} x2="70" y2={fenderY + 2} stroke={amber} strokeWidth="3" strokeDasharray="6 3" />
+      <line
+        x1="70"
+        y1={stand ? axleY - 16 : axleY - 4}
+        x2="70"
+        y2={fenderY + 2}
+        stroke={amber}
+        strokeWidth="3"
+        strokeDasharray="6 3"
+      />
       <text x="78" y={(fenderY + axleY) / 2 + 4} fontSize="13" fill={amber} fontWeight="700">
         {stand ? "L1" : rider ? "L3" : "L2"}
       </text>
@@ -50,23 +72,34 @@ export function SagGuide() {
         How to measure sag
       </h3>
       <p className="text-stone-700">
-        Pick two fixed points and always measure between the same two: at the rear, the axle centre and a mark on the fender or side panel
-        straight above it; at the front, the wiper seal and the axle clamp. A helper makes it easier.
+        Pick two fixed points and always measure between the same two: at the rear, the axle centre and a mark on the
+        fender or side panel straight above it; at the front, the wiper seal and the axle clamp. A helper makes it
+        easier.
       </p>
       <div className="grid gap-3 md:grid-cols-3">
-        <Figure title="1. Fully extended (L1)" caption="Bike on a stand, wheel off the ground. Measure between the two points.">
+        <Figure
+          title="1. Fully extended (L1)"
+          caption="Bike on a stand, wheel off the ground. Measure between the two points."
+        >
           <RearEnd drop={0} stand />
         </Figure>
-        <Figure title="2. Static sag = L1 − L2" caption="Bike on its wheels, on its own weight. Bounce it gently, let it settle, measure L2.">
+        <Figure
+          title="2. Static sag = L1 − L2"
+          caption="Bike on its wheels, on its own weight. Bounce it gently, let it settle, measure L2."
+        >
           <RearEnd drop={10} />
         </Figure>
-        <Figure title="3. Race sag = L1 − L3" caption="You aboard in full gear, standing on the pegs in your riding position. Measure L3.">
+        <Figure
+          title="3. Race sag = L1 − L3"
+          caption="You aboard in full gear, standing on the pegs in your riding position. Measure L3."
+        >
           <RearEnd drop={30} rider />
         </Figure>
       </div>
       <p className="text-sm text-stone-700">
-        Free sag (optional): with the bike on its own weight, lift the end a little and let it settle by itself, without bouncing; measure as
-        for static sag. The gap between the two readings tells the tuner about friction in seals and linkage.
+        Free sag (optional): with the bike on its own weight, lift the end a little and let it settle by itself, without
+        bouncing; measure as for static sag. The gap between the two readings tells the tuner about friction in seals
+        and linkage.
       </p>
     </section>
   );

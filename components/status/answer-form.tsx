@@ -26,7 +26,10 @@ export function AnswerForm({ requestId, token }: { requestId: string; token?: st
       `/api/status/${requestId}/answer`,
       "POST",
       { ...values, token },
-      { offline: "No connection. Your answer is still in the box: send again when you have signal.", fallback: "The answer could not be sent." },
+      {
+        offline: "No connection. Your answer is still in the box: send again when you have signal.",
+        fallback: "The answer could not be sent.",
+      },
     );
     if (sent.ok) {
       router.refresh();
@@ -37,7 +40,12 @@ export function AnswerForm({ requestId, token }: { requestId: string; token?: st
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Answer the shop">
-      <TextAreaField id="answer-body" label="Your answer" register={register("body")} error={formState.errors.body?.message} />
+      <TextAreaField
+        id="answer-body"
+        label="Your answer"
+        register={register("body")}
+        error={formState.errors.body?.message}
+      />
       {problem ? (
         <p role="alert" className="text-sm font-medium text-red-700">
           {problem}

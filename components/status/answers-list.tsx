@@ -58,7 +58,10 @@ export function AnswersList({ answers, bikeLabel, edit }: AnswersListProps) {
   const sagText = sag
     ? (["rearStatic", "rearRace", "forkStatic", "forkRace"] as const)
         .filter((k) => sag[k] !== undefined && sag[k] !== "")
-        .map((k) => `${{ rearStatic: "rear static", rearRace: "rear race", forkStatic: "fork static", forkRace: "fork race" }[k]} ${sag[k]} ${sag.unit}`)
+        .map(
+          (k) =>
+            `${{ rearStatic: "rear static", rearRace: "rear race", forkStatic: "fork static", forkRace: "fork race" }[k]} ${sag[k]} ${sag.unit}`,
+        )
         .join(", ") || null
     : null;
   const rate = (v: unknown) => measure(v);
@@ -71,7 +74,10 @@ export function AnswersList({ answers, bikeLabel, edit }: AnswersListProps) {
           ["Name", rider.name as string],
           ["E-mail", rider.email as string],
           ["Phone", (rider.phone as string) || null],
-          ["Weight", measure(rider.weight) && `${measure(rider.weight)} (${rider.gearIncluded ? "with gear" : "without gear"})`],
+          [
+            "Weight",
+            measure(rider.weight) && `${measure(rider.weight)} (${rider.gearIncluded ? "with gear" : "without gear"})`,
+          ],
           ["Height", measure(rider.height)],
           ["Skill", label(SKILL_LABELS, rider.skill)],
           ["Style", label(STYLE_LABELS, rider.style)],
@@ -84,7 +90,10 @@ export function AnswersList({ answers, bikeLabel, edit }: AnswersListProps) {
           ["Discipline", label(DISCIPLINE_LABELS, riding.discipline)],
           ["Terrain", list(TERRAIN_LABELS, riding.terrain)],
           ["Jumps", label(JUMP_LABELS, riding.jumpSize)],
-          ["Hours a month", riding.hoursPerMonth !== undefined && riding.hoursPerMonth !== "" ? String(riding.hoursPerMonth) : null],
+          [
+            "Hours a month",
+            riding.hoursPerMonth !== undefined && riding.hoursPerMonth !== "" ? String(riding.hoursPerMonth) : null,
+          ],
         ]}
       />
       <Section

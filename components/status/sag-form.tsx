@@ -25,7 +25,11 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm<FieldValues>({
     resolver: zodResolver(sagReportSchema as never, { error: friendlyError }) as never,
-    defaultValues: { unit: metric ? "mm" : "in", front: { free: "", static: "", race: "" }, rear: { free: "", static: "", race: "" } },
+    defaultValues: {
+      unit: metric ? "mm" : "in",
+      front: { free: "", static: "", race: "" },
+      rear: { free: "", static: "", race: "" },
+    },
   });
   const { register, formState, setError } = form;
   const e = (path: string) => errorAt(formState.errors, path);
@@ -37,7 +41,10 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
       `/api/status/${requestId}/sag`,
       "POST",
       { ...raw, token },
-      { offline: "No connection. Your figures are still in the form: send again when you have signal.", fallback: "The report could not be sent." },
+      {
+        offline: "No connection. Your figures are still in the form: send again when you have signal.",
+        fallback: "The report could not be sent.",
+      },
     );
     if (sent.ok) {
       setResult(sent.data?.verdict ?? {});
@@ -58,7 +65,14 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
         <fieldset key={end} className="flex min-w-0 flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
           <legend className="px-1 font-semibold">{end === "rear" ? "Rear (shock)" : "Front (fork)"}</legend>
           {READINGS.map(([key, text]) => (
-            <MeasureField key={key} id={`${end}-${key}`} label={`${end === "rear" ? "Rear" : "Front"} ${text.toLowerCase()}`} register={register(`${end}.${key}`)} error={e(`${end}.${key}`)} unit={null} />
+            <MeasureField
+              key={key}
+              id={`${end}-${key}`}
+              label={`${end === "rear" ? "Rear" : "Front"} ${text.toLowerCase()}`}
+              register={register(`${end}.${key}`)}
+              error={e(`${end}.${key}`)}
+              unit={null}
+            />
           ))}
         </fieldset>
       ))}
@@ -69,7 +83,9 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
       {result ? (
         <div role="status" aria-live="polite" className="flex flex-col gap-2">
           <h4 className="font-semibold">What the numbers say</h4>
-          {(["rear", "front"] as const).map((end) => (result[end] ? <VerdictCard key={end} verdict={result[end]} /> : null))}
+          {(["rear", "front"] as const).map((end) =>
+            result[end] ? <VerdictCard key={end} verdict={result[end]} /> : null,
+          )}
         </div>
       ) : null}
     </form>

@@ -16,7 +16,8 @@ const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4
 
 export function StatusView({ data, token, justSent }: { data: RiderStatus; token?: string; justSent?: boolean }) {
   const { request, versions, messages, photos, reports } = data;
-  const withToken = (path: string) => (token ? `${path}${path.includes("?") ? "&" : "?"}token=${encodeURIComponent(token)}` : path);
+  const withToken = (path: string) =>
+    token ? `${path}${path.includes("?") ? "&" : "?"}token=${encodeURIComponent(token)}` : path;
   const answers = request.answers;
   const metric = answers.rider?.weight?.unit !== "lb";
   const lastQuestion = [...messages].reverse().find((m) => m.author === "tuner");
@@ -40,7 +41,9 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
 
       {request.status === "declined" && request.declineReason ? (
         <section className={box} aria-labelledby="decline-heading">
-          <h2 id="decline-heading" className="text-lg font-semibold">Why the shop declined</h2>
+          <h2 id="decline-heading" className="text-lg font-semibold">
+            Why the shop declined
+          </h2>
           <p className="whitespace-pre-line">{request.declineReason}</p>
         </section>
       ) : null}
@@ -53,26 +56,36 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
           <ul className="flex flex-col gap-2">
             {messages.map((m) => (
               <li key={m.id} className={`rounded-lg p-3 ${m.author === "tuner" ? "bg-violet-50" : "bg-stone-100"}`}>
-                <p className="text-sm font-semibold">{m.author === "tuner" ? "Shop" : "You"} · {formatDay(m.createdAt)}</p>
+                <p className="text-sm font-semibold">
+                  {m.author === "tuner" ? "Shop" : "You"} · {formatDay(m.createdAt)}
+                </p>
                 <p className="whitespace-pre-line">{m.body}</p>
               </li>
             ))}
           </ul>
-          {request.status === "waiting_for_rider" && lastQuestion ? <AnswerForm requestId={request.id} token={token} /> : null}
+          {request.status === "waiting_for_rider" && lastQuestion ? (
+            <AnswerForm requestId={request.id} token={token} />
+          ) : null}
         </section>
       ) : null}
 
       {versions.length ? (
         <section className={box} aria-labelledby="sheets-heading">
-          <h2 id="sheets-heading" className="text-lg font-semibold">Your setup sheet</h2>
+          <h2 id="sheets-heading" className="text-lg font-semibold">
+            Your setup sheet
+          </h2>
           <ul className="flex flex-col gap-2">
             {versions.map((v, i) => (
               <li key={v.id} className="flex flex-col gap-1">
-                <a href={sheetPath(request.id, v.version, token)} className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline">
+                <a
+                  href={sheetPath(request.id, v.version, token)}
+                  className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline"
+                >
                   Download setup sheet, version {v.version} (PDF)
                 </a>
                 <span className="text-sm text-stone-600">
-                  Approved {v.approvedAt ? formatDay(v.approvedAt) : ""}{i === 0 ? " · current" : " · replaced by a newer version"}
+                  Approved {v.approvedAt ? formatDay(v.approvedAt) : ""}
+                  {i === 0 ? " · current" : " · replaced by a newer version"}
                 </span>
                 {i === 0 && v.notesForRider ? <p className="rounded-lg bg-pine-50 p-3">{v.notesForRider}</p> : null}
               </li>
@@ -83,9 +96,12 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
 
       {request.status === "approved" ? (
         <section className={box} aria-labelledby="sag-heading">
-          <h2 id="sag-heading" className="text-lg font-semibold">Report your sag</h2>
+          <h2 id="sag-heading" className="text-lg font-semibold">
+            Report your sag
+          </h2>
           <p className="text-stone-700">
-            After fitting the springs, measure sag and enter it here: you get an answer at once, and the tuner sees it too.
+            After fitting the springs, measure sag and enter it here: you get an answer at once, and the tuner sees it
+            too.
           </p>
           <SafetyCaution />
           <SagGuide />
@@ -98,7 +114,9 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
                 return (
                   <div key={r.id} className="flex flex-col gap-2">
                     <p className="text-sm text-stone-600">Reported {formatDay(r.createdAt)}</p>
-                    {(["rear", "front"] as const).map((end) => (verdict[end] ? <VerdictCard key={end} verdict={verdict[end]} /> : null))}
+                    {(["rear", "front"] as const).map((end) =>
+                      verdict[end] ? <VerdictCard key={end} verdict={verdict[end]} /> : null,
+                    )}
                   </div>
                 );
               })}
@@ -109,14 +127,20 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
 
       {photos.length ? (
         <section className={box} aria-labelledby="photos-heading">
-          <h2 id="photos-heading" className="text-lg font-semibold">Your photos</h2>
+          <h2 id="photos-heading" className="text-lg font-semibold">
+            Your photos
+          </h2>
           <ul className="grid grid-cols-2 gap-2 sm:grid-cols-3">
             {photos.map((p, i) => (
               <li key={p.id}>
                 <a href={withToken(`/api/uploads/${p.id}`)} className="block rounded-lg border border-stone-200 p-1">
                   {/* Served by our own guarded route; next/image would cache it outside the guard. */}
                   {/* eslint-disable-next-line @next/next/no-img-element */}
-                  <img src={withToken(`/api/uploads/${p.id}`)} alt={`Photo ${i + 1}: ${p.originalName}`} className="aspect-square w-full rounded object-cover" />
+                  <img
+                    src={withToken(`/api/uploads/${p.id}`)}
+                    alt={`Photo ${i + 1}: ${p.originalName}`}
+                    className="aspect-square w-full rounded object-cover"
+                  />
                 </a>
               </li>
             ))}
@@ -125,7 +149,9 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
       ) : null}
 
       <section className="flex flex-col gap-3" aria-labelledby="answers-heading">
-        <h2 id="answers-heading" className="text-lg font-semibold">Your answers</h2>
+        <h2 id="answers-heading" className="text-lg font-semibold">
+          Your answers
+        </h2>
         <AnswersList answers={request.answers} bikeLabel={request.bikeLabel} />
       </section>
     </div>

@@ -27,7 +27,17 @@ export interface SpringDraft {
 const number = { setValueAs: toNumber() };
 const nullableNumber = { setValueAs: toNumber(null) };
 
-export function SpringForm({ id, initial, onDone, label }: { id?: string; initial: SpringDraft; onDone: () => void; label: string }) {
+export function SpringForm({
+  id,
+  initial,
+  onDone,
+  label,
+}: {
+  id?: string;
+  initial: SpringDraft;
+  onDone: () => void;
+  label: string;
+}) {
   const [message, setMessage] = useState<string | null>(null);
   const { register, handleSubmit, setError, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
     resolver: zodResolver(springStockSchema),
@@ -44,17 +54,37 @@ export function SpringForm({ id, initial, onDone, label }: { id?: string; initia
   });
 
   const num = (name: "rate" | "quantity", fid: string, text: string) => (
-    <Field id={`${prefix}-${fid}`} label={text} inputMode="decimal" error={errors[name]?.message} {...register(name, number)} />
+    <Field
+      id={`${prefix}-${fid}`}
+      label={text}
+      inputMode="decimal"
+      error={errors[name]?.message}
+      {...register(name, number)}
+    />
   );
   const mm = (name: "freeLengthMm" | "innerDiameterMm", fid: string, text: string) => (
-    <Field id={`${prefix}-${fid}`} label={text} inputMode="decimal" error={errors[name]?.message} {...register(name, nullableNumber)} />
+    <Field
+      id={`${prefix}-${fid}`}
+      label={text}
+      inputMode="decimal"
+      error={errors[name]?.message}
+      {...register(name, nullableNumber)}
+    />
   );
 
   return (
-    <form onSubmit={submit} noValidate aria-label={label} className="grid items-end gap-3 sm:grid-cols-4 lg:grid-cols-8">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-label={label}
+      className="grid items-end gap-3 sm:grid-cols-4 lg:grid-cols-8"
+    >
       <label className="flex flex-col gap-1 text-sm font-medium">
         End
-        <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("end", { deps: ["rate"] })}>
+        <select
+          className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+          {...register("end", { deps: ["rate"] })}
+        >
           <option value="fork">Fork</option>
           <option value="shock">Shock</option>
         </select>
@@ -62,8 +92,15 @@ export function SpringForm({ id, initial, onDone, label }: { id?: string; initia
       {num("rate", "rate", "Rate")}
       <label className="flex flex-col gap-1 text-sm font-medium">
         Rate unit
-        <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("rateUnit", { deps: ["rate"] })}>
-          {RATE_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
+        <select
+          className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+          {...register("rateUnit", { deps: ["rate"] })}
+        >
+          {RATE_UNITS.map((u) => (
+            <option key={u} value={u}>
+              {u}
+            </option>
+          ))}
         </select>
       </label>
       {num("quantity", "qty", "Quantity")}
@@ -74,8 +111,14 @@ export function SpringForm({ id, initial, onDone, label }: { id?: string; initia
         <input className="min-h-11 rounded-lg border border-stone-300 px-2" {...register("fitNotes")} />
         {errors.fitNotes ? <span className="text-red-700">{errors.fitNotes.message}</span> : null}
       </label>
-      <Button type="submit" disabled={formState.isSubmitting}>{id ? "Save" : "Add spring"}</Button>
-      {message ? <p role="alert" className="text-sm text-red-800 sm:col-span-4 lg:col-span-8">{message}</p> : null}
+      <Button type="submit" disabled={formState.isSubmitting}>
+        {id ? "Save" : "Add spring"}
+      </Button>
+      {message ? (
+        <p role="alert" className="text-sm text-red-800 sm:col-span-4 lg:col-span-8">
+          {message}
+        </p>
+      ) : null}
     </form>
   );
 }

@@ -17,7 +17,11 @@ type Trigger = ClickerRule["trigger"];
 const RATE_TRIGGERS = ["rear-stiffer", "rear-softer", "front-stiffer", "front-softer"] as const;
 
 function triggerKey(t: Trigger): string {
-  return t.kind === "complaint" ? `complaint:${t.complaint}` : t.kind === "terrain" ? `terrain:${t.terrain}` : `rate:${t.end}-${t.direction}`;
+  return t.kind === "complaint"
+    ? `complaint:${t.complaint}`
+    : t.kind === "terrain"
+      ? `terrain:${t.terrain}`
+      : `rate:${t.end}-${t.direction}`;
 }
 
 function triggerFrom(key: string, old: Trigger): Trigger {
@@ -25,17 +29,31 @@ function triggerFrom(key: string, old: Trigger): Trigger {
   if (kind === "complaint") return { kind: "complaint", complaint: value as never };
   if (kind === "terrain") return { kind: "terrain", terrain: value as never };
   const [end, direction] = value.split("-") as ["front" | "rear", "stiffer" | "softer"];
-  return { kind: "rate-change", end, direction, minChangeFraction: old.kind === "rate-change" ? old.minChangeFraction : 0.08 };
+  return {
+    kind: "rate-change",
+    end,
+    direction,
+    minChangeFraction: old.kind === "rate-change" ? old.minChangeFraction : 0.08,
+  };
 }
 
 const cell = "min-h-11 rounded-lg border border-stone-300 bg-white px-2 text-sm";
 
 type Schema = typeof clickerRulesSchema;
-const NEW_RULE: ClickerRule = { trigger: { kind: "complaint", complaint: "bottoming" }, clicker: "forkCompression", change: -1, reason: "" };
+const NEW_RULE: ClickerRule = {
+  trigger: { kind: "complaint", complaint: "bottoming" },
+  clicker: "forkCompression",
+  change: -1,
+  reason: "",
+};
 
 export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   const router = useRouter();
-  const { control, register, handleSubmit, setError, reset, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+  const { control, register, handleSubmit, setError, reset, formState } = useForm<
+    z.input<Schema>,
+    unknown,
+    z.output<Schema>
+  >({
     resolver: zodResolver(clickerRulesSchema),
     defaultValues: { rules: initial },
   });
@@ -46,7 +64,8 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   const save = handleSubmit(
     async (values) => {
       const r = await callApi("/api/shop/targets/rules", "PUT", values);
-      if (!r.ok) return setMessage([r.error, ...applyServerErrors(setError, r.fields, { fields: ["rules"] })].join(" "));
+      if (!r.ok)
+        return setMessage([r.error, ...applyServerErrors(setError, r.fields, { fields: ["rules"] })].join(" "));
       setMessage("Rules saved.");
       router.refresh();
     },
@@ -64,12 +83,30 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
   };
 
   return (
-    <section aria-labelledby="clicker-rules" className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
-      <h2 id="clicker-rules" className="font-semibold">Clicker rules</h2>
-      <p className="text-sm text-stone-600">Change in clicks (turns for shock high-speed); a positive change is out, less damping. Rate-change rules fire when the chosen spring differs from stock by at least the given share.</p>
+    <section
+      aria-labelledby="clicker-rules"
+      className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4"
+    >
+      <h2 id="clicker-rules" className="font-semibold">
+        Clicker rules
+      </h2>
+      <p className="text-sm text-stone-600">
+        Change in clicks (turns for shock high-speed); a positive change is out, less damping. Rate-change rules fire
+        when the chosen spring differs from stock by at least the given share.
+      </p>
       <div className="overflow-x-auto">
         <table className="w-full text-left text-sm">
-          <thead><tr className="text-stone-600"><th scope="col">When</th><th scope="col">Clicker</th><th scope="col">Change</th><th scope="col">Reason shown to the rider</th><th scope="col"><span className="sr-only">Remove</span></th></tr></thead>
+          <thead>
+            <tr className="text-stone-600">
+              <th scope="col">When</th>
+              <th scope="col">Clicker</th>
+              <th scope="col">Change</th>
+              <th scope="col">Reason shown to the rider</th>
+              <th scope="col">
+                <span className="sr-only">Remove</span>
+              </th>
+            </tr>
+          </thead>
           <tbody>
             {fields.map((f, i) => {
               const change = problem(`rules.${i}.change`);
@@ -81,10 +118,35 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
                       control={control}
                       name={`rules.${i}.trigger`}
                       render={({ field }) => (
-                        <select aria-label={`Rule ${i + 1} trigger`} className={cell} value={triggerKey(field.value)} onChange={(e) => field.onChange(triggerFrom(e.target.value, field.value))} onBlur={field.onBlur} ref={field.ref}>
-                          <optgroup label="Complaint">{COMPLAINTS.map((c) => <option key={c} value={`complaint:${c}`}>{c}</option>)}</optgroup>
-                          <optgroup label="Terrain">{TERRAINS.map((t) => <option key={t} value={`terrain:${t}`}>{t}</option>)}</optgroup>
-                          <optgroup label="Spring change">{RATE_TRIGGERS.map((t) => <option key={t} value={`rate:${t}`}>{t.replace("-", " spring ")}</option>)}</optgroup>
+                        <select
+                          aria-label={`Rule ${i + 1} trigger`}
+                          className={cell}
+                          value={triggerKey(field.value)}
+                          onChange={(e) => field.onChange(triggerFrom(e.target.value, field.value))}
+                          onBlur={field.onBlur}
+                          ref={field.ref}
+                        >
+                          <optgroup label="Complaint">
+                            {COMPLAINTS.map((c) => (
+                              <option key={c} value={`complaint:${c}`}>
+                                {c}
+                              </option>
+                            ))}
+                          </optgroup>
+                          <optgroup label="Terrain">
+                            {TERRAINS.map((t) => (
+                              <option key={t} value={`terrain:${t}`}>
+                                {t}
+                              </option>
+                            ))}
+                          </optgroup>
+                          <optgroup label="Spring change">
+                            {RATE_TRIGGERS.map((t) => (
+                              <option key={t} value={`rate:${t}`}>
+                                {t.replace("-", " spring ")}
+                              </option>
+                            ))}
+                          </optgroup>
                         </select>
                       )}
                     />
@@ -92,18 +154,37 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
                   </td>
                   <td className="py-1 pr-2">
                     <select aria-label={`Rule ${i + 1} clicker`} className={cell} {...register(`rules.${i}.clicker`)}>
-                      {CLICKER_IDS.map((c) => <option key={c} value={c}>{c}</option>)}
+                      {CLICKER_IDS.map((c) => (
+                        <option key={c} value={c}>
+                          {c}
+                        </option>
+                      ))}
                     </select>
                   </td>
                   <td className="py-1 pr-2">
-                    <input aria-label={`Rule ${i + 1} change`} aria-invalid={change.invalid} className={`${cell} w-20`} inputMode="decimal" {...register(`rules.${i}.change`, { setValueAs: toNumber() })} />
+                    <input
+                      aria-label={`Rule ${i + 1} change`}
+                      aria-invalid={change.invalid}
+                      className={`${cell} w-20`}
+                      inputMode="decimal"
+                      {...register(`rules.${i}.change`, { setValueAs: toNumber() })}
+                    />
                     {change.note}
                   </td>
                   <td className="py-1 pr-2">
-                    <input aria-label={`Rule ${i + 1} reason`} aria-invalid={reason.invalid} className={`${cell} w-full min-w-64`} {...register(`rules.${i}.reason`)} />
+                    <input
+                      aria-label={`Rule ${i + 1} reason`}
+                      aria-invalid={reason.invalid}
+                      className={`${cell} w-full min-w-64`}
+                      {...register(`rules.${i}.reason`)}
+                    />
                     {reason.note}
                   </td>
-                  <td className="py-1"><Button variant="ghost" aria-label={`Remove rule ${i + 1}`} onClick={() => remove(i)}>Remove</Button></td>
+                  <td className="py-1">
+                    <Button variant="ghost" aria-label={`Remove rule ${i + 1}`} onClick={() => remove(i)}>
+                      Remove
+                    </Button>
+                  </td>
                 </tr>
               );
             })}
@@ -111,12 +192,22 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
         </table>
       </div>
       <div className="flex flex-wrap gap-2">
-        <Button variant="secondary" onClick={() => append(NEW_RULE)}>Add rule</Button>
-        <Button onClick={save} disabled={formState.isSubmitting}>Save rules</Button>
-        <Button variant="secondary" onClick={resetRules}>Reset to default rules</Button>
+        <Button variant="secondary" onClick={() => append(NEW_RULE)}>
+          Add rule
+        </Button>
+        <Button onClick={save} disabled={formState.isSubmitting}>
+          Save rules
+        </Button>
+        <Button variant="secondary" onClick={resetRules}>
+          Reset to default rules
+        </Button>
       </div>
       {err("rules") ? <p className="text-sm font-medium text-red-700">{err("rules")}</p> : null}
-      {message ? <p role="status" className="text-sm">{message}</p> : null}
+      {message ? (
+        <p role="status" className="text-sm">
+          {message}
+        </p>
+      ) : null}
     </section>
   );
 }

@@ -32,9 +32,23 @@ const pct = (f: number | undefined) => (f === undefined ? undefined : Math.round
 type Schema = typeof targetRowValuesSchema;
 const number = { setValueAs: toNumber() };
 
-export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: Discipline; skill: SkillLevel; saved: TargetRowValues; bikes: PreviewBike[] }) {
+export function TargetEditor({
+  discipline,
+  skill,
+  saved,
+  bikes,
+}: {
+  discipline: Discipline;
+  skill: SkillLevel;
+  saved: TargetRowValues;
+  bikes: PreviewBike[];
+}) {
   const router = useRouter();
-  const { control, register, handleSubmit, setError, reset, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+  const { control, register, handleSubmit, setError, reset, formState } = useForm<
+    z.input<Schema>,
+    unknown,
+    z.output<Schema>
+  >({
     resolver: zodResolver(targetRowValuesSchema),
     defaultValues: { ...saved, rateBasis: saved.rateBasis ?? "ride-frequency" },
   });
@@ -47,7 +61,10 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
   const save = handleSubmit(
     async (row) => {
       const result = await callApi("/api/shop/targets", "PUT", { discipline, skill, values: row });
-      if (!result.ok) return setMessage([result.error, ...applyServerErrors(setError, result.fields, { prefix: "values." })].join(" "));
+      if (!result.ok)
+        return setMessage(
+          [result.error, ...applyServerErrors(setError, result.fields, { prefix: "values." })].join(" "),
+        );
       setMessage("Saved.");
       router.refresh();
     },
@@ -63,12 +80,25 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
   }
 
   return (
-    <section aria-labelledby="target-editor" className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4">
-      <h2 id="target-editor" className="font-semibold capitalize">{discipline}, {skill}</h2>
+    <section
+      aria-labelledby="target-editor"
+      className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4"
+    >
+      <h2 id="target-editor" className="font-semibold capitalize">
+        {discipline}, {skill}
+      </h2>
       <label className="flex max-w-md flex-col gap-1 text-sm font-medium">
         Reference bike (for mm and the preview)
-        <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={bikeId} onChange={(e) => setBikeId(e.target.value)}>
-          {bikes.map((b) => <option key={b.id} value={b.id}>{b.name}</option>)}
+        <select
+          className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+          value={bikeId}
+          onChange={(e) => setBikeId(e.target.value)}
+        >
+          {bikes.map((b) => (
+            <option key={b.id} value={b.id}>
+              {b.name}
+            </option>
+          ))}
         </select>
       </label>
       <div className="grid gap-4 sm:grid-cols-3">
@@ -89,28 +119,62 @@ export function TargetEditor({ discipline, skill, saved, bikes }: { discipline: 
                   label={`${label} (% of travel)`}
                   value={pct(field.value)}
                   onChange={(v) => field.onChange(v === undefined ? undefined : v / 100)}
-                  hint={f !== undefined && travel ? `${(f * travel).toFixed(0)} mm on ${travel} mm of ${end} travel` : undefined}
+                  hint={
+                    f !== undefined && travel
+                      ? `${(f * travel).toFixed(0)} mm on ${travel} mm of ${end} travel`
+                      : undefined
+                  }
                   error={fieldState.error?.message}
                 />
               );
             }}
           />
         ))}
-        <Field id="riderRearShare" label="Rider weight on the rear wheel (0–1)" inputMode="decimal" error={errors.riderRearShare?.message} {...register("riderRearShare", number)} />
-        <Field id="rateFactor" label="Rate factor (× the matched rate)" inputMode="decimal" error={errors.rateFactor?.message} {...register("rateFactor", number)} />
-        <Field id="bottomingFactor" label="Bottoming factor (× stock)" inputMode="decimal" error={errors.bottomingFactor?.message} {...register("bottomingFactor", number)} />
+        <Field
+          id="riderRearShare"
+          label="Rider weight on the rear wheel (0–1)"
+          inputMode="decimal"
+          error={errors.riderRearShare?.message}
+          {...register("riderRearShare", number)}
+        />
+        <Field
+          id="rateFactor"
+          label="Rate factor (× the matched rate)"
+          inputMode="decimal"
+          error={errors.rateFactor?.message}
+          {...register("rateFactor", number)}
+        />
+        <Field
+          id="bottomingFactor"
+          label="Bottoming factor (× stock)"
+          inputMode="decimal"
+          error={errors.bottomingFactor?.message}
+          {...register("bottomingFactor", number)}
+        />
         <label className="flex flex-col gap-1 text-sm font-medium sm:col-span-3">
           How the spring rate is found
-          <select id="rateBasis" className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("rateBasis", { setValueAs: (v) => v || undefined })}>
+          <select
+            id="rateBasis"
+            className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+            {...register("rateBasis", { setValueAs: (v) => v || undefined })}
+          >
             <RateBasisOptions />
           </select>
         </label>
       </div>
       <div className="flex flex-wrap gap-2">
-        <Button onClick={save} disabled={formState.isSubmitting}>Save row</Button>
-        <Button variant="secondary" onClick={resetRow}>Reset to defaults</Button>
+        <Button onClick={save} disabled={formState.isSubmitting}>
+          Save row
+        </Button>
+        <Button variant="secondary" onClick={resetRow}>
+          Reset to defaults
+        </Button>
       </div>
-      {message ? <p role="status" className="text-sm">{message}</p> : null}
+      {message ? (
+        <p role="status" className="text-sm">
+          {message}
+        </p>
+      ) : null}
       {bike ? <TargetPreview discipline={discipline} skill={skill} values={values} bike={bike} /> : null}
     </section>
   );

@@ -38,11 +38,29 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
 
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Accept invitation" className="flex max-w-md flex-col gap-4">
-      <p className="text-sm text-stone-700">Your account: <strong>{email}</strong></p>
-      <Field id="invite-name" label="Your name" autoComplete="name" error={formState.errors.name?.message} {...register("name")} />
-      <Field id="invite-password" label="Password" type="password" autoComplete="new-password" hint="At least 10 characters" error={formState.errors.password?.message} {...register("password")} />
+      <p className="text-sm text-stone-700">
+        Your account: <strong>{email}</strong>
+      </p>
+      <Field
+        id="invite-name"
+        label="Your name"
+        autoComplete="name"
+        error={formState.errors.name?.message}
+        {...register("name")}
+      />
+      <Field
+        id="invite-password"
+        label="Password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters"
+        error={formState.errors.password?.message}
+        {...register("password")}
+      />
       <FormAlert message={failure ?? tokenError} />
-      <Button type="submit" disabled={formState.isSubmitting}>{formState.isSubmitting ? "Setting up…" : "Join the workspace"}</Button>
+      <Button type="submit" disabled={formState.isSubmitting}>
+        {formState.isSubmitting ? "Setting up…" : "Join the workspace"}
+      </Button>
     </form>
   );
 }

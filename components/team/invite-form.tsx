@@ -14,7 +14,11 @@ type Schema = typeof inviteSchema;
 export type InviteMessage = { ok: boolean; text: string };
 
 export function InviteForm({ onResult }: { onResult: (message: InviteMessage) => void }) {
-  const { register, handleSubmit, setError, resetField, formState } = useForm<z.input<Schema>, unknown, z.output<Schema>>({
+  const { register, handleSubmit, setError, resetField, formState } = useForm<
+    z.input<Schema>,
+    unknown,
+    z.output<Schema>
+  >({
     resolver: zodResolver(inviteSchema),
     defaultValues: { email: "", role: "tuner" },
   });
@@ -30,8 +34,20 @@ export function InviteForm({ onResult }: { onResult: (message: InviteMessage) =>
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Invite to the team" className="flex flex-wrap items-end gap-3 rounded-xl border border-stone-200 bg-white p-4">
-      <Field id="invite-email" label="E-mail" type="email" error={formState.errors.email?.message} className="min-w-64" {...register("email")} />
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label="Invite to the team"
+      className="flex flex-wrap items-end gap-3 rounded-xl border border-stone-200 bg-white p-4"
+    >
+      <Field
+        id="invite-email"
+        label="E-mail"
+        type="email"
+        error={formState.errors.email?.message}
+        className="min-w-64"
+        {...register("email")}
+      />
       <label className="flex flex-col gap-1 text-sm font-medium">
         Role
         <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("role")}>
@@ -40,7 +56,9 @@ export function InviteForm({ onResult }: { onResult: (message: InviteMessage) =>
         </select>
         {formState.errors.role ? <span className="text-red-700">{formState.errors.role.message}</span> : null}
       </label>
-      <Button type="submit" disabled={formState.isSubmitting}>Send invitation</Button>
+      <Button type="submit" disabled={formState.isSubmitting}>
+        Send invitation
+      </Button>
     </form>
   );
 }

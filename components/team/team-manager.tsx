@@ -21,7 +21,15 @@ export interface OpenInvite {
   expiresAt: string;
 }
 
-export function TeamManager({ members, invites, selfId }: { members: Member[]; invites: OpenInvite[]; selfId: string }) {
+export function TeamManager({
+  members,
+  invites,
+  selfId,
+}: {
+  members: Member[];
+  invites: OpenInvite[];
+  selfId: string;
+}) {
   const router = useRouter();
   const [message, setMessage] = useState<InviteMessage | null>(null);
 
@@ -39,18 +47,51 @@ export function TeamManager({ members, invites, selfId }: { members: Member[]; i
           if (m.ok) router.refresh();
         }}
       />
-      {message ? <p role={message.ok ? "status" : "alert"} className={`rounded-lg p-3 text-sm ${message.ok ? "bg-pine-50" : "bg-red-50 text-red-800"}`}>{message.text}</p> : null}
+      {message ? (
+        <p
+          role={message.ok ? "status" : "alert"}
+          className={`rounded-lg p-3 text-sm ${message.ok ? "bg-pine-50" : "bg-red-50 text-red-800"}`}
+        >
+          {message.text}
+        </p>
+      ) : null}
       <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Team members</caption>
-          <thead className="bg-stone-100 text-stone-700"><tr><th scope="col" className="px-3 py-2">Name</th><th scope="col" className="px-3">E-mail</th><th scope="col" className="px-3">Role</th><th scope="col" className="px-3">Status</th><th scope="col" className="px-3"><span className="sr-only">Actions</span></th></tr></thead>
+          <thead className="bg-stone-100 text-stone-700">
+            <tr>
+              <th scope="col" className="px-3 py-2">
+                Name
+              </th>
+              <th scope="col" className="px-3">
+                E-mail
+              </th>
+              <th scope="col" className="px-3">
+                Role
+              </th>
+              <th scope="col" className="px-3">
+                Status
+              </th>
+              <th scope="col" className="px-3">
+                <span className="sr-only">Actions</span>
+              </th>
+            </tr>
+          </thead>
           <tbody>
             {members.map((m) => (
               <tr key={m.id} className="border-t border-stone-100">
-                <td className="px-3 py-2">{m.name}{m.id === selfId ? " (you)" : ""}</td>
+                <td className="px-3 py-2">
+                  {m.name}
+                  {m.id === selfId ? " (you)" : ""}
+                </td>
                 <td className="px-3">{m.email}</td>
                 <td className="px-3">
-                  <select aria-label={`Role of ${m.name}`} className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" value={m.role} onChange={(e) => change(m.id, { role: e.target.value })}>
+                  <select
+                    aria-label={`Role of ${m.name}`}
+                    className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+                    value={m.role}
+                    onChange={(e) => change(m.id, { role: e.target.value })}
+                  >
                     <option value="tuner">Tuner</option>
                     <option value="admin">Admin</option>
                   </select>
@@ -58,9 +99,13 @@ export function TeamManager({ members, invites, selfId }: { members: Member[]; i
                 <td className="px-3">{m.banned ? "Deactivated" : "Active"}</td>
                 <td className="px-3">
                   {m.id === selfId ? null : m.banned ? (
-                    <Button variant="secondary" onClick={() => change(m.id, { active: true })}>Reactivate {m.name}</Button>
+                    <Button variant="secondary" onClick={() => change(m.id, { active: true })}>
+                      Reactivate {m.name}
+                    </Button>
                   ) : (
-                    <Button variant="danger" onClick={() => change(m.id, { active: false })}>Deactivate {m.name}</Button>
+                    <Button variant="danger" onClick={() => change(m.id, { active: false })}>
+                      Deactivate {m.name}
+                    </Button>
                   )}
                 </td>
               </tr>
@@ -70,8 +115,16 @@ export function TeamManager({ members, invites, selfId }: { members: Member[]; i
       </div>
       {invites.length ? (
         <section aria-labelledby="open-invites">
-          <h2 id="open-invites" className="mb-2 font-semibold">Open invitations</h2>
-          <ul className="text-sm">{invites.map((i) => <li key={i.id}>{i.email} as {i.role}, until {i.expiresAt.slice(0, 10)}</li>)}</ul>
+          <h2 id="open-invites" className="mb-2 font-semibold">
+            Open invitations
+          </h2>
+          <ul className="text-sm">
+            {invites.map((i) => (
+              <li key={i.id}>
+                {i.email} as {i.role}, until {i.expiresAt.slice(0, 10)}
+              </li>
+            ))}
+          </ul>
         </section>
       ) : null}
     </div>

@@ -24,13 +24,25 @@ export function CoilSpringTool() {
   const parsed = coilGeometrySchema.safeParse(useWatch({ control }));
   const report = parsed.success ? coilReport(parsed.data) : null;
   const n = (k: NumKey, label: string, hint?: string) => (
-    <Field id={`coil-${k}`} label={label} hint={hint} inputMode="decimal" error={formState.errors[k]?.message} {...register(k, { setValueAs: toNumber(), deps: DEPS[k] })} />
+    <Field
+      id={`coil-${k}`}
+      label={label}
+      hint={hint}
+      inputMode="decimal"
+      error={formState.errors[k]?.message}
+      {...register(k, { setValueAs: toNumber(), deps: DEPS[k] })}
+    />
   );
   return (
     <CalcCard
       id="coil-tool"
       title="Spring check from wire and coils"
-      formula={<>k = G·d⁴ / (8·D³·nₐ) with D = OD − d; C = D/d; K_W = (4C − 1)/(4C − 4) + 0.615/C; τ = K_W·8·F·D/(π·d³). Active coils nₐ by end type: squared and ground or squared: total − 2; plain: total; plain and ground: total − 1.</>}
+      formula={
+        <>
+          k = G·d⁴ / (8·D³·nₐ) with D = OD − d; C = D/d; K_W = (4C − 1)/(4C − 4) + 0.615/C; τ = K_W·8·F·D/(π·d³). Active
+          coils nₐ by end type: squared and ground or squared: total − 2; plain: total; plain and ground: total − 1.
+        </>
+      }
       source="Shigley, Mechanical Engineering Design, 10th ed.: eq. 10-9 (rate), eq. 10-4 (Wahl factor), eqs. 10-1 and 10-4 (stress), table 10-1 (end types); G ≈ 79.3 GPa for steel spring wire, table 10-5."
     >
       <div className="grid gap-3 sm:grid-cols-2">
@@ -39,8 +51,15 @@ export function CoilSpringTool() {
         {n("totalCoils", "Total coils")}
         <label className="flex flex-col gap-1 text-sm font-medium">
           End type
-          <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("endType", { deps: ["totalCoils"] })}>
-            {Object.entries(END_TYPES).map(([k, t]) => <option key={k} value={k}>{t.label}</option>)}
+          <select
+            className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
+            {...register("endType", { deps: ["totalCoils"] })}
+          >
+            {Object.entries(END_TYPES).map(([k, t]) => (
+              <option key={k} value={k}>
+                {t.label}
+              </option>
+            ))}
           </select>
         </label>
         {n("shearModulusMpa", "Shear modulus G (MPa)", "79 300 MPa for steel spring wire")}
@@ -50,7 +69,10 @@ export function CoilSpringTool() {
         <dl aria-label="Spring check results">
           <Result label="Mean diameter D" value={`${report.meanDiameterMm.toFixed(2)} mm`} />
           <Result label="Active coils" value={report.activeCoils.toFixed(2)} />
-          <Result label="Spring rate" value={`${report.rate.nMm.toFixed(2)} N/mm · ${report.rate.kgfMm.toFixed(3)} kgf/mm · ${report.rate.lbfIn.toFixed(0)} lbf/in`} />
+          <Result
+            label="Spring rate"
+            value={`${report.rate.nMm.toFixed(2)} N/mm · ${report.rate.kgfMm.toFixed(3)} kgf/mm · ${report.rate.lbfIn.toFixed(0)} lbf/in`}
+          />
           <Result label="Spring index C" value={report.springIndex.toFixed(2)} />
           <Result label="Wahl factor" value={report.wahlFactor.toFixed(3)} />
           <Result label="Shear stress at the load" value={`${report.shearStressMpa.toFixed(0)} MPa`} />
@@ -58,7 +80,10 @@ export function CoilSpringTool() {
       ) : (
         <p className="text-sm text-stone-600">Enter the measurements to see the rate.</p>
       )}
-      <p className="text-xs text-stone-600">A spring index below 4 or above 12 is hard to make and to trust (Shigley §10-2). A compressed spring stores energy: measure springs out of the shock or fork, and work to the manufacturer&apos;s service manual.</p>
+      <p className="text-xs text-stone-600">
+        A spring index below 4 or above 12 is hard to make and to trust (Shigley §10-2). A compressed spring stores
+        energy: measure springs out of the shock or fork, and work to the manufacturer&apos;s service manual.
+      </p>
     </CalcCard>
   );
 }

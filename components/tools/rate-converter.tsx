@@ -19,19 +19,40 @@ export function RateConverter() {
   });
   const parsed = rateConvertSchema.safeParse(useWatch({ control }));
   return (
-    <CalcCard id="rate-converter" title="Rate unit converter" formula={<>1 kgf/mm = 9.80665 N/mm; 1 lbf/in = 4.4482216152605 N / 25.4 mm = 0.175127 N/mm.</>} source="NIST SP 811 (2008), appendix B.8: exact definitions of the kilogram-force, pound-force and inch.">
+    <CalcCard
+      id="rate-converter"
+      title="Rate unit converter"
+      formula={<>1 kgf/mm = 9.80665 N/mm; 1 lbf/in = 4.4482216152605 N / 25.4 mm = 0.175127 N/mm.</>}
+      source="NIST SP 811 (2008), appendix B.8: exact definitions of the kilogram-force, pound-force and inch."
+    >
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field id="conv-value" label="Rate" inputMode="decimal" error={formState.errors.value?.message} {...register("value", { setValueAs: toNumber() })} />
+        <Field
+          id="conv-value"
+          label="Rate"
+          inputMode="decimal"
+          error={formState.errors.value?.message}
+          {...register("value", { setValueAs: toNumber() })}
+        />
         <label className="flex flex-col gap-1 text-sm font-medium">
           From unit
           <select className="min-h-11 rounded-lg border border-stone-300 bg-white px-2" {...register("from")}>
-            {RATE_UNITS.map((u) => <option key={u} value={u}>{u}</option>)}
+            {RATE_UNITS.map((u) => (
+              <option key={u} value={u}>
+                {u}
+              </option>
+            ))}
           </select>
         </label>
       </div>
       {parsed.success ? (
         <dl aria-label="Converted rate">
-          {RATE_UNITS.map((u) => <Result key={u} label={u} value={convertRate(parsed.data.value, parsed.data.from, u).toFixed(u === "lbf/in" ? 1 : 3)} />)}
+          {RATE_UNITS.map((u) => (
+            <Result
+              key={u}
+              label={u}
+              value={convertRate(parsed.data.value, parsed.data.from, u).toFixed(u === "lbf/in" ? 1 : 3)}
+            />
+          ))}
         </dl>
       ) : null}
     </CalcCard>

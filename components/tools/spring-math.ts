@@ -1,5 +1,13 @@
 // The workshop tools' arithmetic, on top of the engine's spring functions (lib/sizing). Pure.
-import { KGF_N, LBF_N, rateFromLoadTest, rateTriple, shearStressMpa, springRateFromGeometry, wahlFactor } from "@/lib/sizing";
+import {
+  KGF_N,
+  LBF_N,
+  rateFromLoadTest,
+  rateTriple,
+  shearStressMpa,
+  springRateFromGeometry,
+  wahlFactor,
+} from "@/lib/sizing";
 import { activeCoils, type EndType } from "@/lib/validations/tools";
 
 export interface CoilReport {
@@ -12,10 +20,22 @@ export interface CoilReport {
 }
 
 /** Rate, index, Wahl factor and corrected shear stress of a helical compression spring (Shigley ch. 10). */
-export function coilReport(g: { wireDiameterMm: number; outerDiameterMm: number; totalCoils: number; endType: EndType; shearModulusMpa: number; loadN: number }): CoilReport {
+export function coilReport(g: {
+  wireDiameterMm: number;
+  outerDiameterMm: number;
+  totalCoils: number;
+  endType: EndType;
+  shearModulusMpa: number;
+  loadN: number;
+}): CoilReport {
   const D = g.outerDiameterMm - g.wireDiameterMm; // mean diameter = OD − d
   const na = activeCoils(g.totalCoils, g.endType); // Shigley table 10-1
-  const k = springRateFromGeometry({ wireDiameterMm: g.wireDiameterMm, meanCoilDiameterMm: D, activeCoils: na, shearModulusMpa: g.shearModulusMpa });
+  const k = springRateFromGeometry({
+    wireDiameterMm: g.wireDiameterMm,
+    meanCoilDiameterMm: D,
+    activeCoils: na,
+    shearModulusMpa: g.shearModulusMpa,
+  });
   const C = D / g.wireDiameterMm;
   return {
     meanDiameterMm: D,
@@ -30,7 +50,13 @@ export function coilReport(g: { wireDiameterMm: number; outerDiameterMm: number;
 export const FORCE_N: Record<"N" | "kgf" | "lbf", number> = { N: 1, kgf: KGF_N, lbf: LBF_N };
 
 /** Rate from two points of a load test, forces in any unit: k = (F₂ − F₁)/(L₁ − L₂). */
-export function loadTestRate(t: { length1Mm: number; force1: number; length2Mm: number; force2: number; forceUnit: "N" | "kgf" | "lbf" }) {
+export function loadTestRate(t: {
+  length1Mm: number;
+  force1: number;
+  length2Mm: number;
+  force2: number;
+  forceUnit: "N" | "kgf" | "lbf";
+}) {
   const f = FORCE_N[t.forceUnit];
   return rateTriple(rateFromLoadTest({ lengthsMm: [t.length1Mm, t.length2Mm], forcesN: [t.force1 * f, t.force2 * f] }));
 }

@@ -5,8 +5,7 @@ type Variant = "primary" | "secondary" | "ghost" | "danger";
 
 const variants: Record<Variant, string> = {
   primary: "bg-pine-700 text-white hover:bg-pine-800 disabled:bg-stone-400",
-  secondary:
-    "border border-stone-300 bg-white text-stone-900 hover:bg-stone-100 disabled:text-stone-400",
+  secondary: "border border-stone-300 bg-white text-stone-900 hover:bg-stone-100 disabled:text-stone-400",
   ghost: "text-pine-700 hover:bg-pine-50",
   danger: "bg-red-700 text-white hover:bg-red-800 disabled:bg-stone-400",
 };

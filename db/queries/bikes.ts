@@ -79,7 +79,10 @@ export async function updateBikeModel(id: string, values: BikeModelValues): Prom
 /** Creates or replaces the model with this slug (CSV import); returns whether it was new. */
 export async function upsertBikeModelBySlug(values: BikeModelValues, retired: boolean): Promise<"created" | "updated"> {
   const db = await getDb();
-  const [existing] = await db.select({ id: bikeModels.id, retiredAt: bikeModels.retiredAt }).from(bikeModels).where(eq(bikeModels.slug, values.slug));
+  const [existing] = await db
+    .select({ id: bikeModels.id, retiredAt: bikeModels.retiredAt })
+    .from(bikeModels)
+    .where(eq(bikeModels.slug, values.slug));
   const retiredAt = retired ? (existing?.retiredAt ?? new Date()) : null;
   if (existing) {
     await db

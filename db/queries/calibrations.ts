@@ -7,7 +7,10 @@ import { bikeCalibrations, recommendationVersions, sagReports, setupRequests } f
 import { recordAudit, type AuditInsert } from "./audit";
 
 export type CalibrationRow = typeof bikeCalibrations.$inferSelect;
-export type NewCalibration = Omit<typeof bikeCalibrations.$inferInsert, "id" | "appliedAt" | "undoneAt" | "undoneById" | "undoneByLabel">;
+export type NewCalibration = Omit<
+  typeof bikeCalibrations.$inferInsert,
+  "id" | "appliedAt" | "undoneAt" | "undoneById" | "undoneByLabel"
+>;
 
 /** Every sag report on requests for this model, oldest first, with the version it was measured on. */
 export async function listModelSagReports(bikeModelId: string) {
@@ -51,7 +54,12 @@ export async function getActiveCalibration(bikeModelId: string): Promise<Calibra
 export async function specCalibrationFor(bikeModelId: string) {
   const row = await getActiveCalibration(bikeModelId);
   return row
-    ? { rearSprungKg: row.rearSprungKg, frontSprungKg: row.frontSprungKg, riderRearShare: row.riderRearShare, reports: row.reports }
+    ? {
+        rearSprungKg: row.rearSprungKg,
+        frontSprungKg: row.frontSprungKg,
+        riderRearShare: row.riderRearShare,
+        reports: row.reports,
+      }
     : undefined;
 }
 
@@ -71,7 +79,11 @@ interface Actor {
 }
 
 /** Applies a calibration, closing the active one (kept in the history), and audits, in one transaction. */
-export async function insertCalibration(values: NewCalibration, actor: Actor, audit: Omit<AuditInsert, "actorUserId" | "actorLabel">) {
+export async function insertCalibration(
+  values: NewCalibration,
+  actor: Actor,
+  audit: Omit<AuditInsert, "actorUserId" | "actorLabel">,
+) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const now = new Date();
@@ -80,9 +92,17 @@ export async function insertCalibration(values: NewCalibration, actor: Actor, au
       .set({ undoneAt: now, undoneById: actor.id, undoneByLabel: actor.label })
       .where(and(eq(bikeCalibrations.bikeModelId, values.bikeModelId), isNull(bikeCalibrations.undoneAt)))
       .returning({ id: bikeCalibrations.id });
-    const [row] = await tx.insert(bikeCalibrations).values({ ...values, appliedAt: now }).returning();
+    const [row] = await tx
+      .insert(bikeCalibrations)
+      .values({ ...values, appliedAt: now })
+      .returning();
     await recordAudit(
-      { ...audit, actorUserId: actor.id, actorLabel: actor.label, detail: { ...(audit.detail as object), calibrationId: row!.id, replacedId: replaced[0]?.id ?? null } },
+      {
+        ...audit,
+        actorUserId: actor.id,
+        actorLabel: actor.label,
+        detail: { ...(audit.detail as object), calibrationId: row!.id, replacedId: replaced[0]?.id ?? null },
+      },
       tx,
     );
     return row!;
@@ -90,7 +110,11 @@ export async function insertCalibration(values: NewCalibration, actor: Actor, au
 }
 
 /** Closes the model's active calibration and audits; null when none was active. */
-export async function closeActiveCalibration(bikeModelId: string, actor: Actor, audit: Omit<AuditInsert, "actorUserId" | "actorLabel">) {
+export async function closeActiveCalibration(
+  bikeModelId: string,
+  actor: Actor,
+  audit: Omit<AuditInsert, "actorUserId" | "actorLabel">,
+) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [row] = await tx
@@ -99,7 +123,15 @@ export async function closeActiveCalibration(bikeModelId: string, actor: Actor, 
       .where(and(eq(bikeCalibrations.bikeModelId, bikeModelId), isNull(bikeCalibrations.undoneAt)))
       .returning();
     if (!row) return null;
-    await recordAudit({ ...audit, actorUserId: actor.id, actorLabel: actor.label, detail: { ...(audit.detail as object), calibrationId: row.id } }, tx);
+    await recordAudit(
+      {
+        ...audit,
+        actorUserId: actor.id,
+        actorLabel: actor.label,
+        detail: { ...(audit.detail as object), calibrationId: row.id },
+      },
+      tx,
+    );
     return row;
   });
 }

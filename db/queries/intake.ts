@@ -112,7 +112,11 @@ export async function insertSetupRequest(
       requestId: row.id,
       actorLabel: "rider",
       action: "request.submitted",
-      detail: { photos: data.uploads.length, engineVersion: data.output.engineVersion, bikeLabel: data.request.bikeLabel },
+      detail: {
+        photos: data.uploads.length,
+        engineVersion: data.output.engineVersion,
+        bikeLabel: data.request.bikeLabel,
+      },
     });
     if (also) await also(tx, row);
     return row;

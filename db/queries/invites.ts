@@ -15,7 +15,13 @@ export async function insertInvite(values: typeof staffInvites.$inferInsert, exe
 export async function listOpenInvites(now = new Date()) {
   const db = await getDb();
   return db
-    .select({ id: staffInvites.id, email: staffInvites.email, role: staffInvites.role, expiresAt: staffInvites.expiresAt, createdAt: staffInvites.createdAt })
+    .select({
+      id: staffInvites.id,
+      email: staffInvites.email,
+      role: staffInvites.role,
+      expiresAt: staffInvites.expiresAt,
+      createdAt: staffInvites.createdAt,
+    })
     .from(staffInvites)
     .where(and(isNull(staffInvites.acceptedAt), gt(staffInvites.expiresAt, now)))
     .orderBy(desc(staffInvites.createdAt));

@@ -6,7 +6,10 @@ import { getDb, type Executor } from "@/db/client";
 import { outboundEmails } from "@/db/schema";
 
 export type OutboundEmail = typeof outboundEmails.$inferSelect;
-export type NewOutboundEmail = Omit<typeof outboundEmails.$inferInsert, "status" | "attempts" | "providerMessageId" | "sentAt">;
+export type NewOutboundEmail = Omit<
+  typeof outboundEmails.$inferInsert,
+  "status" | "attempts" | "providerMessageId" | "sentAt"
+>;
 
 /** Every e-mail sent (or tried) about a request, oldest first: the request page shows the trail. */
 export async function listOutboundEmailsForRequest(requestId: string) {
@@ -65,8 +68,17 @@ export async function claimDueEmails(options: { now: Date; leaseUntil: Date; cla
     if (picked.length === 0) return [];
     return tx
       .update(outboundEmails)
-      .set({ claimedUntil: options.leaseUntil, claimedBy: options.claimer, attempts: sql`${outboundEmails.attempts} + 1` })
-      .where(inArray(outboundEmails.id, picked.map((p) => p.id)))
+      .set({
+        claimedUntil: options.leaseUntil,
+        claimedBy: options.claimer,
+        attempts: sql`${outboundEmails.attempts} + 1`,
+      })
+      .where(
+        inArray(
+          outboundEmails.id,
+          picked.map((p) => p.id),
+        ),
+      )
       .returning();
   });
 }
@@ -76,17 +88,38 @@ export async function claimDueEmails(options: { now: Date; leaseUntil: Date; cla
 const heldBy = (id: string, claimer: string) => and(eq(outboundEmails.id, id), eq(outboundEmails.claimedBy, claimer));
 
 /** Delivered: the provider's id, and the body is dropped (links in it carry private tokens). */
-export async function markEmailSent(executor: Executor, id: string, claimer: string, providerMessageId: string, at: Date) {
+export async function markEmailSent(
+  executor: Executor,
+  id: string,
+  claimer: string,
+  providerMessageId: string,
+  at: Date,
+) {
   const rows = await executor
     .update(outboundEmails)
-    .set({ status: "sent", providerMessageId, lastError: null, sentAt: at, claimedUntil: null, html: null, textBody: null, attachments: null })
+    .set({
+      status: "sent",
+      providerMessageId,
+      lastError: null,
+      sentAt: at,
+      claimedUntil: null,
+      html: null,
+      textBody: null,
+      attachments: null,
+    })
     .where(heldBy(id, claimer))
     .returning({ id: outboundEmails.id });
   return rows.length > 0;
 }
 
 /** A failed attempt that may pass later: back in the queue from `nextAttemptAt`. */
-export async function rescheduleEmail(executor: Executor, id: string, claimer: string, lastError: string, nextAttemptAt: Date) {
+export async function rescheduleEmail(
+  executor: Executor,
+  id: string,
+  claimer: string,
+  lastError: string,
+  nextAttemptAt: Date,
+) {
   const rows = await executor
     .update(outboundEmails)
     .set({ lastError, nextAttemptAt, claimedUntil: null })

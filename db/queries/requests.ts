@@ -10,10 +10,7 @@ export async function countRequestsByStatus(): Promise<Record<RequestStatus, num
     .select({ status: setupRequests.status, n: count() })
     .from(setupRequests)
     .groupBy(setupRequests.status);
-  const counts = Object.fromEntries(REQUEST_STATUSES.map((s) => [s, 0])) as Record<
-    RequestStatus,
-    number
-  >;
+  const counts = Object.fromEntries(REQUEST_STATUSES.map((s) => [s, 0])) as Record<RequestStatus, number>;
   for (const row of rows) counts[row.status] = Number(row.n);
   return counts;
 }

@@ -27,7 +27,9 @@ export async function moveStatusIf(
   const updated = await tx
     .update(setupRequests)
     .set({ status: to, updatedAt: new Date(), ...extra })
-    .where(and(eq(setupRequests.id, requestId), eq(setupRequests.status, current), inArray(setupRequests.status, [...from])))
+    .where(
+      and(eq(setupRequests.id, requestId), eq(setupRequests.status, current), inArray(setupRequests.status, [...from])),
+    )
     .returning({ id: setupRequests.id });
   return updated.length > 0;
 }
@@ -37,7 +39,10 @@ export async function insertTunerMessage(tx: Tx, requestId: string, authorUserId
 }
 
 export async function setAssignedTuner(tx: Tx, requestId: string, tunerId: string | null) {
-  await tx.update(setupRequests).set({ assignedTunerId: tunerId, updatedAt: new Date() }).where(eq(setupRequests.id, requestId));
+  await tx
+    .update(setupRequests)
+    .set({ assignedTunerId: tunerId, updatedAt: new Date() })
+    .where(eq(setupRequests.id, requestId));
 }
 
 /** Approved versions of the request become superseded; returns their numbers. */
@@ -68,7 +73,10 @@ export async function updateDraftVersion(
   versionId: string,
   values: Pick<VersionInsert, "output" | "overrides" | "notesForRider" | "internalNotes" | "engineVersion">,
 ) {
-  await tx.update(recommendationVersions).set({ ...values, updatedAt: new Date() }).where(eq(recommendationVersions.id, versionId));
+  await tx
+    .update(recommendationVersions)
+    .set({ ...values, updatedAt: new Date() })
+    .where(eq(recommendationVersions.id, versionId));
 }
 
 export async function insertVersion(tx: Tx, values: VersionInsert) {

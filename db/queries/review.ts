@@ -2,14 +2,7 @@
 import { and, asc, eq, inArray, or, isNull } from "drizzle-orm";
 import { listOutboundEmailsForRequest } from "@/db/queries/outbound-emails";
 import { getDb } from "@/db/client";
-import {
-  bikeModels,
-  requestMessages,
-  sagReports,
-  setupRequests,
-  uploads,
-  user,
-} from "@/db/schema";
+import { bikeModels, requestMessages, sagReports, setupRequests, uploads, user } from "@/db/schema";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { listAuditForRequest } from "./audit";
 import { listVersions } from "./versions";
@@ -43,7 +36,12 @@ export async function getRequestDetail(requestId: string) {
       .where(eq(requestMessages.requestId, requestId))
       .orderBy(asc(requestMessages.createdAt)),
     db
-      .select({ id: uploads.id, originalName: uploads.originalName, contentType: uploads.contentType, sizeBytes: uploads.sizeBytes })
+      .select({
+        id: uploads.id,
+        originalName: uploads.originalName,
+        contentType: uploads.contentType,
+        sizeBytes: uploads.sizeBytes,
+      })
       .from(uploads)
       .where(eq(uploads.requestId, requestId))
       .orderBy(asc(uploads.createdAt)),
@@ -51,7 +49,16 @@ export async function getRequestDetail(requestId: string) {
     listOutboundEmailsForRequest(requestId),
     listAuditForRequest(requestId),
   ]);
-  return { ...row.request, assignedTunerName: row.tunerName, versions, messages, photos, sagReports: sags, emails, audit };
+  return {
+    ...row.request,
+    assignedTunerName: row.tunerName,
+    versions,
+    messages,
+    photos,
+    sagReports: sags,
+    emails,
+    audit,
+  };
 }
 
 export type RequestDetail = NonNullable<Awaited<ReturnType<typeof getRequestDetail>>>;

@@ -16,7 +16,9 @@ import {
   type SkillLevel,
 } from "@/lib/sizing";
 
-export async function loadBikeSpec(bikeModelId: string): Promise<{ name: string; bikeClass: string; spec: BikeSpecInput } | null> {
+export async function loadBikeSpec(
+  bikeModelId: string,
+): Promise<{ name: string; bikeClass: string; spec: BikeSpecInput } | null> {
   const db = await getDb();
   const [row] = await db
     .select({ name: bikeModels.name, bikeClass: bikeModels.bikeClass, spec: bikeModels.spec })
@@ -24,7 +26,11 @@ export async function loadBikeSpec(bikeModelId: string): Promise<{ name: string;
     .where(eq(bikeModels.id, bikeModelId));
   if (!row) return null;
   // The admin's applied calibration, not whatever the stored spec says, sets the loads.
-  return { name: row.name, bikeClass: row.bikeClass, spec: { ...bikeSpecSchema.parse(row.spec), calibration: await specCalibrationFor(bikeModelId) } };
+  return {
+    name: row.name,
+    bikeClass: row.bikeClass,
+    spec: { ...bikeSpecSchema.parse(row.spec), calibration: await specCalibrationFor(bikeModelId) },
+  };
 }
 
 export async function loadShopSizingContext(
@@ -55,9 +61,7 @@ export async function loadShopSizingContext(
       shockRatesNmm: stock.filter((s) => s.end === "shock").map((s) => s.rateNmm),
     },
     // A shop with no rules saved starts from the engine's default rules.
-    clickerRules: rules.length
-      ? rules.map((r) => clickerRuleSchema.parse(r.rule) as ClickerRule)
-      : undefined,
+    clickerRules: rules.length ? rules.map((r) => clickerRuleSchema.parse(r.rule) as ClickerRule) : undefined,
     gearMassKg: shop?.gearMassKg ?? sizingDefaults.DEFAULT_GEAR_MASS_KG,
     frequencyRatioWindow: shop
       ? { min: shop.frequencyRatioMin, max: shop.frequencyRatioMax }

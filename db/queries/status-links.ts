@@ -8,7 +8,10 @@ type Executor = Pick<AppDb, "insert">;
 /** Stores a new status link for the request and returns its token (shown once, never stored). */
 export async function createStatusLink(requestId: string, executor?: Executor, token = newStatusToken()) {
   const db = executor ?? (await getDb());
-  await db.insert(statusLinks).values({ requestId, tokenHash: hashStatusToken(token) }).onConflictDoNothing();
+  await db
+    .insert(statusLinks)
+    .values({ requestId, tokenHash: hashStatusToken(token) })
+    .onConflictDoNothing();
   return token;
 }
 

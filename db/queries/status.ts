@@ -24,7 +24,11 @@ export async function findRequestForViewer(viewer: RiderViewer, requestId?: stri
     if (viewer.token.length < 20 || viewer.token.length > 200) return null;
     const where = [eq(statusLinks.tokenHash, hashStatusToken(viewer.token))];
     if (requestId) where.push(eq(statusLinks.requestId, requestId));
-    const [row] = await db.select({ id: statusLinks.requestId }).from(statusLinks).where(and(...where)).limit(1);
+    const [row] = await db
+      .select({ id: statusLinks.requestId })
+      .from(statusLinks)
+      .where(and(...where))
+      .limit(1);
     return row?.id ?? null;
   }
   if (!requestId) return null;
@@ -39,7 +43,10 @@ export async function findRequestForViewer(viewer: RiderViewer, requestId?: stri
 /** Marks a token as used (best effort: the page still opens if this write fails). */
 export async function touchStatusToken(token: string) {
   const db = await getDb();
-  await db.update(statusLinks).set({ lastUsedAt: new Date() }).where(eq(statusLinks.tokenHash, hashStatusToken(token)));
+  await db
+    .update(statusLinks)
+    .set({ lastUsedAt: new Date() })
+    .where(eq(statusLinks.tokenHash, hashStatusToken(token)));
 }
 
 export async function loadRiderStatus(requestId: string) {
@@ -77,7 +84,12 @@ export async function loadRiderStatus(requestId: string) {
       )
       .orderBy(desc(recommendationVersions.version)),
     db
-      .select({ id: requestMessages.id, author: requestMessages.author, body: requestMessages.body, createdAt: requestMessages.createdAt })
+      .select({
+        id: requestMessages.id,
+        author: requestMessages.author,
+        body: requestMessages.body,
+        createdAt: requestMessages.createdAt,
+      })
       .from(requestMessages)
       .where(eq(requestMessages.requestId, requestId))
       .orderBy(asc(requestMessages.createdAt)),
@@ -87,7 +99,12 @@ export async function loadRiderStatus(requestId: string) {
       .where(eq(uploads.requestId, requestId))
       .orderBy(asc(uploads.createdAt), asc(uploads.id)),
     db
-      .select({ id: sagReports.id, measured: sagReports.measured, verdict: sagReports.verdict, createdAt: sagReports.createdAt })
+      .select({
+        id: sagReports.id,
+        measured: sagReports.measured,
+        verdict: sagReports.verdict,
+        createdAt: sagReports.createdAt,
+      })
       .from(sagReports)
       .where(eq(sagReports.requestId, requestId))
       .orderBy(desc(sagReports.createdAt)),
@@ -141,13 +158,21 @@ export async function findApprovedVersion(requestId: string) {
 }
 
 export async function insertSagReport(
-  report: Pick<typeof sagReports.$inferInsert, "requestId" | "versionId" | "measured" | "verdict"> & { versionId: string; version: number },
+  report: Pick<typeof sagReports.$inferInsert, "requestId" | "versionId" | "measured" | "verdict"> & {
+    versionId: string;
+    version: number;
+  },
 ) {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const [row] = await tx
       .insert(sagReports)
-      .values({ requestId: report.requestId, versionId: report.versionId, measured: report.measured, verdict: report.verdict })
+      .values({
+        requestId: report.requestId,
+        versionId: report.versionId,
+        measured: report.measured,
+        verdict: report.verdict,
+      })
       .returning({ id: sagReports.id, createdAt: sagReports.createdAt });
     await tx.insert(auditEvents).values({
       requestId: report.requestId,
@@ -163,7 +188,12 @@ export async function insertSagReport(
 export async function findUploadForViewer(uploadId: string, viewer: RiderViewer | "staff") {
   const db = await getDb();
   const [row] = await db
-    .select({ id: uploads.id, requestId: uploads.requestId, storageKey: uploads.storageKey, contentType: uploads.contentType })
+    .select({
+      id: uploads.id,
+      requestId: uploads.requestId,
+      storageKey: uploads.storageKey,
+      contentType: uploads.contentType,
+    })
     .from(uploads)
     .where(eq(uploads.id, uploadId));
   if (!row) return null;

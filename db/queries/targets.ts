@@ -8,7 +8,12 @@ import { clickerRuleSchema, type ClickerRule, type Discipline, type SkillLevel }
 export async function listSetupTargets() {
   const db = await getDb();
   const rows = await db.select().from(setupTargets);
-  return rows.map((r) => ({ discipline: r.discipline as Discipline, skill: r.skill as SkillLevel, values: r.values, updatedAt: r.updatedAt }));
+  return rows.map((r) => ({
+    discipline: r.discipline as Discipline,
+    skill: r.skill as SkillLevel,
+    values: r.values,
+    updatedAt: r.updatedAt,
+  }));
 }
 
 export async function getSetupTarget(discipline: Discipline, skill: SkillLevel): Promise<TargetRowValues | null> {

@@ -8,7 +8,14 @@ import { account as accountTable, user } from "@/db/schema";
 export async function listStaff() {
   const db = await getDb();
   return db
-    .select({ id: user.id, name: user.name, email: user.email, role: user.role, banned: user.banned, createdAt: user.createdAt })
+    .select({
+      id: user.id,
+      name: user.name,
+      email: user.email,
+      role: user.role,
+      banned: user.banned,
+      createdAt: user.createdAt,
+    })
     .from(user)
     .where(inArray(user.role, ["admin", "tuner"]))
     .orderBy(asc(user.name));
@@ -50,13 +57,22 @@ export interface CredentialAccount {
 /** A new staff user with a password sign-in, in the caller's transaction. Returns the user id. */
 export async function insertStaffUser(tx: Tx, account: CredentialAccount): Promise<string> {
   const id = randomUUID();
-  await tx.insert(user).values({ id, email: account.email.toLowerCase(), name: account.name, role: account.role, emailVerified: true });
-  await tx.insert(accountTable).values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: account.passwordHash });
+  await tx
+    .insert(user)
+    .values({ id, email: account.email.toLowerCase(), name: account.name, role: account.role, emailVerified: true });
+  await tx
+    .insert(accountTable)
+    .values({ id: randomUUID(), userId: id, accountId: id, providerId: "credential", password: account.passwordHash });
   return id;
 }
 
 /** A rider's account becomes staff: the role and name change and a password sign-in is added. */
 export async function promoteToStaff(tx: Tx, userId: string, account: Omit<CredentialAccount, "email">) {
-  await tx.update(user).set({ role: account.role, name: account.name, updatedAt: new Date() }).where(eq(user.id, userId));
-  await tx.insert(accountTable).values({ id: randomUUID(), userId, accountId: userId, providerId: "credential", password: account.passwordHash });
+  await tx
+    .update(user)
+    .set({ role: account.role, name: account.name, updatedAt: new Date() })
+    .where(eq(user.id, userId));
+  await tx
+    .insert(accountTable)
+    .values({ id: randomUUID(), userId, accountId: userId, providerId: "credential", password: account.passwordHash });
 }

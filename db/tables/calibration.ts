@@ -3,7 +3,17 @@
 // undone_at; at most one row per model is active (undone_at null), and only that one feeds new
 // recommendations. Old recommendations keep the loads they were made with in their stored input.
 import { sql } from "drizzle-orm";
-import { doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex, uuid } from "drizzle-orm/pg-core";
+import {
+  doublePrecision,
+  index,
+  integer,
+  jsonb,
+  pgTable,
+  text,
+  timestamp,
+  uniqueIndex,
+  uuid,
+} from "drizzle-orm/pg-core";
 import { user } from "./auth";
 import { bikeModels } from "./shop";
 
@@ -33,6 +43,8 @@ export const bikeCalibrations = pgTable(
   },
   (t) => [
     index("bike_calibrations_model_idx").on(t.bikeModelId, t.appliedAt),
-    uniqueIndex("bike_calibrations_one_active_idx").on(t.bikeModelId).where(sql`${t.undoneAt} is null`),
+    uniqueIndex("bike_calibrations_one_active_idx")
+      .on(t.bikeModelId)
+      .where(sql`${t.undoneAt} is null`),
   ],
 );

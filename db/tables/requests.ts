@@ -94,10 +94,7 @@ export const statusLinks = pgTable(
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
   },
-  (t) => [
-    uniqueIndex("status_links_token_idx").on(t.tokenHash),
-    index("status_links_request_idx").on(t.requestId),
-  ],
+  (t) => [uniqueIndex("status_links_token_idx").on(t.tokenHash), index("status_links_request_idx").on(t.requestId)],
 );
 
 export const VERSION_STATES = ["draft", "approved", "superseded"] as const;

@@ -7,7 +7,13 @@ const FONT = '-apple-system, BlinkMacSystemFont, "Segoe UI", Roboto, Helvetica, 
 
 export const emailStyles = {
   body: { backgroundColor: "#f1f2ee", margin: 0, padding: "24px 0", fontFamily: FONT, color: "#1d2327" },
-  container: { maxWidth: "560px", margin: "0 auto", backgroundColor: "#ffffff", border: "1px solid #d9ddd3", borderRadius: "8px" },
+  container: {
+    maxWidth: "560px",
+    margin: "0 auto",
+    backgroundColor: "#ffffff",
+    border: "1px solid #d9ddd3",
+    borderRadius: "8px",
+  },
   header: { padding: "18px 24px 14px", borderBottom: "3px solid #2f6b4f" },
   shopName: { fontSize: "18px", lineHeight: "24px", fontWeight: 700, margin: 0, color: "#1d2327" },
   shopTag: { fontSize: "12px", lineHeight: "16px", margin: "2px 0 0", color: "#5b665f", letterSpacing: "0.04em" },
@@ -56,9 +62,7 @@ export function EmailLayout({ shopName, preview, reason, children }: EmailLayout
           <Section style={emailStyles.footer}>
             <Hr style={{ borderColor: "#e3e6de", margin: "8px 0 14px" }} />
             <Text style={emailStyles.footerText}>{reason}</Text>
-            <Text style={emailStyles.footerText}>
-              {shopName} · sent with Sagwise
-            </Text>
+            <Text style={emailStyles.footerText}>{shopName} · sent with Sagwise</Text>
           </Section>
         </Container>
       </Body>

@@ -66,7 +66,13 @@ function hasBearerKey(req: IncomingMessage): boolean {
 /** The list omits attachment bodies (size and name stay); GET /emails/:id has everything. */
 const summarize = (m: StoredEmail) => ({
   ...m,
-  attachments: m.attachments.map((a) => ({ filename: a.filename, content_type: a.content_type, content_id: a.content_id, path: a.path, size: a.size })),
+  attachments: m.attachments.map((a) => ({
+    filename: a.filename,
+    content_type: a.content_type,
+    content_id: a.content_id,
+    path: a.path,
+    size: a.size,
+  })),
 });
 
 function safeFilename(name: string): { ascii: string; encoded: string } {
@@ -87,12 +93,17 @@ async function handlePost(req: IncomingMessage, res: ServerResponse, store: Mail
     });
   }
   const raw = await readBody(req);
-  if (raw === null) return sendError(res, { statusCode: 413, name: "validation_error", message: "Request body too large." });
+  if (raw === null)
+    return sendError(res, { statusCode: 413, name: "validation_error", message: "Request body too large." });
   let body: unknown;
   try {
     body = JSON.parse(raw);
   } catch {
-    return sendError(res, { statusCode: 422, name: "validation_error", message: "The request body is not valid JSON." });
+    return sendError(res, {
+      statusCode: 422,
+      name: "validation_error",
+      message: "The request body is not valid JSON.",
+    });
   }
   if (!batch) {
     const result = validateEmail(body);
@@ -106,16 +117,35 @@ async function handlePost(req: IncomingMessage, res: ServerResponse, store: Mail
     return sendJson(res, 200, { id: stored.id });
   }
   if (!Array.isArray(body)) {
-    return sendError(res, { statusCode: 422, name: "validation_error", message: "The batch body must be a JSON array of e-mails." });
+    return sendError(res, {
+      statusCode: 422,
+      name: "validation_error",
+      message: "The batch body must be a JSON array of e-mails.",
+    });
   }
   if (body.length === 0 || body.length > MAX_BATCH) {
-    return sendError(res, { statusCode: 422, name: "validation_error", message: `A batch holds 1 to ${MAX_BATCH} e-mails.` });
+    return sendError(res, {
+      statusCode: 422,
+      name: "validation_error",
+      message: `A batch holds 1 to ${MAX_BATCH} e-mails.`,
+    });
   }
   const permissive = req.headers["x-batch-validation"] === "permissive";
   const results = body.map((item: unknown, i) => {
-    const hasAttachments = typeof item === "object" && item !== null && "attachments" in item && (item as { attachments?: unknown }).attachments != null;
+    const hasAttachments =
+      typeof item === "object" &&
+      item !== null &&
+      "attachments" in item &&
+      (item as { attachments?: unknown }).attachments != null;
     if (hasAttachments) {
-      return { ok: false as const, error: { statusCode: 422, name: "validation_error" as const, message: `Invalid \`[${i}].attachments\` field. Attachments are not supported in batch sends.` } };
+      return {
+        ok: false as const,
+        error: {
+          statusCode: 422,
+          name: "validation_error" as const,
+          message: `Invalid \`[${i}].attachments\` field. Attachments are not supported in batch sends.`,
+        },
+      };
     }
     return validateEmail(item, `[${i}].`);
   });
@@ -140,7 +170,9 @@ function handleGet(url: URL, res: ServerResponse, store: MailStore) {
   }
   const message = parts[1] ? store.get(parts[1]) : undefined;
   if (parts[0] === "emails" && parts.length === 2) {
-    return message ? sendJson(res, 200, message) : sendError(res, { statusCode: 404, name: "not_found", message: "Email not found." });
+    return message
+      ? sendJson(res, 200, message)
+      : sendError(res, { statusCode: 404, name: "not_found", message: "Email not found." });
   }
   if (parts[0] === "inbox" && parts.length === 2) {
     if (!message) return sendPage(res, 404, notFoundPage());
@@ -150,7 +182,9 @@ function handleGet(url: URL, res: ServerResponse, store: MailStore) {
     const attachment = message?.attachments[Number(parts[3])];
     if (!attachment || attachment.content === null) return sendPage(res, 404, notFoundPage());
     const { ascii, encoded } = safeFilename(attachment.filename ?? "attachment");
-    const type = /^[\w.+-]+\/[\w.+-]+$/.test(attachment.content_type ?? "") ? attachment.content_type! : "application/octet-stream";
+    const type = /^[\w.+-]+\/[\w.+-]+$/.test(attachment.content_type ?? "")
+      ? attachment.content_type!
+      : "application/octet-stream";
     const bytes = Buffer.from(attachment.content, "base64");
     res.writeHead(200, {
       "content-type": type,
@@ -175,10 +209,19 @@ export function createMailFakeHandler(store: MailStore) {
       }
       if (req.method === "DELETE" && route === "/emails") return sendJson(res, 200, { deleted: store.clear() });
       if (req.method === "GET" || req.method === "HEAD") return handleGet(url, res, store);
-      return sendError(res, { statusCode: 405, name: "method_not_allowed", message: `Method ${req.method} not allowed on ${url.pathname}.` });
+      return sendError(res, {
+        statusCode: 405,
+        name: "method_not_allowed",
+        message: `Method ${req.method} not allowed on ${url.pathname}.`,
+      });
     } catch (error) {
       console.error("[mail-fake]", error);
-      if (!res.headersSent) sendJson(res, 500, { statusCode: 500, name: "internal_server_error", message: "The mail fake failed; see its log." });
+      if (!res.headersSent)
+        sendJson(res, 500, {
+          statusCode: 500,
+          name: "internal_server_error",
+          message: "The mail fake failed; see its log.",
+        });
       else res.end();
     }
   };

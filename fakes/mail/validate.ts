@@ -4,7 +4,13 @@ import type { NewEmail, StoredAttachment } from "./store";
 
 export interface ApiError {
   statusCode: number;
-  name: "missing_required_field" | "validation_error" | "invalid_attachment" | "missing_api_key" | "not_found" | "method_not_allowed";
+  name:
+    | "missing_required_field"
+    | "validation_error"
+    | "invalid_attachment"
+    | "missing_api_key"
+    | "not_found"
+    | "method_not_allowed";
   message: string;
 }
 
@@ -47,8 +53,7 @@ function addressList(body: Record<string, unknown>, field: string, required: boo
   return list as string[];
 }
 
-const isError = (v: unknown): v is ApiError =>
-  typeof v === "object" && v !== null && "statusCode" in v && "name" in v;
+const isError = (v: unknown): v is ApiError => typeof v === "object" && v !== null && "statusCode" in v && "name" in v;
 
 function attachments(raw: unknown): StoredAttachment[] | ApiError {
   if (raw === undefined || raw === null) return [];
@@ -62,7 +67,11 @@ function attachments(raw: unknown): StoredAttachment[] | ApiError {
     const remote = typeof att.path === "string" && att.path !== "" ? att.path : undefined;
     if (content === undefined && !remote) return missing(`${field}.content`);
     if (content !== undefined && (!BASE64.test(content) || content.length % 4 !== 0)) {
-      return { statusCode: 422, name: "invalid_attachment", message: `Invalid \`${field}.content\` field. Must be base64.` };
+      return {
+        statusCode: 422,
+        name: "invalid_attachment",
+        message: `Invalid \`${field}.content\` field. Must be base64.`,
+      };
     }
     if (content !== undefined && (typeof att.filename !== "string" || att.filename === "")) {
       return missing(`${field}.filename`);
@@ -109,7 +118,8 @@ export function validateEmail(body: unknown, prefix = ""): Result {
 
   let headers: Record<string, string> | null = null;
   if (b.headers !== undefined && b.headers !== null) {
-    if (typeof b.headers !== "object" || Array.isArray(b.headers)) return fail(invalid("headers", "Must be an object."));
+    if (typeof b.headers !== "object" || Array.isArray(b.headers))
+      return fail(invalid("headers", "Must be an object."));
     headers = {};
     for (const [k, v] of Object.entries(b.headers)) {
       if (typeof v !== "string") return fail(invalid(`headers.${k}`, "Header values must be strings."));

@@ -43,7 +43,9 @@ function page(title: string, body: string): string {
 export function inboxPage(emails: StoredEmail[], filterTo: string | undefined): string {
   const rows = emails
     .map((m) => {
-      const files = m.attachments.length ? `<span class="badge">${m.attachments.length} attachment${m.attachments.length > 1 ? "s" : ""}</span>` : "";
+      const files = m.attachments.length
+        ? `<span class="badge">${m.attachments.length} attachment${m.attachments.length > 1 ? "s" : ""}</span>`
+        : "";
       return `<li><a href="/inbox/${e(m.id)}"><span class="subj">${e(m.subject)}${files}</span>
 <span class="when">${e(m.created_at.replace("T", " ").slice(0, 19))} UTC</span>
 <span class="meta">to ${e(m.to.join(", "))}</span><span class="meta">${e(m.from)}</span></a></li>`;
@@ -60,7 +62,12 @@ export function inboxPage(emails: StoredEmail[], filterTo: string | undefined): 
 /** http(s) links in the message, so a developer can follow a sign-in link without the iframe. */
 export function extractLinks(html: string): string[] {
   const decode = (s: string) =>
-    s.replace(/&quot;/g, '"').replace(/&#x27;|&#39;/g, "'").replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&amp;/g, "&");
+    s
+      .replace(/&quot;/g, '"')
+      .replace(/&#x27;|&#39;/g, "'")
+      .replace(/&lt;/g, "<")
+      .replace(/&gt;/g, ">")
+      .replace(/&amp;/g, "&");
   const links = new Set<string>();
   for (const match of html.matchAll(/href\s*=\s*"([^"]*)"/gi)) {
     const url = decode(match[1] ?? "").trim();
@@ -108,5 +115,8 @@ ${attachments ? `<div class="card"><h2>Attachments</h2><ul>${attachments}</ul></
 }
 
 export function notFoundPage(): string {
-  return page("Not found · Sagwise outbox", '<div class="card"><h1>No such message</h1><p><a href="/">Back to the outbox</a></p></div>');
+  return page(
+    "Not found · Sagwise outbox",
+    '<div class="card"><h1>No such message</h1><p><a href="/">Back to the outbox</a></p></div>',
+  );
 }

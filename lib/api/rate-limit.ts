@@ -2,7 +2,12 @@
 // one app process, so counters live in memory; with DATABASE_URL several instances may share the
 // database, so counters live there too (RateLimiterPostgres on the app's pg pool, one table, one
 // key prefix per limit) and hold across instances.
-import { RateLimiterMemory, RateLimiterPostgres, RateLimiterRes, type RateLimiterAbstract } from "rate-limiter-flexible";
+import {
+  RateLimiterMemory,
+  RateLimiterPostgres,
+  RateLimiterRes,
+  type RateLimiterAbstract,
+} from "rate-limiter-flexible";
 import type { Pool } from "pg";
 import { getDatabase, type DatabaseHandle } from "@/db/client";
 import { clientKey } from "./client-address";
@@ -64,9 +69,14 @@ export function createLimiter(name: string, points: number, durationSeconds: num
     } catch (result) {
       if (!(result instanceof RateLimiterRes)) throw result;
       const retryAfter = Math.max(1, Math.ceil(result.msBeforeNext / 1000));
-      throw new HttpError(429, `Too many requests from this connection. Try again in ${retryAfter} seconds.`, undefined, {
-        "Retry-After": String(retryAfter),
-      });
+      throw new HttpError(
+        429,
+        `Too many requests from this connection. Try again in ${retryAfter} seconds.`,
+        undefined,
+        {
+          "Retry-After": String(retryAfter),
+        },
+      );
     }
   };
 }

@@ -71,7 +71,8 @@ export function route<
 ): (request: Request, context?: RouteContext) => Promise<Response> {
   return withErrors(async (request: Request, context?: RouteContext) => {
     if (spec.limit) await spec.limit(request);
-    const user = spec.access === "public" ? null : await requireRole(spec.access as readonly Role[], { headers: request.headers });
+    const user =
+      spec.access === "public" ? null : await requireRole(spec.access as readonly Role[], { headers: request.headers });
     let params: unknown = undefined;
     if (spec.params) {
       const parsed = spec.params.safeParse(await context?.params);

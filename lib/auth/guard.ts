@@ -47,10 +47,7 @@ export async function requireSession(options: GuardOptions = {}): Promise<Sessio
   throw new AuthError(401);
 }
 
-export async function requireRole(
-  roles: readonly Role[],
-  options: GuardOptions = {},
-): Promise<SessionUser> {
+export async function requireRole(roles: readonly Role[], options: GuardOptions = {}): Promise<SessionUser> {
   const user = await requireSession(options);
   if (roles.includes(user.role)) return user;
   if (options.page !== undefined) forbidden();

@@ -28,7 +28,9 @@ export async function ensureStaffUser(input: StaffAccount): Promise<{ id: string
   const existing = await findUserByEmail(input.email);
   if (existing) return { id: existing.id, created: false };
   const passwordHash = await hashPassword(input.password);
-  const id = await inTransaction((tx) => insertStaffUser(tx, { email: input.email, name: input.name, role: input.role, passwordHash }));
+  const id = await inTransaction((tx) =>
+    insertStaffUser(tx, { email: input.email, name: input.name, role: input.role, passwordHash }),
+  );
   return { id, created: true };
 }
 
@@ -42,7 +44,10 @@ export const INVITE_DAYS = 7;
 
 export const hashInviteToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
-export async function inviteStaff(input: { email: string; role: "tuner" | "admin" }, inviter: { id: string; name: string }) {
+export async function inviteStaff(
+  input: { email: string; role: "tuner" | "admin" },
+  inviter: { id: string; name: string },
+) {
   const email = input.email.toLowerCase();
   const existing = await findUserByEmail(email);
   if (existing && existing.role !== "rider")
@@ -79,7 +84,8 @@ export async function openInvite(token: string) {
   const invite = await findInviteByTokenHash(hashInviteToken(token));
   if (!invite) throw new NotFoundError("This invitation link is not valid.");
   if (invite.acceptedAt) throw new ConflictError("This invitation has already been used. Sign in instead.");
-  if (invite.expiresAt <= new Date()) throw new ConflictError("This invitation has expired. Ask the shop admin for a new one.");
+  if (invite.expiresAt <= new Date())
+    throw new ConflictError("This invitation has expired. Ask the shop admin for a new one.");
   return invite;
 }
 
@@ -137,7 +143,10 @@ export async function updateStaffMember(
     await auth.api.setRole({ body: { userId: targetId, role: change.role }, headers: requestHeaders });
   if (deactivates) {
     // banUser marks the user banned and deletes their sessions; revoke again in case one was made between.
-    await auth.api.banUser({ body: { userId: targetId, banReason: "Deactivated by a shop admin" }, headers: requestHeaders });
+    await auth.api.banUser({
+      body: { userId: targetId, banReason: "Deactivated by a shop admin" },
+      headers: requestHeaders,
+    });
     await auth.api.revokeUserSessions({ body: { userId: targetId }, headers: requestHeaders });
   } else if (change.active === true && target.banned) {
     await auth.api.unbanUser({ body: { userId: targetId }, headers: requestHeaders });

@@ -4,7 +4,17 @@
 // running, a backup is refused and says why. PostgreSQL (DATABASE_URL set) is copied with its own
 // pg_dump / pg_restore (a consistent snapshot even while the app runs).
 import { execFileSync } from "node:child_process";
-import { cpSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, renameSync, rmSync, writeFileSync } from "node:fs";
+import {
+  cpSync,
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  renameSync,
+  rmSync,
+  writeFileSync,
+} from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import * as tar from "tar";
@@ -37,7 +47,8 @@ function locations() {
   return { url: env.DATABASE_URL, pgliteDir: path.join(dataDir, "pglite"), uploadsDir: path.join(dataDir, "uploads") };
 }
 
-const filesIn = (dir: string) => (existsSync(dir) ? readdirSync(dir, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length : 0);
+const filesIn = (dir: string) =>
+  existsSync(dir) ? readdirSync(dir, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length : 0;
 const isEmptyDir = (dir: string) => !existsSync(dir) || readdirSync(dir).length === 0;
 
 async function withStaging<T>(run: (dir: string) => Promise<T>): Promise<T> {
@@ -58,7 +69,11 @@ export async function backupTo(file: string): Promise<BackupManifest> {
     let manifest: BackupManifest;
     if (url) {
       const pgDump = findPostgresTool("pg_dump");
-      execFileSync(pgDump, ["--format=custom", "--no-owner", "--no-privileges", `--file=${path.join(staging, POSTGRES_DUMP)}`, url], { stdio: ["ignore", "ignore", "pipe"] });
+      execFileSync(
+        pgDump,
+        ["--format=custom", "--no-owner", "--no-privileges", `--file=${path.join(staging, POSTGRES_DUMP)}`, url],
+        { stdio: ["ignore", "ignore", "pipe"] },
+      );
       manifest = await copyUploadsAndDescribe(staging, uploadsDir, "postgres", null);
     } else {
       if (!existsSync(pgliteDir)) throw new BackupError(`There is no database to back up in ${pgliteDir} (DATA_DIR).`);
@@ -66,13 +81,20 @@ export async function backupTo(file: string): Promise<BackupManifest> {
       try {
         handle = await openPglite(pgliteDir);
       } catch (error) {
-        throw new BackupError(`Backup refused: ${(error as Error).message} A backup of the embedded database needs it to itself: stop the app first.`);
+        throw new BackupError(
+          `Backup refused: ${(error as Error).message} A backup of the embedded database needs it to itself: stop the app first.`,
+        );
       }
       try {
         const dump = await handle.client!.dumpDataDir("gzip");
         writeFileSync(path.join(staging, PGLITE_DUMP), Buffer.from(await dump.arrayBuffer()));
         // Copied while the lock is held: the app, which writes uploads, is not running.
-        manifest = await copyUploadsAndDescribe(staging, uploadsDir, "pglite", await latestAppliedMigration(handle).catch(() => null));
+        manifest = await copyUploadsAndDescribe(
+          staging,
+          uploadsDir,
+          "pglite",
+          await latestAppliedMigration(handle).catch(() => null),
+        );
       } finally {
         await handle.close();
       }
@@ -85,10 +107,21 @@ export async function backupTo(file: string): Promise<BackupManifest> {
   });
 }
 
-async function copyUploadsAndDescribe(staging: string, uploadsDir: string, kind: BackupManifest["kind"], migration: string | null) {
+async function copyUploadsAndDescribe(
+  staging: string,
+  uploadsDir: string,
+  kind: BackupManifest["kind"],
+  migration: string | null,
+) {
   mkdirSync(path.join(staging, "uploads"));
   if (existsSync(uploadsDir)) cpSync(uploadsDir, path.join(staging, "uploads"), { recursive: true });
-  const manifest: BackupManifest = { format: 1, kind, createdAt: new Date().toISOString(), migration, uploads: filesIn(uploadsDir) };
+  const manifest: BackupManifest = {
+    format: 1,
+    kind,
+    createdAt: new Date().toISOString(),
+    migration,
+    uploads: filesIn(uploadsDir),
+  };
   writeFileSync(path.join(staging, MANIFEST), JSON.stringify(manifest, null, 2));
   return manifest;
 }
@@ -111,7 +144,8 @@ export async function restoreFrom(file: string, options: { force?: boolean } = {
     if (!existsSync(manifestPath)) throw new BackupError(`${file} is not a Sagwise backup (it has no ${MANIFEST}).`);
     const manifest = JSON.parse(readFileSync(manifestPath, "utf8")) as BackupManifest;
     const kind = url ? "postgres" : "pglite";
-    if (manifest.format !== 1) throw new BackupError(`${file} was written by a newer Sagwise (backup format ${manifest.format}).`);
+    if (manifest.format !== 1)
+      throw new BackupError(`${file} was written by a newer Sagwise (backup format ${manifest.format}).`);
     if (manifest.kind !== kind)
       throw new BackupError(
         `${file} holds a ${manifest.kind === "pglite" ? "embedded (PGlite)" : "PostgreSQL"} database, but this installation uses ${kind === "pglite" ? "the embedded database" : "PostgreSQL (DATABASE_URL)"}.`,
@@ -126,7 +160,15 @@ export async function restoreFrom(file: string, options: { force?: boolean } = {
             "Restoring replaces them: back them up first, then run the restore again with --force.",
         );
       const pgRestore = findPostgresTool("pg_restore");
-      const args = ["--no-owner", "--no-privileges", "--single-transaction", "--exit-on-error", ...(empty ? [] : ["--clean", "--if-exists"]), `--dbname=${url}`, path.join(staging, POSTGRES_DUMP)];
+      const args = [
+        "--no-owner",
+        "--no-privileges",
+        "--single-transaction",
+        "--exit-on-error",
+        ...(empty ? [] : ["--clean", "--if-exists"]),
+        `--dbname=${url}`,
+        path.join(staging, POSTGRES_DUMP),
+      ];
       execFileSync(pgRestore, args, { stdio: ["ignore", "ignore", "pipe"] });
       if (uploadsHaveFiles) renameSync(uploadsDir, `${uploadsDir}.before-restore-${stamp}`);
       cpSync(path.join(staging, "uploads"), uploadsDir, { recursive: true });

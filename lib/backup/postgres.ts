@@ -31,4 +31,3 @@ export async function postgresIsEmpty(url: string): Promise<boolean> {
     await client.end();
   }
 }
-

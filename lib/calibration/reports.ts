@@ -68,7 +68,12 @@ export function usableReports(rows: readonly StoredSagReport[]): { usable: Usabl
       riderMassKg: out?.resolved?.riderMassWithGearKg ?? NaN,
       rear:
         rear && out?.rear
-          ? { rateNmm: out.rear.chosenRate.nMm, preloadMm: out.rear.preloadMm, staticSagMm: rear.staticMm, raceSagMm: rear.raceMm }
+          ? {
+              rateNmm: out.rear.chosenRate.nMm,
+              preloadMm: out.rear.preloadMm,
+              staticSagMm: rear.staticMm,
+              raceSagMm: rear.raceMm,
+            }
           : undefined,
       front:
         front && out?.front
@@ -110,7 +115,11 @@ export interface PredictedSag {
  * the model's loads set to `parameters`: the recommendation's own force law, evaluated with the
  * report's figures as a tuner's overrides. Null when the engine refuses the combination.
  */
-export function predictSag(spec: BikeSpecInput, r: UsableReport, parameters: CalibrationParameters): PredictedSag | null {
+export function predictSag(
+  spec: BikeSpecInput,
+  r: UsableReport,
+  parameters: CalibrationParameters,
+): PredictedSag | null {
   const { rear, front } = r.report;
   const overrides: SetupOverridesInput = {
     rear: rear ? { rateNmm: rear.rateNmm, preloadMm: rear.preloadMm } : undefined,

@@ -2,10 +2,24 @@
 // fitCalibration), apply and undo. Applied values feed new recommendations only (the intake merges
 // the active calibration into the bike spec); every apply and undo is audited.
 import { getBikeModel } from "@/db/queries/bikes";
-import { closeActiveCalibration, getActiveCalibration, insertCalibration, listCalibrations, listModelSagReports, type CalibrationRow } from "@/db/queries/calibrations";
+import {
+  closeActiveCalibration,
+  getActiveCalibration,
+  insertCalibration,
+  listCalibrations,
+  listModelSagReports,
+  type CalibrationRow,
+} from "@/db/queries/calibrations";
 import type { SessionUser } from "@/lib/auth/guard";
 import { ConflictError, NotFoundError } from "@/lib/errors";
-import { bikeSpecSchema, catalogParameters, fitCalibration, type BikeSpecInput, type CalibrationFit, type CalibrationParameters } from "@/lib/sizing";
+import {
+  bikeSpecSchema,
+  catalogParameters,
+  fitCalibration,
+  type BikeSpecInput,
+  type CalibrationFit,
+  type CalibrationParameters,
+} from "@/lib/sizing";
 import { predictSag, usableReports, type PredictedSag, type UsableReport } from "./reports";
 
 /** Two fits this close (kg, share) are the same calibration: applying it again changes nothing. */
@@ -27,7 +41,10 @@ async function fitModel(bikeModelId: string): Promise<ModelFit> {
   const spec: BikeSpecInput = { ...bikeSpecSchema.parse(model.spec), calibration: undefined };
   const [rows, active] = await Promise.all([listModelSagReports(bikeModelId), getActiveCalibration(bikeModelId)]);
   const { usable, skipped } = usableReports(rows);
-  const fit = fitCalibration(spec, usable.map((u) => u.report));
+  const fit = fitCalibration(
+    spec,
+    usable.map((u) => u.report),
+  );
   return { spec, usable, skipped, fit, active };
 }
 
@@ -64,14 +81,21 @@ function summarize({ spec, usable, skipped, fit, active }: ModelFit) {
   return {
     reports: usable.length,
     fit: fit.ok
-      ? { parameters: fit.parameters, residualsMm: fit.residualsMm, rmsBeforeMm: fit.rmsBeforeMm, rmsAfterMm: fit.rmsAfterMm }
+      ? {
+          parameters: fit.parameters,
+          residualsMm: fit.residualsMm,
+          rmsBeforeMm: fit.rmsBeforeMm,
+          rmsAfterMm: fit.rmsAfterMm,
+        }
       : null,
     applied: active !== null,
     ...(fit.ok ? {} : { reason: fit.reason }),
     /** Reports left out: a second report on the same version, or one without the figures to fit. */
     skippedReports: skipped,
     catalog: catalogParameters(spec),
-    active: active ? { ...activeView(active), matchesFit: fit.ok && sameParameters(parametersOf(active), fit.parameters) } : null,
+    active: active
+      ? { ...activeView(active), matchesFit: fit.ok && sameParameters(parametersOf(active), fit.parameters) }
+      : null,
   };
 }
 
@@ -83,7 +107,13 @@ export interface ReportComparison {
   version: number;
   riderMassKg: number;
   rear: { rateNmm: number; preloadMm: number; staticMm: number; raceMm: number } | null;
-  front: { rateNmm: number | null; preloadMm: number | null; airPressureKpaGauge: number | null; staticMm: number; raceMm: number } | null;
+  front: {
+    rateNmm: number | null;
+    preloadMm: number | null;
+    airPressureKpaGauge: number | null;
+    staticMm: number;
+    raceMm: number;
+  } | null;
   catalog: PredictedSag | null;
   fitted: PredictedSag | null;
 }
@@ -103,9 +133,17 @@ export async function getCalibrationPage(bikeModelId: string) {
       requestNumber: u.requestNumber,
       version: u.version,
       riderMassKg: u.report.riderMassKg,
-      rear: rear ? { rateNmm: rear.rateNmm, preloadMm: rear.preloadMm, staticMm: rear.staticSagMm, raceMm: rear.raceSagMm } : null,
+      rear: rear
+        ? { rateNmm: rear.rateNmm, preloadMm: rear.preloadMm, staticMm: rear.staticSagMm, raceMm: rear.raceSagMm }
+        : null,
       front: front
-        ? { rateNmm: front.rateNmm ?? null, preloadMm: front.preloadMm ?? null, airPressureKpaGauge: front.airPressureKpaGauge ?? null, staticMm: front.staticSagMm, raceMm: front.raceSagMm }
+        ? {
+            rateNmm: front.rateNmm ?? null,
+            preloadMm: front.preloadMm ?? null,
+            airPressureKpaGauge: front.airPressureKpaGauge ?? null,
+            staticMm: front.staticSagMm,
+            raceMm: front.raceSagMm,
+          }
         : null,
       catalog: predictSag(spec, u, summary.catalog),
       fitted: fitted ? predictSag(spec, u, fitted) : null,
@@ -141,7 +179,13 @@ export async function applyCalibration(bikeModelId: string, user: SessionUser) {
     actorOf(user),
     {
       action: "calibration.applied",
-      detail: { bikeModelId, parameters: fit.parameters, reports: fit.reports, rmsBeforeMm: fit.rmsBeforeMm, rmsAfterMm: fit.rmsAfterMm },
+      detail: {
+        bikeModelId,
+        parameters: fit.parameters,
+        reports: fit.reports,
+        rmsBeforeMm: fit.rmsBeforeMm,
+        rmsAfterMm: fit.rmsAfterMm,
+      },
     },
   );
   return activeView(row);

@@ -69,7 +69,13 @@ export function forceChartGeometry(spec: ChartSpec): ChartGeometry {
     plot: { left: MARGIN.left, top: MARGIN.top, right: width - MARGIN.right, bottom: height - MARGIN.bottom },
     series: spec.series.map((s) =>
       s.dots
-        ? { id: s.id, label: s.label, emphasis: s.emphasis, d: "", dots: s.points.map((p) => ({ x: round(x(p.x)), y: round(y(p.y)) })) }
+        ? {
+            id: s.id,
+            label: s.label,
+            emphasis: s.emphasis,
+            d: "",
+            dots: s.points.map((p) => ({ x: round(x(p.x)), y: round(y(p.y)) })),
+          }
         : { id: s.id, label: s.label, emphasis: s.emphasis, d: path.digits(2)(s.points) ?? "" },
     ),
     xTicks: x.ticks(6).map((value) => ({ value, position: round(x(value)) })),

@@ -28,10 +28,7 @@ export function forkForceChart(rec: Recommendation): ChartSpec {
     series: [
       {
         id: "fork",
-        label:
-          rec.front.kind === "air"
-            ? "Air spring"
-            : `Oil level ${main ?? "–"} mm`,
+        label: rec.front.kind === "air" ? "Air spring" : `Oil level ${main ?? "–"} mm`,
         emphasis: "main",
         points: rec.front.forceCurve.map((p) => ({ x: p.forkTravelMm, y: p.forceN })),
       },

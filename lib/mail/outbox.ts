@@ -56,7 +56,11 @@ export interface QueueMailOptions {
 }
 
 /** Checks and queues one message in `executor` (the caller's transaction). Call kickOutbox() after the commit. */
-export async function queueMail(executor: Executor, input: SendMailInput, options: QueueMailOptions = {}): Promise<QueuedMail> {
+export async function queueMail(
+  executor: Executor,
+  input: SendMailInput,
+  options: QueueMailOptions = {},
+): Promise<QueuedMail> {
   const mail = parseMailInput(input);
   const id = randomUUID();
   const row = await insertOutboundEmail(executor, {
@@ -125,7 +129,13 @@ export interface DrainSummary {
   failed: number;
 }
 
-async function recordOutcome(row: OutboundEmail, claimer: string, now: Date, policy: OutboxPolicy, summary: DrainSummary) {
+async function recordOutcome(
+  row: OutboundEmail,
+  claimer: string,
+  now: Date,
+  policy: OutboxPolicy,
+  summary: DrainSummary,
+) {
   const outcome =
     row.html && row.textBody
       ? await deliverMessage({
@@ -145,7 +155,14 @@ async function recordOutcome(row: OutboundEmail, claimer: string, now: Date, pol
     let recorded: boolean;
     if (outcome.ok) recorded = await markEmailSent(tx, row.id, claimer, outcome.providerMessageId, new Date());
     else if (finalFailure) recorded = await markEmailFailed(tx, row.id, claimer, outcome.error);
-    else recorded = await rescheduleEmail(tx, row.id, claimer, outcome.error, new Date(now.getTime() + backoffMs(row.attempts, policy)));
+    else
+      recorded = await rescheduleEmail(
+        tx,
+        row.id,
+        claimer,
+        outcome.error,
+        new Date(now.getTime() + backoffMs(row.attempts, policy)),
+      );
     if (!recorded) return; // another sender took the row over after our lease ran out: it records the outcome
     if (row.audit && row.requestId && (outcome.ok || finalFailure)) {
       await recordAudit(
@@ -177,7 +194,12 @@ async function recordOutcome(row: OutboundEmail, claimer: string, now: Date, pol
 async function drainDue(now: Date, summary: DrainSummary): Promise<void> {
   const { policy, claimer } = state();
   for (;;) {
-    const batch = await claimDueEmails({ now, leaseUntil: new Date(now.getTime() + policy.leaseMs), claimer, limit: policy.batchSize });
+    const batch = await claimDueEmails({
+      now,
+      leaseUntil: new Date(now.getTime() + policy.leaseMs),
+      claimer,
+      limit: policy.batchSize,
+    });
     for (const row of batch) await recordOutcome(row, claimer, now, policy, summary);
     if (batch.length < policy.batchSize) return;
   }

@@ -13,7 +13,12 @@ export const mailAttachmentSchema = z.object({
 export const sendMailInputSchema = z.object({
   template: z.string().trim().min(1, "names the template").max(100),
   to: z.email("must be an e-mail address"),
-  subject: z.string().trim().min(1, "must not be empty").max(998).regex(/^[^\r\n]*$/, "must be one line"),
+  subject: z
+    .string()
+    .trim()
+    .min(1, "must not be empty")
+    .max(998)
+    .regex(/^[^\r\n]*$/, "must be one line"),
   html: z.string().min(1, "must not be empty"),
   text: z.string().min(1, "must not be empty"),
   requestId: z.uuid("must be a setup request id").optional(),
@@ -55,8 +60,7 @@ export interface DeliveryMessage {
 }
 
 export type DeliveryOutcome =
-  | { ok: true; providerMessageId: string }
-  | { ok: false; error: string; retryable: boolean };
+  { ok: true; providerMessageId: string } | { ok: false; error: string; retryable: boolean };
 
 // Rate limits, server errors and network failures (statusCode null in the SDK) can pass on a later
 // try; a rejected request (401, 403, 422) fails the same way every time.
@@ -82,7 +86,11 @@ export async function deliverMessage(message: DeliveryMessage): Promise<Delivery
         html: message.html,
         text: message.text,
         replyTo: message.replyTo ?? undefined,
-        attachments: message.attachments?.map((a) => ({ filename: a.filename, content: a.contentBase64, contentType: a.contentType })),
+        attachments: message.attachments?.map((a) => ({
+          filename: a.filename,
+          content: a.contentBase64,
+          contentType: a.contentType,
+        })),
         tags: [{ name: "template", value: message.template.replace(/[^A-Za-z0-9_-]/g, "_") }],
       },
       // The same key on every attempt: if an answer is lost and we try again, the provider sends

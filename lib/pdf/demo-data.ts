@@ -7,18 +7,28 @@ export function demoSizingInput(options: { airFork?: boolean } = {}): SizingInpu
   const bike = sizingDefaults.GENERIC_BIKE_CLASSES.find((c) => c.id === "mx-450-4t")!;
   const spec = structuredClone(bike.spec);
   if (options.airFork) {
-    spec.fork = { ...spec.fork, kind: "air", stockRateNmm: undefined, air: { pistonAreaMm2: 900, chamberVolumeMm3: 400_000 } };
+    spec.fork = {
+      ...spec.fork,
+      kind: "air",
+      stockRateNmm: undefined,
+      air: { pistonAreaMm2: 900, chamberVolumeMm3: 400_000 },
+    };
   }
   return {
     rider: { massKg: 84, gearIncluded: false, skill: "advanced", style: "moderate" },
     riding: { discipline: "motocross", terrain: ["loam", "hardpack"], jumpSize: "large" },
     bike: spec,
     complaints: ["bottoming"],
-    stock: { forkRatesNmm: sizingDefaults.TYPICAL_FORK_RATES_NMM, shockRatesNmm: sizingDefaults.TYPICAL_SHOCK_RATES_NMM },
+    stock: {
+      forkRatesNmm: sizingDefaults.TYPICAL_FORK_RATES_NMM,
+      shockRatesNmm: sizingDefaults.TYPICAL_SHOCK_RATES_NMM,
+    },
   };
 }
 
-export function demoSheetData(options: { airFork?: boolean; draft?: boolean; paperSize?: "A4" | "LETTER"; imperial?: boolean } = {}): SheetData {
+export function demoSheetData(
+  options: { airFork?: boolean; draft?: boolean; paperSize?: "A4" | "LETTER"; imperial?: boolean } = {},
+): SheetData {
   const approvedAt = new Date("2026-03-14T09:30:00Z");
   return {
     shop: {

@@ -51,7 +51,20 @@ export function clickerCount(value: number, unit: "clicks" | "turns"): string {
   return `${text} ${text === "1" ? "turn" : "turns"}`;
 }
 
-const MONTHS = ["January", "February", "March", "April", "May", "June", "July", "August", "September", "October", "November", "December"];
+const MONTHS = [
+  "January",
+  "February",
+  "March",
+  "April",
+  "May",
+  "June",
+  "July",
+  "August",
+  "September",
+  "October",
+  "November",
+  "December",
+];
 
 /** "2 December 2026", in UTC so the same instant prints the same day on every server. */
 export function sheetDate(date: Date): string {

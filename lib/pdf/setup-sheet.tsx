@@ -66,7 +66,12 @@ export function SetupSheet({ data }: { data: SheetData }) {
         <Text style={s.h2}>Springs, preload and sag</Text>
         <View style={s.row}>
           <ForkCard front={rec.front} imperial={imperial} currentNmm={rec.input.currentSprings?.forkRateNmm} />
-          <ShockCard rear={rec.rear} collarPitchMm={rec.input.bike.rear.collarPitchMm} imperial={imperial} currentNmm={rec.input.currentSprings?.shockRateNmm} />
+          <ShockCard
+            rear={rec.rear}
+            collarPitchMm={rec.input.bike.rear.collarPitchMm}
+            imperial={imperial}
+            currentNmm={rec.input.currentSprings?.shockRateNmm}
+          />
         </View>
         <Clickers clickers={rec.clickers} />
         <Footer data={data} />
@@ -75,11 +80,16 @@ export function SetupSheet({ data }: { data: SheetData }) {
         {data.draft ? <Watermark /> : null}
         <Text style={s.h2}>Force against travel</Text>
         <Text style={s.small}>
-          How hard the suspension pushes back as it compresses with this setup; dashed vertical lines mark the expected sag.
+          How hard the suspension pushes back as it compresses with this setup; dashed vertical lines mark the expected
+          sag.
         </Text>
         <View style={[s.row, { marginTop: 4 }]}>
           <ForceChart title="Fork" geometry={forceChartGeometry(forkForceChart(rec))} width={CHART_WIDTH} />
-          <ForceChart title="Shock, at the rear wheel" geometry={forceChartGeometry(rearForceChart(rec))} width={CHART_WIDTH} />
+          <ForceChart
+            title="Shock, at the rear wheel"
+            geometry={forceChartGeometry(rearForceChart(rec))}
+            width={CHART_WIDTH}
+          />
         </View>
         <SagSteps />
         <NotesAndReport notes={data.version.notesForRider} reportUrl={data.reportUrl} approved={!data.draft} />

@@ -42,10 +42,14 @@ export function cacheShaping(font: ShapingFont): ShapingCache {
   const existing = font[CACHED];
   if (existing) return existing;
   // The text is the tail of its key, so a key's length stands in for the run's size.
-  const cache: ShapingCache = new LRUCache({ maxSize: SHAPING_CACHE_CHARS, sizeCalculation: (_run, key) => key.length });
+  const cache: ShapingCache = new LRUCache({
+    maxSize: SHAPING_CACHE_CHARS,
+    sizeCalculation: (_run, key) => key.length,
+  });
   const layout = font.layout.bind(font);
   font.layout = (text, features, script, language, direction) => {
-    if (typeof text !== "string" || text.length > SHAPING_CACHE_MAX_RUN) return layout(text, features, script, language, direction);
+    if (typeof text !== "string" || text.length > SHAPING_CACHE_MAX_RUN)
+      return layout(text, features, script, language, direction);
     const key = `${featureKey(features)}\u0000${script ?? ""}\u0000${language ?? ""}\u0000${direction ?? ""}\u0000${text}`;
     const hit = cache.get(key);
     if (hit !== undefined) return hit;
@@ -64,7 +68,8 @@ export async function prepareShaping(families: readonly string[]): Promise<void>
     for (const source of registered[family]?.sources ?? []) {
       await source.load();
       // Checked on every render: a font loaded anew (after Font.reset) is a new object without a cache.
-      if (source.data && typeof (source.data as ShapingFont).layout === "function") cacheShaping(source.data as ShapingFont);
+      if (source.data && typeof (source.data as ShapingFont).layout === "function")
+        cacheShaping(source.data as ShapingFont);
     }
   }
 }

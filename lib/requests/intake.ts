@@ -48,13 +48,19 @@ interface ResolvedBike {
 async function resolveBike(bike: RequestAnswers["bike"]): Promise<ResolvedBike> {
   if (bike.modelId) {
     const found = await findActiveBike(bike.modelId);
-    if (!found) throw new ValidationError("Some fields need attention.", { "bike.modelId": "That bike is no longer in the shop's list: pick another or choose “not listed”" });
+    if (!found)
+      throw new ValidationError("Some fields need attention.", {
+        "bike.modelId": "That bike is no longer in the shop's list: pick another or choose “not listed”",
+      });
     return { modelId: found.id, bikeClass: found.bikeClass, label: found.name, spec: found.spec };
   }
   const notListed = bike.notListed!;
   const travelMm = toMm(notListed.rearWheelTravel.value, notListed.rearWheelTravel.unit);
   const basis = await findNearestGenericBike(travelMm);
-  if (!basis) throw new ValidationError("Some fields need attention.", { "bike.modelId": "The shop has no bikes to size against yet" });
+  if (!basis)
+    throw new ValidationError("Some fields need attention.", {
+      "bike.modelId": "The shop has no bikes to size against yet",
+    });
   const spec = notListed.mass ? { ...basis.spec, massKg: toKg(notListed.mass) } : basis.spec;
   return { modelId: null, bikeClass: null, label: notListed.description, spec, basis };
 }
@@ -83,7 +89,8 @@ export async function submitSetupRequest(answers: RequestAnswers, photos: Incomi
   try {
     output = recommend(input);
   } catch (error) {
-    if (error instanceof SizingInputError) throw new ValidationError("Some answers cannot be sized.", engineFields(error));
+    if (error instanceof SizingInputError)
+      throw new ValidationError("Some answers cannot be sized.", engineFields(error));
     throw error;
   }
   if (bike.basis) output = markNotListed(output, bike, answers);
@@ -91,31 +98,34 @@ export async function submitSetupRequest(answers: RequestAnswers, photos: Incomi
   const stored = await writeUploads(checked);
   const statusToken = newStatusToken();
   try {
-    const row = await insertSetupRequest({
-      request: {
-        riderName: answers.rider.name,
-        riderEmail: answers.rider.email.toLowerCase(),
-        riderPhone: answers.rider.phone || null,
-        discipline: answers.riding.discipline,
-        skill: answers.rider.skill,
-        bikeModelId: bike.modelId,
-        bikeClass: bike.bikeClass,
-        bikeLabel: bike.label,
-        bikeYear: answers.bike.year ?? null,
-        riderMassKg: toKg(answers.rider.weight),
-        answers,
+    const row = await insertSetupRequest(
+      {
+        request: {
+          riderName: answers.rider.name,
+          riderEmail: answers.rider.email.toLowerCase(),
+          riderPhone: answers.rider.phone || null,
+          discipline: answers.riding.discipline,
+          skill: answers.rider.skill,
+          bikeModelId: bike.modelId,
+          bikeClass: bike.bikeClass,
+          bikeLabel: bike.label,
+          bikeYear: answers.bike.year ?? null,
+          riderMassKg: toKg(answers.rider.weight),
+          answers,
+        },
+        uploads: checked.map((photo, i) => ({
+          storageKey: stored[i]!.storageKey,
+          sha256: stored[i]!.sha256,
+          sizeBytes: stored[i]!.sizeBytes,
+          originalName: photo.originalName,
+          contentType: photo.contentType,
+        })),
+        input,
+        output,
+        statusToken,
       },
-      uploads: checked.map((photo, i) => ({
-        storageKey: stored[i]!.storageKey,
-        sha256: stored[i]!.sha256,
-        sizeBytes: stored[i]!.sizeBytes,
-        originalName: photo.originalName,
-        contentType: photo.contentType,
-      })),
-      input,
-      output,
-      statusToken,
-    }, (tx, created) => notifyRider(tx, created.id, { kind: "request-received" }, { statusToken }));
+      (tx, created) => notifyRider(tx, created.id, { kind: "request-received" }, { statusToken }),
+    );
     kickOutbox();
     return { ...row, statusToken };
   } catch (error) {

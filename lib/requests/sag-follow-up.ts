@@ -42,12 +42,20 @@ export async function reportSag(requestId: string, report: SagReport) {
       if (!(error instanceof SizingInputError)) throw error;
       const issue = error.issues[0];
       const field = issue?.path.endsWith("staticSagMm") ? "static" : "race";
-      throw new ValidationError("Some measurements need attention.", { [`${end}.${field}`]: issue?.message ?? "Check this value" });
+      throw new ValidationError("Some measurements need attention.", {
+        [`${end}.${field}`]: issue?.message ?? "Check this value",
+      });
     }
   }
   const { token: _token, ...asGiven } = report;
   void _token;
   const measured = { asGiven, mm };
-  const row = await insertSagReport({ requestId, versionId: approved.id, version: approved.version, measured, verdict });
+  const row = await insertSagReport({
+    requestId,
+    versionId: approved.id,
+    version: approved.version,
+    measured,
+    verdict,
+  });
   return { id: row.id, createdAt: row.createdAt, version: approved.version, measured, verdict };
 }

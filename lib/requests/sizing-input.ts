@@ -39,8 +39,7 @@ export interface ShopSizingContext {
   frequencyRatioWindow: { min: number; max: number };
 }
 
-export const toKg = (v: { value: number; unit: "kg" | "lb" }) =>
-  v.unit === "kg" ? v.value : v.value * POUND_KG;
+export const toKg = (v: { value: number; unit: "kg" | "lb" }) => (v.unit === "kg" ? v.value : v.value * POUND_KG);
 export const toMm = (v: number, unit: "mm" | "in") => (unit === "mm" ? v : v * INCH_MM);
 
 export function buildSizingInput(answers: RequestAnswers, shop: ShopSizingContext): SizingInput {
@@ -106,7 +105,10 @@ const currentSpringsSchema = sizingInputSchema.shape.currentSprings.unwrap();
  * rider's own figure stays in the answers.
  */
 export function currentSpringsNmm(answers: RequestAnswers): SizingInput["currentSprings"] {
-  const rate = (r: { value: number; unit: "N/mm" | "kgf/mm" | "lbf/in" } | undefined, key: "forkRateNmm" | "shockRateNmm") => {
+  const rate = (
+    r: { value: number; unit: "N/mm" | "kgf/mm" | "lbf/in" } | undefined,
+    key: "forkRateNmm" | "shockRateNmm",
+  ) => {
     if (!r) return undefined;
     const nMm = convertRate(r.value, r.unit, "N/mm");
     return currentSpringsSchema.shape[key].safeParse(nMm).success ? nMm : undefined;
@@ -114,5 +116,8 @@ export function currentSpringsNmm(answers: RequestAnswers): SizingInput["current
   const forkRateNmm = rate(answers.bike.currentForkSpring, "forkRateNmm");
   const shockRateNmm = rate(answers.bike.currentShockSpring, "shockRateNmm");
   if (forkRateNmm === undefined && shockRateNmm === undefined) return undefined;
-  return { ...(forkRateNmm !== undefined ? { forkRateNmm } : {}), ...(shockRateNmm !== undefined ? { shockRateNmm } : {}) };
+  return {
+    ...(forkRateNmm !== undefined ? { forkRateNmm } : {}),
+    ...(shockRateNmm !== undefined ? { shockRateNmm } : {}),
+  };
 }

@@ -21,7 +21,10 @@ function flatten(overrides: SetupOverrides | null | undefined): Map<string, numb
   return out;
 }
 
-export function diffOverrides(before: SetupOverrides | null | undefined, after: SetupOverrides | null | undefined): FigureChange[] {
+export function diffOverrides(
+  before: SetupOverrides | null | undefined,
+  after: SetupOverrides | null | undefined,
+): FigureChange[] {
   const a = flatten(before);
   const b = flatten(after);
   const fields = [...new Set([...a.keys(), ...b.keys()])].sort();

@@ -30,7 +30,9 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     const latest = await getLatestVersion(requestId, tx);
     if (!latest) throw new ConflictError("This request has no recommendation to adjust yet.");
     if (latest.version !== body.basedOnVersion)
-      throw new ConflictError(`Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`);
+      throw new ConflictError(
+        `Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`,
+      );
     const output = recompute(latest.input, overrides);
     const changes = diffOverrides(latest.overrides, overrides);
     const notesForRider = body.notesForRider || null;
@@ -42,7 +44,13 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     const now = new Date();
     let version = latest.version;
     if (latest.state === "draft") {
-      await updateDraftVersion(tx, latest.id, { output, overrides, notesForRider, internalNotes, engineVersion: output.engineVersion });
+      await updateDraftVersion(tx, latest.id, {
+        output,
+        overrides,
+        notesForRider,
+        internalNotes,
+        engineVersion: output.engineVersion,
+      });
     } else {
       version = latest.version + 1;
       await insertVersion(tx, {
@@ -70,7 +78,9 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
         version,
         newVersion: version !== latest.version,
         changes,
-        ...(notesChanged.notesForRider ? { notesForRider: { from: latest.notesForRider ?? null, to: notesForRider } } : {}),
+        ...(notesChanged.notesForRider
+          ? { notesForRider: { from: latest.notesForRider ?? null, to: notesForRider } }
+          : {}),
         ...(notesChanged.internalNotes ? { internalNotesChanged: true } : {}),
       }),
     );

@@ -73,7 +73,12 @@ export async function askRider(requestId: string, question: string, actor: Actor
     await insertTunerMessage(tx, requestId, actor.id, question);
     events.push(auditBy(actor, requestId, "request.question_asked", { question }));
     await recordAudit(events, tx);
-    return notifyRider(tx, requestId, { kind: "tuner-question", question, tunerName: actor.name }, { actor: { userId: actor.id, label: actor.name } });
+    return notifyRider(
+      tx,
+      requestId,
+      { kind: "tuner-question", question, tunerName: actor.name },
+      { actor: { userId: actor.id, label: actor.name } },
+    );
   });
   kickOutbox();
   return mail;
@@ -83,10 +88,17 @@ export async function declineRequest(requestId: string, reason: string, actor: A
   const mail = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("decline", req.status);
-    const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.decline, "declined", actor, { declineReason: reason });
+    const events = await moveStatus(tx, requestId, req.status, ALLOWED_FROM.decline, "declined", actor, {
+      declineReason: reason,
+    });
     events.push(auditBy(actor, requestId, "request.declined", { reason }));
     await recordAudit(events, tx);
-    return notifyRider(tx, requestId, { kind: "request-declined", reason }, { actor: { userId: actor.id, label: actor.name } });
+    return notifyRider(
+      tx,
+      requestId,
+      { kind: "request-declined", reason },
+      { actor: { userId: actor.id, label: actor.name } },
+    );
   });
   kickOutbox();
   return mail;
@@ -98,9 +110,14 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
     assertCanStart("assign", req.status);
     await setAssignedTuner(tx, requestId, tuner?.id ?? null);
     const events: AuditInsert[] = [
-      auditBy(actor, requestId, "request.assigned", { from: req.assignedTunerId, to: tuner?.id ?? null, toName: tuner?.name ?? null }),
+      auditBy(actor, requestId, "request.assigned", {
+        from: req.assignedTunerId,
+        to: tuner?.id ?? null,
+        toName: tuner?.name ?? null,
+      }),
     ];
-    if (req.status === "submitted") events.push(...(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor)));
+    if (req.status === "submitted")
+      events.push(...(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor)));
     await recordAudit(events, tx);
   });
 }
@@ -109,7 +126,12 @@ export async function assignRequest(requestId: string, tuner: { id: string; name
  * Freezes the current draft: earlier approved versions become superseded, the request is approved,
  * and the rider gets the sheet link (the PDF is rendered on demand by the sheet route).
  */
-export async function approveRecommendation(requestId: string, actor: Actor, expectedVersion?: number, acknowledged: readonly string[] = []) {
+export async function approveRecommendation(
+  requestId: string,
+  actor: Actor,
+  expectedVersion?: number,
+  acknowledged: readonly string[] = [],
+) {
   const { version, revised, mail } = await inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
     assertCanStart("approve", req.status);
@@ -118,13 +140,18 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
     if (latest.state !== "draft")
       throw new ConflictError(`Version ${latest.version} is already approved. Save a revision first, then approve it.`);
     if (expectedVersion !== undefined && expectedVersion !== latest.version)
-      throw new ConflictError(`Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`);
+      throw new ConflictError(
+        `Version ${latest.version} is the current draft now, not ${expectedVersion}. Reload to see it.`,
+      );
     // Sanity warnings (lib/sizing/README.md, "Sanity limits") hold approval until the tuner acknowledges each.
     const missing = acknowledgementCodes(latest.output).filter((c) => !acknowledged.includes(c));
     if (missing.length)
-      throw new ConflictError(`Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`, {
-        acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
-      });
+      throw new ConflictError(
+        `Version ${latest.version} has ${missing.length} warning${missing.length === 1 ? "" : "s"} to check before approval: tick the box under the warnings, then approve.`,
+        {
+          acknowledgedWarnings: `Not yet acknowledged: ${missing.join(", ")}`,
+        },
+      );
     const revised = await hasEarlierApproval(requestId, latest.version, tx);
     const superseded = await supersedeApproved(tx, requestId);
     if (!(await approveDraftVersion(tx, latest.id, actor.id)))
@@ -153,7 +180,8 @@ export async function approveRecommendation(requestId: string, actor: Actor, exp
 }
 
 function acknowledgementCodes(output: unknown): string[] {
-  const warnings = (output as { warnings?: { code: string; requiresAcknowledgement?: boolean }[] } | null)?.warnings ?? [];
+  const warnings =
+    (output as { warnings?: { code: string; requiresAcknowledgement?: boolean }[] } | null)?.warnings ?? [];
   return [...new Set(warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code))];
 }
 

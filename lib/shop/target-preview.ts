@@ -7,7 +7,12 @@ import type { RequestAnswers } from "@/lib/validations/request";
 import { defaultTargetValues } from "./targets";
 
 /** A plain rider for the preview: mass with gear, moderate style, no complaints, medium jumps. */
-export function referenceAnswers(a: { riderMassKg: number; discipline: Discipline; skill: SkillLevel; bikeModelId: string }): RequestAnswers {
+export function referenceAnswers(a: {
+  riderMassKg: number;
+  discipline: Discipline;
+  skill: SkillLevel;
+  bikeModelId: string;
+}): RequestAnswers {
   return {
     rider: {
       name: "Reference rider",
@@ -61,7 +66,9 @@ export async function previewTargets(a: {
 }) {
   const context = await loadShopSizingContext(a.bike, a.discipline, a.skill);
   const answers = referenceAnswers(a);
-  const before = recommend(buildSizingInput(answers, { ...context, targets: context.targets ?? defaultTargetValues(a.discipline, a.skill) }));
+  const before = recommend(
+    buildSizingInput(answers, { ...context, targets: context.targets ?? defaultTargetValues(a.discipline, a.skill) }),
+  );
   const after = recommend(buildSizingInput(answers, { ...context, targets: a.values }));
   return { bikeName: a.bikeName, riderMassKg: a.riderMassKg, before: summarise(before), after: summarise(after) };
 }

@@ -11,7 +11,9 @@ export function defaultTargetValues(discipline: Discipline, skill: SkillLevel): 
   return {
     sag: { ...base, rearRace: round(base.rearRace + offset), forkRace: round(base.forkRace + offset) },
     riderRearShare: sizingDefaults.DEFAULT_RIDER_REAR_SHARE,
-    rateFactor: round(sizingDefaults.RATE_FACTOR_BY_SKILL[skill] * sizingDefaults.RATE_FACTOR_BY_DISCIPLINE[discipline]),
+    rateFactor: round(
+      sizingDefaults.RATE_FACTOR_BY_SKILL[skill] * sizingDefaults.RATE_FACTOR_BY_DISCIPLINE[discipline],
+    ),
     bottomingFactor: sizingDefaults.BOTTOMING_FACTOR_BY_DISCIPLINE[discipline],
     rateBasis: sizingDefaults.DEFAULT_RATE_BASIS,
   };

@@ -53,7 +53,9 @@ export function forkAirForceN(a: LegAirGeometry & { travelMm: number; polytropic
   if (a.travelMm > a.forkTravelMm)
     throw new SizingInputError([{ path: "travelMm", message: "Travel cannot exceed fork travel" }]);
   if (!(bottomVolumeMm3(a) > 0))
-    throw new SizingInputError([{ path: "springVolumeMm3", message: "The spring leaves no air above the oil at full compression" }]);
+    throw new SizingInputError([
+      { path: "springVolumeMm3", message: "The spring leaves no air above the oil at full compression" },
+    ]);
   return legAirForce(a, a.travelMm, a.polytropicIndex);
 }
 
@@ -71,7 +73,12 @@ export function airForkPressureKpaGauge(a: {
   negativeChamberVolumeMm3?: number;
   equalizeAtMm?: number;
 }): number {
-  requireNumbers(a, { pistonAreaMm2: "positive", chamberVolumeMm3: "positive", loadN: "positive", sagMm: "nonnegative" });
+  requireNumbers(a, {
+    pistonAreaMm2: "positive",
+    chamberVolumeMm3: "positive",
+    loadN: "positive",
+    sagMm: "nonnegative",
+  });
   if (a.pistonAreaMm2 * a.sagMm >= a.chamberVolumeMm3)
     throw new SizingInputError([{ path: "sagMm", message: "Sag sweeps the whole air chamber volume" }]);
   if (a.negativeChamberVolumeMm3 === undefined)
@@ -84,7 +91,9 @@ export function airForkPressureKpaGauge(a: {
     equalizeAtMm: a.equalizeAtMm ?? 0,
   };
   if (!(a.sagMm > spring.equalizeAtMm))
-    throw new SizingInputError([{ path: "sagMm", message: "Sag must lie beyond the position where the chambers equalise" }]);
+    throw new SizingInputError([
+      { path: "sagMm", message: "Sag must lie beyond the position where the chambers equalise" },
+    ]);
   return (airSpringChargeForLoad(spring, a.loadN, a.sagMm) - ATMOSPHERE_MPA) * 1000;
 }
 
@@ -119,7 +128,8 @@ function equalised(a: AirSpring, p0AbsMpa: number): number {
 
 /** Absolute pressure in the positive chamber after s mm. */
 export function airSpringPositivePressure(a: AirSpring, p0AbsMpa: number, sMm: number, n: number): number {
-  if (a.negativeVolumeMm3 === null) return polytropicPressure(p0AbsMpa, a.positiveVolumeMm3, a.positiveVolumeMm3 - a.areaMm2 * sMm, n);
+  if (a.negativeVolumeMm3 === null)
+    return polytropicPressure(p0AbsMpa, a.positiveVolumeMm3, a.positiveVolumeMm3 - a.areaMm2 * sMm, n);
   const vEq = a.positiveVolumeMm3 - a.areaMm2 * a.equalizeAtMm;
   return polytropicPressure(equalised(a, p0AbsMpa), vEq, a.positiveVolumeMm3 - a.areaMm2 * sMm, n);
 }

@@ -1,7 +1,17 @@
 import type { RateBasisResult } from "./output-schema";
 import type { FrequencyMatch } from "./rate-basis";
 import type { RateBasis } from "./vocab";
-import { evaluateCandidate, idealToOrder, selectNearest, selectRate, type EndModel, type IdealToOrder, type Limits, type SagTargetsMm, type Selection } from "./selection";
+import {
+  evaluateCandidate,
+  idealToOrder,
+  selectNearest,
+  selectRate,
+  type EndModel,
+  type IdealToOrder,
+  type Limits,
+  type SagTargetsMm,
+  type Selection,
+} from "./selection";
 
 /**
  * Both rate bases for one end (lib/sizing/README.md, "Model 2"): the sag-window ideal and its stock
@@ -41,7 +51,9 @@ export function chooseByBasis(a: {
   const basis = freqIdeal && freqSel ? a.basis : "sag-window";
   const pick = basis === "ride-frequency" && freqSel ? freqSel : windowSel;
   const sel =
-    a.overrideRateNmm !== undefined ? { chosen: evaluateCandidate(m, a.overrideRateNmm, W, t, limits), source: "override" as const } : pick;
+    a.overrideRateNmm !== undefined
+      ? { chosen: evaluateCandidate(m, a.overrideRateNmm, W, t, limits), source: "override" as const }
+      : pick;
   return {
     basis,
     ideal: basis === "ride-frequency" && freqIdeal ? freqIdeal : windowIdeal,

@@ -117,7 +117,10 @@ export const bikeSpecSchema = z
     if (!curveIssues.length) {
       const last = r.leverageCurve[r.leverageCurve.length - 1]!;
       if (last.wheelTravelMm < r.wheelTravelMm)
-        bad(["rear", "leverageCurve"], `Curve ends at ${last.wheelTravelMm} mm, before the wheel travel ${r.wheelTravelMm} mm`);
+        bad(
+          ["rear", "leverageCurve"],
+          `Curve ends at ${last.wheelTravelMm} mm, before the wheel travel ${r.wheelTravelMm} mm`,
+        );
       else {
         const stroke = travelAt(prepareLinkage(r.leverageCurve), r.wheelTravelMm);
         const tol = Math.max(STROKE_TOLERANCE_MIN_MM, STROKE_TOLERANCE_FRACTION * r.shockStrokeMm);

@@ -28,7 +28,9 @@ const sag = z.number().min(0).max(400);
 export const calibrationReportSchema = z.object({
   /** Rider mass with gear. */
   riderMassKg: z.number().min(15).max(250),
-  rear: z.object({ rateNmm: z.number().positive(), preloadMm: z.number(), staticSagMm: sag, raceSagMm: sag }).optional(),
+  rear: z
+    .object({ rateNmm: z.number().positive(), preloadMm: z.number(), staticSagMm: sag, raceSagMm: sag })
+    .optional(),
   /** Coil forks: rate per leg, preload, oil level; air forks: the gauge pressure set. */
   front: z
     .object({
@@ -43,16 +45,30 @@ export const calibrationReportSchema = z.object({
 });
 export type CalibrationReport = z.input<typeof calibrationReportSchema>;
 
-
 /** What the catalog says: sprung masses from the bike's weight split, the default rider share. */
-export function catalogParameters(bikeInput: unknown, riderRearShare = DEFAULT_RIDER_REAR_SHARE): CalibrationParameters {
+export function catalogParameters(
+  bikeInput: unknown,
+  riderRearShare = DEFAULT_RIDER_REAR_SHARE,
+): CalibrationParameters {
   const bike = parseOrThrow(bikeSpecSchema, bikeInput, "bike.");
   const loads = computeLoads({ ...bike, calibration: undefined }, 0, riderRearShare);
-  return { rearSprungKg: loads.rearStaticN / g, frontSprungKg: loads.frontStaticN / (g * loads.cosRake), riderRearShare };
+  return {
+    rearSprungKg: loads.rearStaticN / g,
+    frontSprungKg: loads.frontStaticN / (g * loads.cosRake),
+    riderRearShare,
+  };
 }
 
 export type CalibrationFit =
-  | { ok: true; parameters: CalibrationParameters; residualsMm: number[]; rmsBeforeMm: number; rmsAfterMm: number; scatter: number; reports: number }
+  | {
+      ok: true;
+      parameters: CalibrationParameters;
+      residualsMm: number[];
+      rmsBeforeMm: number;
+      rmsAfterMm: number;
+      scatter: number;
+      reports: number;
+    }
   | { ok: false; reason: string; reports: number };
 
 interface Equation {
@@ -65,17 +81,30 @@ interface Equation {
   measuredMm: number;
 }
 
-export function fitCalibration(bikeInput: unknown, reportsInput: readonly CalibrationReport[], riderRearShare = DEFAULT_RIDER_REAR_SHARE): CalibrationFit {
+export function fitCalibration(
+  bikeInput: unknown,
+  reportsInput: readonly CalibrationReport[],
+  riderRearShare = DEFAULT_RIDER_REAR_SHARE,
+): CalibrationFit {
   const bike = parseOrThrow(bikeSpecSchema, bikeInput, "bike.");
   const reports = reportsInput.map((r, i) => parseOrThrow(calibrationReportSchema, r, `reports.${i}.`));
   const n = reports.length;
   if (n < MIN_CALIBRATION_REPORTS)
-    return { ok: false, reports: n, reason: `${n} sag report${n === 1 ? "" : "s"} so far: the fit needs at least ${MIN_CALIBRATION_REPORTS}.` };
+    return {
+      ok: false,
+      reports: n,
+      reason: `${n} sag report${n === 1 ? "" : "s"} so far: the fit needs at least ${MIN_CALIBRATION_REPORTS}.`,
+    };
   const eqs = reports.flatMap((r) => equationsOf(bike, r));
   if (!eqs.some((e) => e.row[0] !== 0) || !eqs.some((e) => e.row[1] !== 0) || !eqs.some((e) => e.row[2] !== 0))
-    return { ok: false, reports: n, reason: "The reports need both ends' readings (rider on and off) to fit the masses and the rider's share." };
+    return {
+      ok: false,
+      reports: n,
+      reason: "The reports need both ends' readings (rider on and off) to fit the masses and the rider's share.",
+    };
   const x = solveNormal(eqs);
-  if (!x) return { ok: false, reports: n, reason: "The reports do not pin the masses down (all riders the same weight?)." };
+  if (!x)
+    return { ok: false, reports: n, reason: "The reports do not pin the masses down (all riders the same weight?)." };
   const parameters = { rearSprungKg: x[0], frontSprungKg: x[1], riderRearShare: x[2] };
   const rel = eqs.map((e) => (e.row[0] * x[0] + e.row[1] * x[1] + e.row[2] * x[2] - e.rhs) / Math.max(e.loadKg, 1));
   const scatter = Math.sqrt(rel.reduce((s, v) => s + v * v, 0) / rel.length);
@@ -88,7 +117,15 @@ export function fitCalibration(bikeInput: unknown, reportsInput: readonly Calibr
   const catalog = catalogParameters(bike, riderRearShare);
   const residualsMm = eqs.map((e) => e.predict(parameters) - e.measuredMm);
   const rms = (v: number[]) => Math.sqrt(v.reduce((s, d) => s + d * d, 0) / v.length);
-  return { ok: true, parameters, residualsMm, rmsBeforeMm: rms(eqs.map((e) => e.predict(catalog) - e.measuredMm)), rmsAfterMm: rms(residualsMm), scatter, reports: n };
+  return {
+    ok: true,
+    parameters,
+    residualsMm,
+    rmsBeforeMm: rms(eqs.map((e) => e.predict(catalog) - e.measuredMm)),
+    rmsAfterMm: rms(residualsMm),
+    scatter,
+    reports: n,
+  };
 }
 
 function equationsOf(bike: BikeSpec, r: z.output<typeof calibrationReportSchema>): Equation[] {
@@ -101,8 +138,20 @@ function equationsOf(bike: BikeSpec, r: z.output<typeof calibrationReportSchema>
     const sagAt = (loadN: number) => solveSag(L, k, p, loadN, T).sagMm;
     // A static sag of 0 says only that the preload holds the bike: no equation from it.
     if (r.rear.staticSagMm > 0)
-      out.push({ row: [1, 0, 0], rhs: wheelForceAt(L, k, p, r.rear.staticSagMm) / g, loadKg: wheelForceAt(L, k, p, r.rear.staticSagMm) / g, predict: (q) => sagAt(q.rearSprungKg * g), measuredMm: r.rear.staticSagMm });
-    out.push({ row: [1, 0, m], rhs: wheelForceAt(L, k, p, r.rear.raceSagMm) / g, loadKg: wheelForceAt(L, k, p, r.rear.raceSagMm) / g, predict: (q) => sagAt((q.rearSprungKg + m * q.riderRearShare) * g), measuredMm: r.rear.raceSagMm });
+      out.push({
+        row: [1, 0, 0],
+        rhs: wheelForceAt(L, k, p, r.rear.staticSagMm) / g,
+        loadKg: wheelForceAt(L, k, p, r.rear.staticSagMm) / g,
+        predict: (q) => sagAt(q.rearSprungKg * g),
+        measuredMm: r.rear.staticSagMm,
+      });
+    out.push({
+      row: [1, 0, m],
+      rhs: wheelForceAt(L, k, p, r.rear.raceSagMm) / g,
+      loadKg: wheelForceAt(L, k, p, r.rear.raceSagMm) / g,
+      predict: (q) => sagAt((q.rearSprungKg + m * q.riderRearShare) * g),
+      measuredMm: r.rear.raceSagMm,
+    });
   }
   if (r.front) {
     const f = r.front;
@@ -123,7 +172,13 @@ function equationsOf(bike: BikeSpec, r: z.output<typeof calibrationReportSchema>
       sagAt = (W) => solveForkSag(fk, k, p, h, W).sagMm;
     }
     if (f.staticSagMm > 0)
-      out.push({ row: [0, 1, 0], rhs: force(f.staticSagMm) / (g * c), loadKg: force(f.staticSagMm) / (g * c), predict: (q) => sagAt(q.frontSprungKg * g * c), measuredMm: f.staticSagMm });
+      out.push({
+        row: [0, 1, 0],
+        rhs: force(f.staticSagMm) / (g * c),
+        loadKg: force(f.staticSagMm) / (g * c),
+        predict: (q) => sagAt(q.frontSprungKg * g * c),
+        measuredMm: f.staticSagMm,
+      });
     out.push({
       row: [0, 1, -m],
       rhs: force(f.raceSagMm) / (g * c) - m,

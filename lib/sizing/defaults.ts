@@ -29,12 +29,54 @@ export const LARGE_RATE_CHANGE_FRACTION = 0.08;
  * a little less sag, trail and enduro a little more: common practice.
  */
 export const SAG_TARGETS_BY_DISCIPLINE: Record<Discipline, SagTargetFractions> = {
-  motocross: { rearRace: 0.335, rearStaticMin: 0.1, rearStaticMax: 0.13, forkRace: 0.185, forkStaticMin: 0.085, forkStaticMax: 0.125 },
-  supercross: { rearRace: 0.32, rearStaticMin: 0.095, rearStaticMax: 0.125, forkRace: 0.175, forkStaticMin: 0.08, forkStaticMax: 0.12 },
-  enduro: { rearRace: 0.345, rearStaticMin: 0.1, rearStaticMax: 0.135, forkRace: 0.195, forkStaticMin: 0.09, forkStaticMax: 0.13 },
-  "cross-country": { rearRace: 0.34, rearStaticMin: 0.1, rearStaticMax: 0.13, forkRace: 0.19, forkStaticMin: 0.085, forkStaticMax: 0.125 },
-  desert: { rearRace: 0.335, rearStaticMin: 0.1, rearStaticMax: 0.13, forkRace: 0.185, forkStaticMin: 0.085, forkStaticMax: 0.125 },
-  trail: { rearRace: 0.35, rearStaticMin: 0.105, rearStaticMax: 0.14, forkRace: 0.2, forkStaticMin: 0.09, forkStaticMax: 0.135 },
+  motocross: {
+    rearRace: 0.335,
+    rearStaticMin: 0.1,
+    rearStaticMax: 0.13,
+    forkRace: 0.185,
+    forkStaticMin: 0.085,
+    forkStaticMax: 0.125,
+  },
+  supercross: {
+    rearRace: 0.32,
+    rearStaticMin: 0.095,
+    rearStaticMax: 0.125,
+    forkRace: 0.175,
+    forkStaticMin: 0.08,
+    forkStaticMax: 0.12,
+  },
+  enduro: {
+    rearRace: 0.345,
+    rearStaticMin: 0.1,
+    rearStaticMax: 0.135,
+    forkRace: 0.195,
+    forkStaticMin: 0.09,
+    forkStaticMax: 0.13,
+  },
+  "cross-country": {
+    rearRace: 0.34,
+    rearStaticMin: 0.1,
+    rearStaticMax: 0.13,
+    forkRace: 0.19,
+    forkStaticMin: 0.085,
+    forkStaticMax: 0.125,
+  },
+  desert: {
+    rearRace: 0.335,
+    rearStaticMin: 0.1,
+    rearStaticMax: 0.13,
+    forkRace: 0.185,
+    forkStaticMin: 0.085,
+    forkStaticMax: 0.125,
+  },
+  trail: {
+    rearRace: 0.35,
+    rearStaticMin: 0.105,
+    rearStaticMax: 0.14,
+    forkRace: 0.2,
+    forkStaticMin: 0.09,
+    forkStaticMax: 0.135,
+  },
 };
 
 /** Added to race sag fractions by skill: newer riders a little lower and calmer. From memory. */
@@ -117,24 +159,114 @@ const out = (n: number) => n; // + = clicks out (softer), − = clicks in (firme
 
 /** Default clicker rules: common practice (the usual first move for each complaint or ground). */
 export const DEFAULT_CLICKER_RULES: ClickerRule[] = [
-  { trigger: { kind: "complaint", complaint: "bottoming" }, clicker: "forkCompression", change: out(-2), reason: "Bottoming: firm fork compression 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "bottoming" }, clicker: "shockHighSpeedCompression", change: out(-0.25), reason: "Bottoming: firm shock high-speed compression a quarter turn" },
-  { trigger: { kind: "complaint", complaint: "harsh-small-bumps" }, clicker: "forkCompression", change: out(2), reason: "Harsh on small bumps: soften fork compression 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "harsh-small-bumps" }, clicker: "shockLowSpeedCompression", change: out(2), reason: "Harsh on small bumps: soften shock low-speed compression 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "dives-braking" }, clicker: "forkCompression", change: out(-2), reason: "Dives under braking: firm fork compression 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "wallows" }, clicker: "shockLowSpeedCompression", change: out(-2), reason: "Wallows: firm shock low-speed compression 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "wallows" }, clicker: "forkRebound", change: out(-1), reason: "Wallows: slow fork rebound 1 click" },
-  { trigger: { kind: "complaint", complaint: "kicks" }, clicker: "shockRebound", change: out(-2), reason: "Rear kicks: slow shock rebound 2 clicks" },
-  { trigger: { kind: "complaint", complaint: "headshake" }, clicker: "forkRebound", change: out(-2), reason: "Headshake: slow fork rebound 2 clicks" },
-  { trigger: { kind: "terrain", terrain: "sand" }, clicker: "forkCompression", change: out(-2), reason: "Sand: firm fork compression 2 clicks for support" },
-  { trigger: { kind: "terrain", terrain: "sand" }, clicker: "shockLowSpeedCompression", change: out(-2), reason: "Sand: firm shock low-speed compression 2 clicks for support" },
-  { trigger: { kind: "terrain", terrain: "rocky" }, clicker: "forkCompression", change: out(2), reason: "Rocky ground: soften fork compression 2 clicks for sharp hits" },
-  { trigger: { kind: "terrain", terrain: "roots" }, clicker: "shockLowSpeedCompression", change: out(1), reason: "Roots: soften shock low-speed compression 1 click for grip" },
-  { trigger: { kind: "terrain", terrain: "hardpack" }, clicker: "forkRebound", change: out(1), reason: "Hardpack: quicken fork rebound 1 click to keep the wheel tracking" },
-  { trigger: { kind: "rate-change", end: "rear", direction: "stiffer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION }, clicker: "shockRebound", change: out(-2), reason: "Stiffer shock spring: slow rebound 2 clicks to control the extra stored energy" },
-  { trigger: { kind: "rate-change", end: "rear", direction: "softer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION }, clicker: "shockRebound", change: out(2), reason: "Softer shock spring: quicken rebound 2 clicks" },
-  { trigger: { kind: "rate-change", end: "front", direction: "stiffer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION }, clicker: "forkRebound", change: out(-2), reason: "Stiffer fork springs: slow rebound 2 clicks" },
-  { trigger: { kind: "rate-change", end: "front", direction: "softer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION }, clicker: "forkRebound", change: out(2), reason: "Softer fork springs: quicken rebound 2 clicks" },
+  {
+    trigger: { kind: "complaint", complaint: "bottoming" },
+    clicker: "forkCompression",
+    change: out(-2),
+    reason: "Bottoming: firm fork compression 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "bottoming" },
+    clicker: "shockHighSpeedCompression",
+    change: out(-0.25),
+    reason: "Bottoming: firm shock high-speed compression a quarter turn",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "harsh-small-bumps" },
+    clicker: "forkCompression",
+    change: out(2),
+    reason: "Harsh on small bumps: soften fork compression 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "harsh-small-bumps" },
+    clicker: "shockLowSpeedCompression",
+    change: out(2),
+    reason: "Harsh on small bumps: soften shock low-speed compression 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "dives-braking" },
+    clicker: "forkCompression",
+    change: out(-2),
+    reason: "Dives under braking: firm fork compression 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "wallows" },
+    clicker: "shockLowSpeedCompression",
+    change: out(-2),
+    reason: "Wallows: firm shock low-speed compression 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "wallows" },
+    clicker: "forkRebound",
+    change: out(-1),
+    reason: "Wallows: slow fork rebound 1 click",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "kicks" },
+    clicker: "shockRebound",
+    change: out(-2),
+    reason: "Rear kicks: slow shock rebound 2 clicks",
+  },
+  {
+    trigger: { kind: "complaint", complaint: "headshake" },
+    clicker: "forkRebound",
+    change: out(-2),
+    reason: "Headshake: slow fork rebound 2 clicks",
+  },
+  {
+    trigger: { kind: "terrain", terrain: "sand" },
+    clicker: "forkCompression",
+    change: out(-2),
+    reason: "Sand: firm fork compression 2 clicks for support",
+  },
+  {
+    trigger: { kind: "terrain", terrain: "sand" },
+    clicker: "shockLowSpeedCompression",
+    change: out(-2),
+    reason: "Sand: firm shock low-speed compression 2 clicks for support",
+  },
+  {
+    trigger: { kind: "terrain", terrain: "rocky" },
+    clicker: "forkCompression",
+    change: out(2),
+    reason: "Rocky ground: soften fork compression 2 clicks for sharp hits",
+  },
+  {
+    trigger: { kind: "terrain", terrain: "roots" },
+    clicker: "shockLowSpeedCompression",
+    change: out(1),
+    reason: "Roots: soften shock low-speed compression 1 click for grip",
+  },
+  {
+    trigger: { kind: "terrain", terrain: "hardpack" },
+    clicker: "forkRebound",
+    change: out(1),
+    reason: "Hardpack: quicken fork rebound 1 click to keep the wheel tracking",
+  },
+  {
+    trigger: { kind: "rate-change", end: "rear", direction: "stiffer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION },
+    clicker: "shockRebound",
+    change: out(-2),
+    reason: "Stiffer shock spring: slow rebound 2 clicks to control the extra stored energy",
+  },
+  {
+    trigger: { kind: "rate-change", end: "rear", direction: "softer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION },
+    clicker: "shockRebound",
+    change: out(2),
+    reason: "Softer shock spring: quicken rebound 2 clicks",
+  },
+  {
+    trigger: { kind: "rate-change", end: "front", direction: "stiffer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION },
+    clicker: "forkRebound",
+    change: out(-2),
+    reason: "Stiffer fork springs: slow rebound 2 clicks",
+  },
+  {
+    trigger: { kind: "rate-change", end: "front", direction: "softer", minChangeFraction: LARGE_RATE_CHANGE_FRACTION },
+    clicker: "forkRebound",
+    change: out(2),
+    reason: "Softer fork springs: quicken rebound 2 clicks",
+  },
 ];
 
 const kgf = (v: number) => Math.round(v * 9.80665 * 1000) / 1000;
@@ -146,4 +278,9 @@ const range = (from: number, to: number, step: number) =>
 export const TYPICAL_SHOCK_RATES_NMM: number[] = range(2.4, 6.6, 0.2).map(kgf);
 export const TYPICAL_FORK_RATES_NMM: number[] = range(0.24, 0.6, 0.02).map(kgf);
 
-export { GENERIC_BIKE_CLASSES, TYPICAL_OUTPUT_RANGES, type GenericBikeClass, type TypicalOutputRange } from "./bike-classes";
+export {
+  GENERIC_BIKE_CLASSES,
+  TYPICAL_OUTPUT_RANGES,
+  type GenericBikeClass,
+  type TypicalOutputRange,
+} from "./bike-classes";

@@ -8,9 +8,7 @@ export interface SizingIssue {
 export class SizingInputError extends Error {
   readonly issues: SizingIssue[];
   constructor(issues: SizingIssue[]) {
-    super(
-      "Invalid sizing input: " + issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "),
-    );
+    super("Invalid sizing input: " + issues.map((i) => (i.path ? `${i.path}: ${i.message}` : i.message)).join("; "));
     this.name = "SizingInputError";
     this.issues = issues;
   }
@@ -21,10 +19,7 @@ export function pathOf(path: readonly PropertyKey[]): string {
 }
 
 /** Guard for the standalone helpers: every named number must be finite and, if asked, positive. */
-export function requireNumbers(
-  args: object,
-  rules: Record<string, "finite" | "positive" | "nonnegative">,
-): void {
+export function requireNumbers(args: object, rules: Record<string, "finite" | "positive" | "nonnegative">): void {
   const issues: SizingIssue[] = [];
   const bag = (args ?? {}) as Record<string, unknown>;
   for (const [key, rule] of Object.entries(rules)) {

@@ -20,7 +20,12 @@ export function parseOrThrow<S extends z.ZodType>(schema: S, value: unknown, pre
   throw new SizingInputError(r.error.issues.map((i) => ({ path: prefix + pathOf(i.path), message: i.message })));
 }
 
-function withSagOverrides(t: SagTargetsMm, ov: { raceSagMm?: number; staticSagMinMm?: number; staticSagMaxMm?: number } | undefined, travelMm: number, path: string): SagTargetsMm {
+function withSagOverrides(
+  t: SagTargetsMm,
+  ov: { raceSagMm?: number; staticSagMinMm?: number; staticSagMaxMm?: number } | undefined,
+  travelMm: number,
+  path: string,
+): SagTargetsMm {
   if (!ov) return t;
   const out = {
     raceSagMm: ov.raceSagMm ?? t.raceSagMm,
@@ -127,7 +132,12 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
       rateFactor: rt.rateFactor,
       bottomingFactor: rt.bottomingFactor,
       rateBasis: basis,
-      loads: { rearStaticN: loads.rearStaticN, rearRaceN: loads.rearRaceN, frontStaticN: loads.frontStaticN, frontRaceN: loads.frontRaceN },
+      loads: {
+        rearStaticN: loads.rearStaticN,
+        rearRaceN: loads.rearRaceN,
+        frontStaticN: loads.frontStaticN,
+        frontRaceN: loads.frontRaceN,
+      },
       frequencyRatioWindow: { min: win.min, max: win.max },
     },
     rear,
@@ -139,7 +149,12 @@ export function evaluateParsed(inp: SizingInputParsed, ov: SetupOverrides): Reco
   };
 }
 
-function complaintNotes(inp: SizingInputParsed, rearRaceSagMm: number, forkRaceSagMm: number, warnings: SizingWarning[]): void {
+function complaintNotes(
+  inp: SizingInputParsed,
+  rearRaceSagMm: number,
+  forkRaceSagMm: number,
+  warnings: SizingWarning[],
+): void {
   const m = inp.measuredSag;
   const ends = [
     ["rear", m?.rearRaceSagMm, rearRaceSagMm],

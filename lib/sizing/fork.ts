@@ -30,7 +30,10 @@ export interface SpringGeometry {
  * k = G·d⁴/(8·D³·n_a) (Shigley eq. 10-9), so d ∝ k^¼ and the steel volume π²d²DN_t/4 ∝ √k.
  * From the catalog's stock spring when given, else a typical fork spring (defaults).
  */
-export function forkSpringVolumeScale(displacementDiameterMm: number, stock?: { geometry: SpringGeometry; rateNmm: number }): number {
+export function forkSpringVolumeScale(
+  displacementDiameterMm: number,
+  stock?: { geometry: SpringGeometry; rateNmm: number },
+): number {
   if (stock) return springSteelVolumeMm3(stock.geometry) / Math.sqrt(stock.rateNmm);
   const D = TYPICAL_FORK_SPRING.meanDiameterOfDisplacement * displacementDiameterMm;
   const na = TYPICAL_FORK_SPRING.activeCoils;
@@ -77,12 +80,25 @@ export function forkBottomPressureMpa(f: CoilFork, rateNmm: number, oilLevelMm: 
   return ATMOSPHERE_MPA * Math.pow((vb + f.ad * f.air.forkTravelMm) / vb, n);
 }
 
-export function forkForce(f: CoilFork, rateNmm: number, preloadMm: number, oilLevelMm: number, sMm: number, n: number): number {
+export function forkForce(
+  f: CoilFork,
+  rateNmm: number,
+  preloadMm: number,
+  oilLevelMm: number,
+  sMm: number,
+  n: number,
+): number {
   return f.sprungLegs * rateNmm * (preloadMm + sMm) + forkAirForce(f, rateNmm, oilLevelMm, sMm, n);
 }
 
 /** Preload that puts sag exactly at s: p = (W − ΣF_air(s)) / (n_s·k) − s, isothermal air. */
-export function forkPreloadForSag(f: CoilFork, rateNmm: number, oilLevelMm: number, loadN: number, sMm: number): number {
+export function forkPreloadForSag(
+  f: CoilFork,
+  rateNmm: number,
+  oilLevelMm: number,
+  loadN: number,
+  sMm: number,
+): number {
   return (loadN - forkAirForce(f, rateNmm, oilLevelMm, sMm, 1)) / (f.sprungLegs * rateNmm) - sMm;
 }
 
@@ -113,7 +129,13 @@ export function idealForkSpring(
   return { rateNmm: k, preloadMm: forkPreloadForSag(f, k, oilLevelMm, raceLoadN, raceSagMm) };
 }
 
-export function solveForkSag(f: CoilFork, rateNmm: number, preloadMm: number, oilLevelMm: number, loadN: number): SagSolution {
+export function solveForkSag(
+  f: CoilFork,
+  rateNmm: number,
+  preloadMm: number,
+  oilLevelMm: number,
+  loadN: number,
+): SagSolution {
   return firstCrossing((s) => forkForce(f, rateNmm, preloadMm, oilLevelMm, s, 1), loadN, f.travelMm, []);
 }
 
@@ -125,6 +147,7 @@ export function forkRate(f: CoilFork, rateNmm: number, oilLevelMm: number, sMm: 
     const v = v0 - f.ad * sMm;
     return (n * ATMOSPHERE_MPA * Math.pow(v0 / v, n) * f.ad * f.ad) / v;
   };
-  const air = (f.sprungLegs > 0 ? f.sprungLegs * legRate(vs) : 0) + (f.sprungLegs < 2 ? (2 - f.sprungLegs) * legRate(0) : 0);
+  const air =
+    (f.sprungLegs > 0 ? f.sprungLegs * legRate(vs) : 0) + (f.sprungLegs < 2 ? (2 - f.sprungLegs) * legRate(0) : 0);
   return f.sprungLegs * rateNmm + air;
 }

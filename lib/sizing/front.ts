@@ -17,13 +17,27 @@ import {
 } from "./fork";
 import type { EndModel } from "./selection";
 import { chooseByBasis } from "./basis-choice";
-import { airSpringChargeForLoad, airSpringForce, airSpringPositivePressure, airSpringRate, type AirSpring } from "./air";
+import {
+  airSpringChargeForLoad,
+  airSpringForce,
+  airSpringPositivePressure,
+  airSpringRate,
+  type AirSpring,
+} from "./air";
 import { firstCrossing } from "./solve";
 import { naturalFrequencyOf } from "./frequency";
 import { matchForkFrequency } from "./rate-basis";
 import { ATMOSPHERE_MPA, STANDARD_GRAVITY, pressureTriple, rateTriple } from "./units";
 import { AIR_EQUALIZE_FRACTION_OF_TRAVEL, AIR_NEGATIVE_VOLUME_FRACTION, OIL_LEVEL_STEP_MM } from "./defaults";
-import { CURVE_POINTS, basisReasons, describeSource, limitNotes, preloadLimitWarning, sagWarnings, type EndContext } from "./rear";
+import {
+  CURVE_POINTS,
+  basisReasons,
+  describeSource,
+  limitNotes,
+  preloadLimitWarning,
+  sagWarnings,
+  type EndContext,
+} from "./rear";
 import { SizingInputError } from "./errors";
 import { fmt } from "./format";
 
@@ -40,7 +54,12 @@ export function coilForkOf(bike: BikeSpec): CoilFork {
   return makeCoilFork(
     sprungLegsOf(f.kind),
     f.travelMm,
-    { displacementDiameterMm: f.displacementDiameterMm, freeAreaMm2: f.freeAreaMm2, capVolumeMm3: f.capVolumeMm3, forkTravelMm: f.travelMm },
+    {
+      displacementDiameterMm: f.displacementDiameterMm,
+      freeAreaMm2: f.freeAreaMm2,
+      capVolumeMm3: f.capVolumeMm3,
+      forkTravelMm: f.travelMm,
+    },
     forkSpringVolumeScale(f.displacementDiameterMm, stock),
   );
 }
@@ -71,7 +90,10 @@ export function evaluateFront(c: FrontContext): FrontResult {
 function requireAirGap(fk: CoilFork, k: number, h: number, path: string): void {
   if (!(legBottomVolume(fk, h, springVolumeMm3(fk, k)) > 0))
     throw new SizingInputError([
-      { path, message: `At ${fmt(h, 0)} mm oil level the fork spring's steel fills the air space above the oil: check the oil level, free area and cap volume` },
+      {
+        path,
+        message: `At ${fmt(h, 0)} mm oil level the fork spring's steel fills the air space above the oil: check the oil level, free area and cap volume`,
+      },
     ]);
 }
 
@@ -86,7 +108,9 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   requireAirGap(fk, stockRate, h0, "bike.fork.stockOilLevelMm");
   const mid = (t.staticSagMinMm + t.staticSagMaxMm) / 2;
   if (!(forkPreloadForSag(fk, 1, h0, W.raceN, t.raceSagMm) + t.raceSagMm > 0))
-    throw new SizingInputError([{ path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" }]);
+    throw new SizingInputError([
+      { path: "bike.fork", message: "The air above the oil alone carries the rider at race sag: no coil spring fits" },
+    ]);
   const modelAt = (h: number): EndModel => ({
     preloadForSag: (k, load, s) => forkPreloadForSag(fk, k, h, load, s),
     solveSag: (k, p, load) => solveForkSag(fk, k, p, h, load),
@@ -94,7 +118,16 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const m0 = modelAt(h0);
 
   const sagOnlyRateNmm = idealForkSpring(fk, h0, W.staticN, W.raceN, mid, t.raceSagMm).rateNmm;
-  const freq = matchForkFrequency(fk, h0, stockRate, c.referenceLoads.frontRaceN, W.raceN, t.raceSagMm, loads.cosRake, c.rateFactor);
+  const freq = matchForkFrequency(
+    fk,
+    h0,
+    stockRate,
+    c.referenceLoads.frontRaceN,
+    W.raceN,
+    t.raceSagMm,
+    loads.cosRake,
+    c.rateFactor,
+  );
   const choice = chooseByBasis({
     m: m0,
     loads: W,
@@ -103,7 +136,9 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     rateFactor: c.rateFactor,
     sagOnlyRateNmm,
     preferStaticFor: (wi) =>
-      c.rateFactor === 1 && !wi.limitedBy ? mid : m0.solveSag(wi.rateNmm, forkPreloadForSag(fk, wi.rateNmm, h0, W.raceN, t.raceSagMm), W.staticN).sagMm,
+      c.rateFactor === 1 && !wi.limitedBy
+        ? mid
+        : m0.solveSag(wi.rateNmm, forkPreloadForSag(fk, wi.rateNmm, h0, W.raceN, t.raceSagMm), W.staticN).sagMm,
     freq,
     basis: c.basis,
     stockRatesNmm: c.stockRatesNmm,
@@ -113,9 +148,22 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
   const idealRateNmm = ideal.rateNmm;
   const idealPreloadMm = forkPreloadForSag(fk, idealRateNmm, h0, W.raceN, t.raceSagMm);
   const k = sel.chosen.rateNmm;
-  reasons.push(`Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; rates are per leg, ${fk.sprungLegs} sprung.`);
+  reasons.push(
+    `Front: ${fmt(W.raceN, 0)} N along the fork at race sag, ${fmt(W.staticN, 0)} N with the bike alone; rates are per leg, ${fk.sprungLegs} sprung.`,
+  );
   basisReasons("front", choice, freq, sagOnlyRateNmm, t, mid, c.rateFactor, bike.referenceRiderMassKg, reasons);
-  limitNotes("FRONT", "front", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * c.rateFactor, idealPreloadMm, t, mid, warnings, reasons, basis);
+  limitNotes(
+    "FRONT",
+    "front",
+    ideal,
+    basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * c.rateFactor,
+    idealPreloadMm,
+    t,
+    mid,
+    warnings,
+    reasons,
+    basis,
+  );
   describeSource("FRONT", "fork spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   const clampP = (p: number) => Math.min(limits.maxMm, Math.max(limits.minMm, p));
@@ -131,7 +179,12 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     h = ov.oilLevelMm;
     requireAirGap(fk, k, h, "overrides.front.oilLevelMm");
     if (h < f.oilLevelMinMm || h > f.oilLevelMaxMm)
-      warnings.push({ code: "FRONT_OIL_LEVEL_OUTSIDE_RANGE", severity: "critical", message: `Oil level ${fmt(h, 0)} mm is outside the fork's ${f.oilLevelMinMm}–${f.oilLevelMaxMm} mm.`, field: "front.oilLevelMm" });
+      warnings.push({
+        code: "FRONT_OIL_LEVEL_OUTSIDE_RANGE",
+        severity: "critical",
+        message: `Oil level ${fmt(h, 0)} mm is outside the fork's ${f.oilLevelMinMm}–${f.oilLevelMaxMm} mm.`,
+        field: "front.oilLevelMm",
+      });
   } else {
     if (!grid.length) requireAirGap(fk, k, f.oilLevelMaxMm, "bike.fork.oilLevelMaxMm");
     // Bottoming target first: the level whose bottoming ratio is nearest the target, ties to the level
@@ -146,24 +199,48 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     }
     const edge = h === grid[0] || h === grid[grid.length - 1];
     if (edge && Math.abs(ratioAt(h) - targetRatio) / targetRatio > 0.03)
-      warnings.push({ code: "FRONT_OIL_LEVEL_AT_LIMIT", severity: "caution", message: `Oil level ${fmt(h, 0)} mm is at the end of the fork's range and still misses the bottoming target (${fmt(ratioAt(h), 2)} against ${fmt(targetRatio, 2)} × load).`, field: "front.oilLevelMm" });
-    reasons.push(`Front: oil level ${fmt(h, 0)} mm keeps bottoming force at ${fmt(ratioAt(h), 2)} × load (stock setup ${fmt(stockRatio, 2)} × its reference rider's, factor ${fmt(c.bottomingFactor, 3)}).`);
+      warnings.push({
+        code: "FRONT_OIL_LEVEL_AT_LIMIT",
+        severity: "caution",
+        message: `Oil level ${fmt(h, 0)} mm is at the end of the fork's range and still misses the bottoming target (${fmt(ratioAt(h), 2)} against ${fmt(targetRatio, 2)} × load).`,
+        field: "front.oilLevelMm",
+      });
+    reasons.push(
+      `Front: oil level ${fmt(h, 0)} mm keeps bottoming force at ${fmt(ratioAt(h), 2)} × load (stock setup ${fmt(stockRatio, 2)} × its reference rider's, factor ${fmt(c.bottomingFactor, 3)}).`,
+    );
   }
   const preloadMm = preloadAt(h);
   const neededMm = forkPreloadForSag(fk, k, h, W.raceN, t.raceSagMm);
   if (ov?.preloadMm !== undefined && (preloadMm < limits.minMm || preloadMm > limits.maxMm))
-    warnings.push({ code: "FRONT_PRELOAD_OUTSIDE_LIMITS", severity: "critical", message: `Fork preload ${fmt(preloadMm, 1)} mm is outside ${limits.minMm}–${limits.maxMm} mm.`, field: "front.preloadMm" });
-  else if (ov?.preloadMm === undefined && preloadMm !== neededMm) warnings.push(preloadLimitWarning("FRONT", "front", neededMm, limits, "fork's adjuster"));
+    warnings.push({
+      code: "FRONT_PRELOAD_OUTSIDE_LIMITS",
+      severity: "critical",
+      message: `Fork preload ${fmt(preloadMm, 1)} mm is outside ${limits.minMm}–${limits.maxMm} mm.`,
+      field: "front.preloadMm",
+    });
+  else if (ov?.preloadMm === undefined && preloadMm !== neededMm)
+    warnings.push(preloadLimitWarning("FRONT", "front", neededMm, limits, "fork's adjuster"));
   const race = solveForkSag(fk, k, preloadMm, h, W.raceN);
   const stat = solveForkSag(fk, k, preloadMm, h, W.staticN);
   const clamped = ov?.preloadMm === undefined && preloadMm !== neededMm;
-  sagWarnings("FRONT", "front", race, stat, t, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
+  sagWarnings("FRONT", "front", race, stat, t, warnings, {
+    clamped,
+    chosenNmm: k,
+    idealNmm: idealRateNmm,
+    windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm,
+  });
 
-  const neighbours = [h - OIL_LEVEL_STEP_MM, h, h + OIL_LEVEL_STEP_MM].filter((x) => x >= f.oilLevelMinMm && x <= f.oilLevelMaxMm && hasAir(x));
+  const neighbours = [h - OIL_LEVEL_STEP_MM, h, h + OIL_LEVEL_STEP_MM].filter(
+    (x) => x >= f.oilLevelMinMm && x <= f.oilLevelMaxMm && hasAir(x),
+  );
   if (!neighbours.includes(h)) neighbours.splice(0, 0, h);
   const oilLevelCurves = neighbours.map((lvl) => {
     const p = lvl === h ? preloadMm : preloadAt(lvl);
-    return { oilLevelMm: lvl, bottomingRatio: forkForce(fk, k, p, lvl, f.travelMm, FAST) / W.raceN, points: forkCurve(fk, k, p, lvl) };
+    return {
+      oilLevelMm: lvl,
+      bottomingRatio: forkForce(fk, k, p, lvl, f.travelMm, FAST) / W.raceN,
+      points: forkCurve(fk, k, p, lvl),
+    };
   });
   const bottomN = forkForce(fk, k, preloadMm, h, f.travelMm, FAST);
   // Vertical wheel rate = axial rate / cos²θ (axle moves along the fork; load resolved along it).
@@ -184,7 +261,11 @@ function evaluateCoilFork(c: FrontContext): FrontResult {
     airPressure: null,
     sagTargets: t,
     predicted: { raceSagMm: race.sagMm, staticSagMm: stat.sagMm, raceState: race.state, staticState: stat.state },
-    bottoming: { forceN: bottomN, ratio: bottomN / W.raceN, targetRatio: ov?.oilLevelMm === undefined ? targetRatio : null },
+    bottoming: {
+      forceN: bottomN,
+      ratio: bottomN / W.raceN,
+      targetRatio: ov?.oilLevelMm === undefined ? targetRatio : null,
+    },
     forceCurvePolytropicIndex: FAST,
     forceCurve: oilLevelCurves.find((o) => o.oilLevelMm === h)!.points,
     oilLevelCurves,
@@ -218,10 +299,21 @@ function evaluateAirFork(c: FrontContext): FrontResult {
   const f = bike.fork;
   const { spring, typical } = airSpringOf(bike);
   if (!(t.raceSagMm > spring.equalizeAtMm))
-    throw new SizingInputError([{ path: "bike.fork.air.equalizeAtMm", message: "The chambers must equalise before race sag" }]);
-  const p0 = ov?.airPressureKpaGauge !== undefined ? ov.airPressureKpaGauge / 1000 + ATMOSPHERE_MPA : airSpringChargeForLoad(spring, loads.frontRaceN, t.raceSagMm);
+    throw new SizingInputError([
+      { path: "bike.fork.air.equalizeAtMm", message: "The chambers must equalise before race sag" },
+    ]);
+  const p0 =
+    ov?.airPressureKpaGauge !== undefined
+      ? ov.airPressureKpaGauge / 1000 + ATMOSPHERE_MPA
+      : airSpringChargeForLoad(spring, loads.frontRaceN, t.raceSagMm);
   const gaugeKpa = (p0 - ATMOSPHERE_MPA) * 1000;
-  if (gaugeKpa < 0) throw new SizingInputError([{ path: "bike.fork.air", message: "The sag target needs less than atmospheric pressure: chamber too small for this load" }]);
+  if (gaugeKpa < 0)
+    throw new SizingInputError([
+      {
+        path: "bike.fork.air",
+        message: "The sag target needs less than atmospheric pressure: chamber too small for this load",
+      },
+    ]);
   reasons.push(
     ov?.airPressureKpaGauge !== undefined
       ? `Front: air pressure ${fmt(gaugeKpa, 0)} kPa set by the tuner.`

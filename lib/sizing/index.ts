@@ -16,7 +16,13 @@ export {
   type SagTargetFractions,
   type ClickerRule,
 } from "./input-schema";
-export { bikeSpecSchema, leveragePointSchema, clickerRangeSchema, type BikeSpec, type BikeSpecInput } from "./bike-schema";
+export {
+  bikeSpecSchema,
+  leveragePointSchema,
+  clickerRangeSchema,
+  type BikeSpec,
+  type BikeSpecInput,
+} from "./bike-schema";
 export {
   recommendationSchema,
   warningSchema,
@@ -35,7 +41,14 @@ export { setupOverridesSchema, type SetupOverrides, type SetupOverridesInput } f
 export * from "./vocab";
 
 export { shockTravelAtMm, rearWheelForceN, solveRearSagMm, idealRearSpring, type LeveragePoint } from "./linkage";
-export { forkAirForceN, airForkPressureKpaGauge, polytropicPressure, airSpringForce, airSpringChargeForLoad, type AirSpring } from "./air";
+export {
+  forkAirForceN,
+  airForkPressureKpaGauge,
+  polytropicPressure,
+  airSpringForce,
+  airSpringChargeForLoad,
+  type AirSpring,
+} from "./air";
 export {
   springRateFromGeometry,
   wahlFactor,

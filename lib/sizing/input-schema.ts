@@ -95,7 +95,10 @@ export const sizingInputSchema = z.object({
   complaints: z.array(complaintSchema).max(8).default([]),
   /** Springs the rider has fitted now (N/mm; fork per leg), shown beside stock; not used for sizing. */
   currentSprings: z
-    .object({ forkRateNmm: z.number().positive().max(50).optional(), shockRateNmm: z.number().positive().max(400).optional() })
+    .object({
+      forkRateNmm: z.number().positive().max(50).optional(),
+      shockRateNmm: z.number().positive().max(400).optional(),
+    })
     .optional(),
   measuredSag: z
     .object({ rearStaticSagMm: sag, rearRaceSagMm: sag, forkStaticSagMm: sag, forkRaceSagMm: sag })

@@ -37,7 +37,8 @@ export function prepareLinkage(curve: readonly LeveragePoint[], path = "curve"):
   const y = curve.map((p) => p.wheelTravelMm);
   const r = curve.map((p) => p.ratio);
   const x = [0];
-  for (let i = 1; i < y.length; i++) x.push(x[i - 1]! + segmentIntegral(r[i - 1]!, slopeOf(y, r, i - 1), y[i]! - y[i - 1]!));
+  for (let i = 1; i < y.length; i++)
+    x.push(x[i - 1]! + segmentIntegral(r[i - 1]!, slopeOf(y, r, i - 1), y[i]! - y[i - 1]!));
   return { y, r, x };
 }
 
@@ -152,7 +153,12 @@ export function idealRearSpring(a: {
   staticSagMm: number;
   raceSagMm: number;
 }): { rateNmm: number; preloadMm: number } {
-  requireNumbers(a, { staticLoadN: "positive", raceLoadN: "positive", staticSagMm: "nonnegative", raceSagMm: "positive" });
+  requireNumbers(a, {
+    staticLoadN: "positive",
+    raceLoadN: "positive",
+    staticSagMm: "nonnegative",
+    raceSagMm: "positive",
+  });
   if (!(a.raceSagMm > a.staticSagMm))
     throw new SizingInputError([{ path: "raceSagMm", message: "Race sag must be larger than static sag" }]);
   if (!(a.raceLoadN > a.staticLoadN))
@@ -177,7 +183,13 @@ export function idealSpringOn(
 }
 
 /** k* = (W_rr·LR(y_r) − W_rs·LR(y_s)) / (x(y_r) − x(y_s)); may be ≤ 0 when the targets are impossible. */
-export function twoSagRate(L: Linkage, staticLoadN: number, raceLoadN: number, staticSagMm: number, raceSagMm: number): number {
+export function twoSagRate(
+  L: Linkage,
+  staticLoadN: number,
+  raceLoadN: number,
+  staticSagMm: number,
+  raceSagMm: number,
+): number {
   const num = raceLoadN * leverageAt(L, raceSagMm) - staticLoadN * leverageAt(L, staticSagMm);
   return num / (travelAt(L, raceSagMm) - travelAt(L, staticSagMm));
 }

@@ -24,7 +24,9 @@ export function computeLoads(bike: BikeSpec, riderMassKg: number, riderRearShare
   const cal = bike.calibration;
   const riderRearShare = cal?.riderRearShare ?? riderRearShareTarget;
   const rearStaticN = cal ? cal.rearSprungKg * g : (bike.massKg * (1 - bike.frontFraction) - bike.unsprungRearKg) * g;
-  const frontStaticN = cal ? cal.frontSprungKg * g * cosRake : (bike.massKg * bike.frontFraction - bike.unsprungFrontKg) * g * cosRake;
+  const frontStaticN = cal
+    ? cal.frontSprungKg * g * cosRake
+    : (bike.massKg * bike.frontFraction - bike.unsprungFrontKg) * g * cosRake;
   return {
     rearStaticN,
     rearRaceN: rearStaticN + riderMassKg * riderRearShare * g,

@@ -41,12 +41,20 @@ export function matchRearFrequency(
   const targetFrequencyHz = referenceFrequencyHz * Math.sqrt(rateFactor);
   const omega = 2 * Math.PI * targetFrequencyHz;
   const lr = leverageAt(L, raceSagMm);
-  const k = (lr * lr * (raceLoadN / STANDARD_GRAVITY) * omega * omega) / 1000 + raceLoadN * lr * leverageSlopeAt(L, raceSagMm);
+  const k =
+    (lr * lr * (raceLoadN / STANDARD_GRAVITY) * omega * omega) / 1000 + raceLoadN * lr * leverageSlopeAt(L, raceSagMm);
   return { referenceFrequencyHz, targetFrequencyHz, rateNmm: k > 0 ? k : null };
 }
 
 /** Fork's frequency at race sag: axial rate over cos²θ (the axle moves along the fork), m = W/(g·cos θ). */
-export function forkFrequencyAt(fk: CoilFork, rateNmm: number, oilLevelMm: number, raceLoadN: number, raceSagMm: number, cosRake: number): number {
+export function forkFrequencyAt(
+  fk: CoilFork,
+  rateNmm: number,
+  oilLevelMm: number,
+  raceLoadN: number,
+  raceSagMm: number,
+  cosRake: number,
+): number {
   const wheelRate = forkRate(fk, rateNmm, oilLevelMm, raceSagMm, 1) / (cosRake * cosRake);
   return naturalFrequencyOf(wheelRate, raceLoadN / (STANDARD_GRAVITY * cosRake));
 }
@@ -64,6 +72,11 @@ export function matchForkFrequency(
 ): FrequencyMatch {
   const referenceFrequencyHz = forkFrequencyAt(fk, stockRateNmm, oilLevelMm, referenceRaceLoadN, raceSagMm, cosRake);
   const targetFrequencyHz = referenceFrequencyHz * Math.sqrt(rateFactor);
-  const rateNmm = solveIncreasing((k) => forkFrequencyAt(fk, k, oilLevelMm, raceLoadN, raceSagMm, cosRake), targetFrequencyHz, 0.5, 20);
+  const rateNmm = solveIncreasing(
+    (k) => forkFrequencyAt(fk, k, oilLevelMm, raceLoadN, raceSagMm, cosRake),
+    targetFrequencyHz,
+    0.5,
+    20,
+  );
   return { referenceFrequencyHz, targetFrequencyHz, rateNmm: rateNmm !== null && rateNmm > 0 ? rateNmm : null };
 }

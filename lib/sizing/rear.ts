@@ -2,7 +2,15 @@ import type { BikeSpec } from "./bike-schema";
 import type { Loads } from "./loads";
 import type { RearResult, SizingWarning } from "./output-schema";
 import type { SetupOverrides } from "./overrides";
-import { twoSagRate, prepareLinkage, preloadForSag, solveSag, wheelForceAt, wheelRateAt, type Linkage } from "./linkage";
+import {
+  twoSagRate,
+  prepareLinkage,
+  preloadForSag,
+  solveSag,
+  wheelForceAt,
+  wheelRateAt,
+  type Linkage,
+} from "./linkage";
 import type { EndModel, IdealToOrder, Limits, SagTargetsMm } from "./selection";
 import { chooseByBasis, type BasisChoice } from "./basis-choice";
 import { matchRearFrequency, type FrequencyMatch } from "./rate-basis";
@@ -44,7 +52,14 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
 
   // Both bases, always: the one used sizes the spring, the other is shown beside it.
   const sagOnlyRateNmm = twoSagRate(L, W.staticN, W.raceN, mid, targets.raceSagMm);
-  const freq = matchRearFrequency(L, r.stockRateNmm, c.referenceLoads.rearRaceN, W.raceN, targets.raceSagMm, rateFactor);
+  const freq = matchRearFrequency(
+    L,
+    r.stockRateNmm,
+    c.referenceLoads.rearRaceN,
+    W.raceN,
+    targets.raceSagMm,
+    rateFactor,
+  );
   const choice = chooseByBasis({
     m,
     loads: W,
@@ -54,7 +69,10 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
     sagOnlyRateNmm,
     // With a rate factor of 1 and no limit this is the window's middle; otherwise where the ideal puts it.
     preferStaticFor: (wi) =>
-      rateFactor === 1 && !wi.limitedBy ? mid : solveSag(L, wi.rateNmm, preloadForSag(L, wi.rateNmm, W.raceN, targets.raceSagMm), W.staticN, r.wheelTravelMm).sagMm,
+      rateFactor === 1 && !wi.limitedBy
+        ? mid
+        : solveSag(L, wi.rateNmm, preloadForSag(L, wi.rateNmm, W.raceN, targets.raceSagMm), W.staticN, r.wheelTravelMm)
+            .sagMm,
     freq,
     basis: c.basis,
     stockRatesNmm: c.stockRatesNmm,
@@ -68,19 +86,41 @@ export function evaluateRear(c: EndContext, ov: SetupOverrides["rear"]): RearRes
     `Rear: rider and bike put ${fmt(W.raceN, 0)} N on the rear wheel at race sag, ${fmt(W.staticN, 0)} N with the bike alone.`,
   );
   basisReasons("rear", choice, freq, sagOnlyRateNmm, targets, mid, rateFactor, bike.referenceRiderMassKg, reasons);
-  limitNotes("REAR", "rear", ideal, basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * rateFactor, idealPreloadMm, targets, mid, warnings, reasons, basis);
+  limitNotes(
+    "REAR",
+    "rear",
+    ideal,
+    basis === "ride-frequency" ? (freq.rateNmm ?? 0) : sagOnlyRateNmm * rateFactor,
+    idealPreloadMm,
+    targets,
+    mid,
+    warnings,
+    reasons,
+    basis,
+  );
   describeSource("REAR", "shock spring", sel.source, k, idealRateNmm, warnings, reasons);
 
   let preloadMm = sel.chosen.preloadMm;
   if (ov?.preloadMm !== undefined) {
     preloadMm = ov.preloadMm;
     if (preloadMm < r.preloadMinMm || preloadMm > r.preloadMaxMm)
-      warnings.push({ code: "REAR_PRELOAD_OUTSIDE_LIMITS", severity: "critical", message: `Preload ${fmt(preloadMm, 1)} mm is outside the shock's ${r.preloadMinMm}–${r.preloadMaxMm} mm.`, field: "rear.preloadMm" });
-  } else if (!sel.chosen.preloadOk) warnings.push(preloadLimitWarning("REAR", "rear", sel.chosen.preloadNeededMm, limits, "collar"));
+      warnings.push({
+        code: "REAR_PRELOAD_OUTSIDE_LIMITS",
+        severity: "critical",
+        message: `Preload ${fmt(preloadMm, 1)} mm is outside the shock's ${r.preloadMinMm}–${r.preloadMaxMm} mm.`,
+        field: "rear.preloadMm",
+      });
+  } else if (!sel.chosen.preloadOk)
+    warnings.push(preloadLimitWarning("REAR", "rear", sel.chosen.preloadNeededMm, limits, "collar"));
   const race = solveSag(L, k, preloadMm, W.raceN, r.wheelTravelMm);
   const stat = solveSag(L, k, preloadMm, W.staticN, r.wheelTravelMm);
   const clamped = ov?.preloadMm === undefined && !sel.chosen.preloadOk;
-  sagWarnings("REAR", "rear", race, stat, targets, warnings, { clamped, chosenNmm: k, idealNmm: idealRateNmm, windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm });
+  sagWarnings("REAR", "rear", race, stat, targets, warnings, {
+    clamped,
+    chosenNmm: k,
+    idealNmm: idealRateNmm,
+    windowPickNmm: basis === "sag-window" ? null : choice.windowSel.chosen.rateNmm,
+  });
 
   const forceCurve = [];
   for (let i = 0; i < CURVE_POINTS; i++) {
@@ -135,11 +175,21 @@ export function basisReasons(
     sagOnlyNmm > 0
       ? `sag window: ${rateText(windowIdealNmm, end)} meets ${fmt(t.raceSagMm, 0)} mm race sag with ${fmt(staticMidMm, 0)} mm static sag${factor}`
       : "sag window: no spring meets both sag targets";
-  reasons.push(basis === "ride-frequency" ? `${End} sized by ${freqText}. Beside it, ${windowText}.` : `${End} sized by ${windowText}. Beside it, ${freqText}.`);
+  reasons.push(
+    basis === "ride-frequency"
+      ? `${End} sized by ${freqText}. Beside it, ${windowText}.`
+      : `${End} sized by ${windowText}. Beside it, ${freqText}.`,
+  );
 }
 
 /** Race sag on target needs preload past the adjuster: the spring's direction follows from that. */
-export function preloadLimitWarning(code: "REAR" | "FRONT", end: "rear" | "front", neededMm: number, limits: Limits, adjuster: string): SizingWarning {
+export function preloadLimitWarning(
+  code: "REAR" | "FRONT",
+  end: "rear" | "front",
+  neededMm: number,
+  limits: Limits,
+  adjuster: string,
+): SizingWarning {
   const soft = neededMm > limits.maxMm;
   return {
     code: `${code}_PRELOAD_AT_LIMIT`,
@@ -160,7 +210,8 @@ export function describeSource(
 ): void {
   const end = code === "REAR" ? "Rear" : "Front";
   const rate = (v: number) => rateText(v, code === "REAR" ? "rear" : "front");
-  if (source === "stock") reasons.push(`${end}: stocked ${what} ${rate(k)} meets the preload limits and the static sag window.`);
+  if (source === "stock")
+    reasons.push(`${end}: stocked ${what} ${rate(k)} meets the preload limits and the static sag window.`);
   else if (source === "stock-nearest")
     warnings.push({
       code: `${code}_NO_STOCK_FIT`,
@@ -169,7 +220,12 @@ export function describeSource(
       field: `${code === "REAR" ? "rear" : "front"}.chosenRate`,
     });
   else if (source === "order")
-    warnings.push({ code: `${code}_TO_ORDER`, severity: "info", message: `No ${what}s in stock: order ${rate(k)}.`, field: "stock" });
+    warnings.push({
+      code: `${code}_TO_ORDER`,
+      severity: "info",
+      message: `No ${what}s in stock: order ${rate(k)}.`,
+      field: "stock",
+    });
   else reasons.push(`${end}: ${what} rate ${rate(k)} set by the tuner.`);
 }
 
@@ -195,17 +251,28 @@ export function sagWarnings(
     warnings.push({
       code: `${code}_RACE_SAG_UNREACHABLE`,
       severity: "critical",
-      message: race.state === "topped-out" ? "With this preload the rider's weight does not compress the spring at all." : "The spring bottoms under the rider's weight alone.",
+      message:
+        race.state === "topped-out"
+          ? "With this preload the rider's weight does not compress the spring at all."
+          : "The spring bottoms under the rider's weight alone.",
       field: `${field}.predicted.raceSagMm`,
     });
   else if (Math.abs(race.sagMm - t.raceSagMm) > 2)
-    warnings.push({ code: `${code}_RACE_SAG_OFF_TARGET`, severity: "caution", message: `Race sag ${fmt(race.sagMm, 0)} mm against a target of ${fmt(t.raceSagMm, 0)} mm.`, field: `${field}.predicted.raceSagMm` });
+    warnings.push({
+      code: `${code}_RACE_SAG_OFF_TARGET`,
+      severity: "caution",
+      message: `Race sag ${fmt(race.sagMm, 0)} mm against a target of ${fmt(t.raceSagMm, 0)} mm.`,
+      field: `${field}.predicted.raceSagMm`,
+    });
   const below = t.staticSagMinMm - stat.sagMm;
   const above = stat.sagMm - t.staticSagMaxMm;
   if (below > 1e-6 || above > 1e-6) {
     // With preload at a limit the static sag is distorted by the clamp: the rate itself says which way.
     const soft = dir?.clamped ? dir.chosenNmm < dir.idealNmm : below > 0;
-    const pick = dir?.windowPickNmm != null && Math.abs(dir.windowPickNmm - dir.chosenNmm) > 1e-9 ? ` The sag-window basis would pick ${rateText(dir.windowPickNmm, field)}.` : "";
+    const pick =
+      dir?.windowPickNmm != null && Math.abs(dir.windowPickNmm - dir.chosenNmm) > 1e-9
+        ? ` The sag-window basis would pick ${rateText(dir.windowPickNmm, field)}.`
+        : "";
     warnings.push({
       code: `${code}_STATIC_SAG_OUTSIDE_WINDOW`,
       severity: "caution",
@@ -244,5 +311,8 @@ export function limitNotes(
       message: `${basis === "ride-frequency" ? "The matched ride frequency asks" : "The sag targets ask"} for ${rateText(sagIdealNmm, end)}, which needs preload outside the adjuster's limits; the ${ideal.limitedBy === "soft" ? "softest" : "stiffest"} fittable rate is ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm.`,
       field: `${end}.idealRate`,
     });
-  else reasons.push(`${code === "REAR" ? "Rear" : "Front"}: ideal ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm preload.`);
+  else
+    reasons.push(
+      `${code === "REAR" ? "Rear" : "Front"}: ideal ${rateText(ideal.rateNmm, end)} at ${fmt(preloadMm, 1)} mm preload.`,
+    );
 }

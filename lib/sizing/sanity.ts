@@ -8,10 +8,17 @@ import { fmt } from "./format";
 
 export function sanityWarnings(bike: BikeSpec, rear: RearResult, front: FrontResult, warnings: SizingWarning[]): void {
   const L = SANITY_LIMITS;
-  const ack = (w: Omit<SizingWarning, "requiresAcknowledgement">) => warnings.push({ ...w, requiresAcknowledgement: true });
+  const ack = (w: Omit<SizingWarning, "requiresAcknowledgement">) =>
+    warnings.push({ ...w, requiresAcknowledgement: true });
   const bottoming = [
     ["REAR", "rear", "Rear", rear.bottoming.ratio, "the leverage curve, stroke or spring rate"],
-    ["FRONT", "front", "Fork", front.bottoming.ratio, front.kind === "air" ? "the air chamber volume" : "the oil level, free area or cap volume"],
+    [
+      "FRONT",
+      "front",
+      "Fork",
+      front.bottoming.ratio,
+      front.kind === "air" ? "the air chamber volume" : "the oil level, free area or cap volume",
+    ],
   ] as const;
   for (const [code, field, End, ratio, suspect] of bottoming)
     if (!(ratio >= L.bottomingRatio.min && ratio <= L.bottomingRatio.max))

@@ -41,7 +41,9 @@ export function evaluateCandidate(
   const preloadOk = preloadMm === preloadNeededMm;
   const st = m.solveSag(rateNmm, preloadMm, loads.staticN);
   // Race sag is exactly the target when the preload was not clamped; otherwise solve for it.
-  const race: SagSolution = preloadOk ? { sagMm: t.raceSagMm, state: "ok" } : m.solveSag(rateNmm, preloadMm, loads.raceN);
+  const race: SagSolution = preloadOk
+    ? { sagMm: t.raceSagMm, state: "ok" }
+    : m.solveSag(rateNmm, preloadMm, loads.raceN);
   const staticOk = st.state === "ok" && st.sagMm >= t.staticSagMinMm - 1e-9 && st.sagMm <= t.staticSagMaxMm + 1e-9;
   return { rateNmm, preloadNeededMm, preloadMm, preloadOk, race, static: st, staticOk };
 }
@@ -87,7 +89,8 @@ export function selectRate(
 function nearestByRatio(cs: readonly Candidate[], idealRateNmm: number): Candidate | undefined {
   let best: Candidate | undefined;
   for (const c of cs)
-    if (!best || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(best.rateNmm / idealRateNmm))) best = c;
+    if (!best || Math.abs(Math.log(c.rateNmm / idealRateNmm)) < Math.abs(Math.log(best.rateNmm / idealRateNmm)))
+      best = c;
   return best;
 }
 
@@ -105,7 +108,13 @@ export interface IdealToOrder {
  * p(k) = p_max and p(k) = p_min, found numerically. Clamping the ideal into that band keeps it
  * monotonic in load and in sag (both bounds move the same way as the ideal).
  */
-export function idealToOrder(idealNmm: number, m: EndModel, raceN: number, raceSagMm: number, limits: Limits): IdealToOrder {
+export function idealToOrder(
+  idealNmm: number,
+  m: EndModel,
+  raceN: number,
+  raceSagMm: number,
+  limits: Limits,
+): IdealToOrder {
   const minusPreload = (k: number) => -m.preloadForSag(k, raceN, raceSagMm);
   const softest = solveIncreasing(minusPreload, -limits.maxMm, 1, 10) ?? 0;
   const stiffest = solveIncreasing(minusPreload, -limits.minMm, 1, 10) ?? Infinity;
@@ -129,7 +138,10 @@ export function selectNearest(
   limits: Limits,
 ): Selection {
   const tried = stockRatesNmm.map((k) => evaluateCandidate(m, k, loads, t, limits));
-  const fit = nearestByRatio(tried.filter((c) => c.preloadOk), idealRateNmm);
+  const fit = nearestByRatio(
+    tried.filter((c) => c.preloadOk),
+    idealRateNmm,
+  );
   if (fit) return { chosen: fit, source: "stock", tried };
   const nearest = nearestByRatio(tried, idealRateNmm);
   if (nearest) return { chosen: nearest, source: "stock-nearest", tried };

@@ -9,9 +9,16 @@ export function springRateFromGeometry(a: {
   activeCoils: number;
   shearModulusMpa: number;
 }): number {
-  requireNumbers(a, { wireDiameterMm: "positive", meanCoilDiameterMm: "positive", activeCoils: "positive", shearModulusMpa: "positive" });
+  requireNumbers(a, {
+    wireDiameterMm: "positive",
+    meanCoilDiameterMm: "positive",
+    activeCoils: "positive",
+    shearModulusMpa: "positive",
+  });
   if (a.meanCoilDiameterMm <= a.wireDiameterMm)
-    throw new SizingInputError([{ path: "meanCoilDiameterMm", message: "Mean coil diameter must exceed the wire diameter" }]);
+    throw new SizingInputError([
+      { path: "meanCoilDiameterMm", message: "Mean coil diameter must exceed the wire diameter" },
+    ]);
   return (a.shearModulusMpa * a.wireDiameterMm ** 4) / (8 * a.meanCoilDiameterMm ** 3 * a.activeCoils);
 }
 
@@ -40,12 +47,15 @@ export function activeCoilsSquaredGround(totalCoils: number): number {
 export function rateFromLoadTest(a: { lengthsMm: [number, number]; forcesN: [number, number] }): number {
   const [l1, l2] = a.lengthsMm ?? [];
   const [f1, f2] = a.forcesN ?? [];
-  requireNumbers({ "lengthsMm.0": l1, "lengthsMm.1": l2, "forcesN.0": f1, "forcesN.1": f2 }, {
-    "lengthsMm.0": "positive",
-    "lengthsMm.1": "positive",
-    "forcesN.0": "nonnegative",
-    "forcesN.1": "nonnegative",
-  });
+  requireNumbers(
+    { "lengthsMm.0": l1, "lengthsMm.1": l2, "forcesN.0": f1, "forcesN.1": f2 },
+    {
+      "lengthsMm.0": "positive",
+      "lengthsMm.1": "positive",
+      "forcesN.0": "nonnegative",
+      "forcesN.1": "nonnegative",
+    },
+  );
   if (l1 === l2) throw new SizingInputError([{ path: "lengthsMm", message: "The two lengths must differ" }]);
   const k = (f2! - f1!) / (l1! - l2!);
   if (!(k > 0)) throw new SizingInputError([{ path: "forcesN", message: "Force must rise as the spring shortens" }]);
@@ -56,7 +66,11 @@ export function rateFromLoadTest(a: { lengthsMm: [number, number]; forcesN: [num
  * Steel volume of a helical spring: wire length π·D·N_t times wire section π·d²/4, so
  * V = π²·d²·D·N_t/4 (N_t total coils, ends included; the small pitch angle is neglected).
  */
-export function springSteelVolumeMm3(a: { wireDiameterMm: number; meanCoilDiameterMm: number; totalCoils: number }): number {
+export function springSteelVolumeMm3(a: {
+  wireDiameterMm: number;
+  meanCoilDiameterMm: number;
+  totalCoils: number;
+}): number {
   requireNumbers(a, { wireDiameterMm: "positive", meanCoilDiameterMm: "positive", totalCoils: "positive" });
   return (Math.PI * Math.PI * a.wireDiameterMm ** 2 * a.meanCoilDiameterMm * a.totalCoils) / 4;
 }

@@ -35,9 +35,20 @@ export function resolveTargets(input: SizingInputParsed): ResolvedTargets {
   const offset = t.sagOffsetBySkill?.[skill] ?? SAG_OFFSET_BY_SKILL[skill];
   const rearT = input.bike.rear.wheelTravelMm;
   const forkT = input.bike.fork.travelMm;
-  const rear = { raceSagMm: (sag.rearRace + offset) * rearT, staticSagMinMm: sag.rearStaticMin * rearT, staticSagMaxMm: sag.rearStaticMax * rearT };
-  const front = { raceSagMm: (sag.forkRace + offset) * forkT, staticSagMinMm: sag.forkStaticMin * forkT, staticSagMaxMm: sag.forkStaticMax * forkT };
-  const path = t.sagOffsetBySkill?.[skill] !== undefined ? `targets.sagOffsetBySkill.${skill}` : `targets.sagByDiscipline.${discipline}`;
+  const rear = {
+    raceSagMm: (sag.rearRace + offset) * rearT,
+    staticSagMinMm: sag.rearStaticMin * rearT,
+    staticSagMaxMm: sag.rearStaticMax * rearT,
+  };
+  const front = {
+    raceSagMm: (sag.forkRace + offset) * forkT,
+    staticSagMinMm: sag.forkStaticMin * forkT,
+    staticSagMaxMm: sag.forkStaticMax * forkT,
+  };
+  const path =
+    t.sagOffsetBySkill?.[skill] !== undefined
+      ? `targets.sagOffsetBySkill.${skill}`
+      : `targets.sagByDiscipline.${discipline}`;
   checkSagTargets(rear, rearT, path);
   checkSagTargets(front, forkT, path);
   const rateFactor =
@@ -62,7 +73,12 @@ export function resolveTargets(input: SizingInputParsed): ResolvedTargets {
 }
 
 export function checkSagTargets(t: SagTargetsMm, travelMm: number, path: string): void {
-  if (!(t.staticSagMinMm >= 0 && t.staticSagMaxMm >= t.staticSagMinMm && t.raceSagMm > t.staticSagMaxMm && t.raceSagMm < travelMm))
+  if (!(
+    t.staticSagMinMm >= 0 &&
+    t.staticSagMaxMm >= t.staticSagMinMm &&
+    t.raceSagMm > t.staticSagMaxMm &&
+    t.raceSagMm < travelMm
+  ))
     throw new SizingInputError([
       { path, message: `Sag targets must satisfy 0 ≤ static min ≤ static max < race sag < travel (${travelMm} mm)` },
     ]);

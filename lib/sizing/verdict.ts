@@ -43,7 +43,13 @@ export interface SagVerdict {
   suggestedRateNmm: number | null;
   nearestStockRateNmm: number | null;
   /** Loads the measured sags imply on the fitted spring, against the model's. */
-  impliedLoads?: { staticN: number | null; raceN: number; modelStaticN: number; modelRaceN: number; plausible: boolean };
+  impliedLoads?: {
+    staticN: number | null;
+    raceN: number;
+    modelStaticN: number;
+    modelRaceN: number;
+    plausible: boolean;
+  };
   message: string;
 }
 
@@ -82,7 +88,8 @@ export function sagVerdict(a: {
   const mid = (t.staticSagMinMm + t.staticSagMaxMm) / 2;
   const stock = a.end === "front" ? inp.stock.forkRatesNmm : inp.stock.shockRatesNmm;
   const travel = a.end === "front" ? inp.bike.fork.travelMm : inp.bike.rear.wheelTravelMm;
-  if (meas.raceSagMm >= travel) throw new SizingInputError([{ path: "measured.raceSagMm", message: "Race sag must be less than the travel" }]);
+  if (meas.raceSagMm >= travel)
+    throw new SizingInputError([{ path: "measured.raceSagMm", message: "Race sag must be less than the travel" }]);
   const model = rec.resolved.loads;
   const modelStaticN = a.end === "front" ? model.frontStaticN : model.rearStaticN;
   const modelRaceN = a.end === "front" ? model.frontRaceN : model.rearRaceN;
@@ -165,7 +172,8 @@ export function sagVerdict(a: {
   const tiny = Math.abs(change) < LEAVE_IT.preloadMm || (tc !== null && Math.abs(tc) < LEAVE_IT.collarTurns);
   const fix = tiny
     ? "leave the preload as it is"
-    : `${change >= 0 ? "add" : "remove"} ${fmt(Math.abs(change), 1)} mm preload` + (tc !== null ? ` (${fmt(Math.abs(tc), 2)} collar turns)` : "");
+    : `${change >= 0 ? "add" : "remove"} ${fmt(Math.abs(change), 1)} mm preload` +
+      (tc !== null ? ` (${fmt(Math.abs(tc), 2)} collar turns)` : "");
   const message =
     verdict === "right"
       ? `Spring is right: ${fix}${tiny ? "" : ` to bring race sag to ${fmt(t.raceSagMm, 0)} mm`}; static sag will be ${fmt(staticAfter, 0)} mm.`
@@ -188,13 +196,22 @@ export function sagVerdict(a: {
   };
 }
 
-function coilLaw(inp: SizingInputParsed, rec: Recommendation, end: "front" | "rear", raceTargetMm: number, staticMidMm: number): EndLaw {
+function coilLaw(
+  inp: SizingInputParsed,
+  rec: Recommendation,
+  end: "front" | "rear",
+  raceTargetMm: number,
+  staticMidMm: number,
+): EndLaw {
   if (end === "rear") {
     const r = inp.bike.rear;
     const L = prepareLinkage(r.leverageCurve, "input.bike.rear.leverageCurve");
     const k = rec.rear.chosenRate.nMm;
     const limits = { minMm: r.preloadMinMm, maxMm: r.preloadMaxMm };
-    const m: EndModel = { preloadForSag: (kk, W, y) => preloadForSag(L, kk, W, y), solveSag: (kk, p, W) => solveSag(L, kk, p, W, r.wheelTravelMm) };
+    const m: EndModel = {
+      preloadForSag: (kk, W, y) => preloadForSag(L, kk, W, y),
+      solveSag: (kk, p, W) => solveSag(L, kk, p, W, r.wheelTravelMm),
+    };
     return {
       force: (y) => wheelForceAt(L, k, rec.rear.preloadMm, y),
       preloadFor: (W) => preloadForSag(L, k, W, raceTargetMm),
@@ -211,14 +228,18 @@ function coilLaw(inp: SizingInputParsed, rec: Recommendation, end: "front" | "re
   const h = rec.front.oilLevelMm ?? f.stockOilLevelMm;
   const p0 = rec.front.preloadMm ?? 0;
   const limits = { minMm: f.preloadMinMm, maxMm: f.preloadMaxMm };
-  const m: EndModel = { preloadForSag: (kk, W, s) => forkPreloadForSag(fk, kk, h, W, s), solveSag: (kk, p, W) => solveForkSag(fk, kk, p, h, W) };
+  const m: EndModel = {
+    preloadForSag: (kk, W, s) => forkPreloadForSag(fk, kk, h, W, s),
+    solveSag: (kk, p, W) => solveForkSag(fk, kk, p, h, W),
+  };
   return {
     force: (s) => forkForce(fk, k, p0, h, s, 1),
     preloadFor: (W) => forkPreloadForSag(fk, k, h, W, raceTargetMm),
     sagWith: (p, W) => solveForkSag(fk, k, p, h, W).sagMm,
     limits,
     preloadMm: p0,
-    suggest: (Ws, Wr) => fittable(idealForkSpring(fk, h, Ws, Wr, staticMidMm, raceTargetMm).rateNmm, m, Wr, raceTargetMm, limits),
+    suggest: (Ws, Wr) =>
+      fittable(idealForkSpring(fk, h, Ws, Wr, staticMidMm, raceTargetMm).rateNmm, m, Wr, raceTargetMm, limits),
   };
 }
 
@@ -247,7 +268,9 @@ function airVerdict(
   const now = rec.front.airPressure?.kpaGauge ?? 0;
   const p1 = airSpringChargeForLoad(spring, Wr, t.raceSagMm);
   const kpa = (p1 - ATMOSPHERE_MPA) * 1000;
-  const staticAfter = firstCrossing((s) => airSpringForce(spring, p1, s, 1), Ws, inp.bike.fork.travelMm, [spring.equalizeAtMm]).sagMm;
+  const staticAfter = firstCrossing((s) => airSpringForce(spring, p1, s, 1), Ws, inp.bike.fork.travelMm, [
+    spring.equalizeAtMm,
+  ]).sagMm;
   const below = t.staticSagMinMm - staticAfter;
   const above = staticAfter - t.staticSagMaxMm;
   const verdict = meas.staticSagMm === 0 || below > 0 ? "too-soft" : above > 0 ? "too-stiff" : "right";
@@ -274,12 +297,18 @@ function airVerdict(
 }
 
 /** Nearest stocked rate by ratio, and how many shelf steps (the stock's median spacing) away it is. */
-function nearestStocked(stock: readonly number[], rateNmm: number | null): { rateNmm: number; stepsAway: number } | null {
+function nearestStocked(
+  stock: readonly number[],
+  rateNmm: number | null,
+): { rateNmm: number; stepsAway: number } | null {
   if (rateNmm === null || !stock.length) return null;
   let best = stock[0]!;
   for (const r of stock) if (Math.abs(Math.log(r / rateNmm)) < Math.abs(Math.log(best / rateNmm))) best = r;
   const sorted = [...new Set(stock)].sort((x, y) => x - y);
-  const gaps = sorted.slice(1).map((v, i) => v - sorted[i]!).sort((x, y) => x - y);
+  const gaps = sorted
+    .slice(1)
+    .map((v, i) => v - sorted[i]!)
+    .sort((x, y) => x - y);
   const step = gaps.length ? gaps[Math.floor(gaps.length / 2)]! : Math.abs(best - rateNmm);
   return { rateNmm: best, stepsAway: step > 0 ? Math.abs(best - rateNmm) / step : 0 };
 }

@@ -3,14 +3,7 @@ import { z } from "zod";
 // Shared vocabulary: forms, the database and the engine all reuse these enums, so a value
 // accepted by the request form is always one the engine understands.
 
-export const disciplineSchema = z.enum([
-  "motocross",
-  "supercross",
-  "enduro",
-  "cross-country",
-  "desert",
-  "trail",
-]);
+export const disciplineSchema = z.enum(["motocross", "supercross", "enduro", "cross-country", "desert", "trail"]);
 export type Discipline = z.infer<typeof disciplineSchema>;
 export const DISCIPLINES = disciplineSchema.options;
 

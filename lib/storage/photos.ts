@@ -25,7 +25,11 @@ export interface CheckedPhoto extends IncomingPhoto {
 }
 
 export class PhotoError extends Error {
-  constructor(readonly field: string, message: string, readonly status: 400 | 413 = 400) {
+  constructor(
+    readonly field: string,
+    message: string,
+    readonly status: 400 | 413 = 400,
+  ) {
     super(message);
     this.name = "PhotoError";
   }
@@ -35,7 +39,10 @@ const isPhotoType = (mime: string): mime is PhotoContentType => mime in PHOTO_TY
 
 /** Names a photo in messages without echoing control characters or very long names. */
 export function displayName(name: string): string {
-  const clean = name.replace(/[\u0000-\u001f\u007f]/g, "").trim().slice(0, 120);
+  const clean = name
+    .replace(/[\u0000-\u001f\u007f]/g, "")
+    .trim()
+    .slice(0, 120);
   return clean || "photo";
 }
 

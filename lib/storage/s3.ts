@@ -26,7 +26,9 @@ export function createS3Store(env: Env): PhotoStore {
     async put(storageKey, bytes, contentType) {
       // S3 answers a PUT only after the object is stored; reads after it see it (strong
       // read-after-write consistency, AWS S3 user guide "Amazon S3 data consistency model").
-      await client.send(new PutObjectCommand({ Bucket: bucket, Key: PREFIX + storageKey, Body: bytes, ContentType: contentType }));
+      await client.send(
+        new PutObjectCommand({ Bucket: bucket, Key: PREFIX + storageKey, Body: bytes, ContentType: contentType }),
+      );
     },
     async get(storageKey) {
       try {
@@ -34,7 +36,8 @@ export function createS3Store(env: Env): PhotoStore {
         if (!object.Body) throw new Error(`S3 object ${storageKey} has no body`);
         return await object.Body.transformToByteArray();
       } catch (error) {
-        if (error instanceof NoSuchKey) throw Object.assign(new Error(`No stored photo ${storageKey}`), { code: "ENOENT" });
+        if (error instanceof NoSuchKey)
+          throw Object.assign(new Error(`No stored photo ${storageKey}`), { code: "ENOENT" });
         throw error;
       }
     },

@@ -9,26 +9,63 @@ const CURVE = "spec.rear.leverageCurve";
 
 /** Column order of the file; spec paths are the engine's field names. */
 export const CATALOG_CSV_COLUMNS = [
-  "slug", "name", "bikeClass", "yearFrom", "yearTo", "retired", "notes",
-  "spec.massKg", "spec.frontFraction", "spec.unsprungFrontKg", "spec.unsprungRearKg", "spec.rakeDeg",
-  "spec.referenceRiderMassKg", "spec.riderMassRangeKg.min", "spec.riderMassRangeKg.max",
-  "spec.rear.wheelTravelMm", "spec.rear.shockStrokeMm", CURVE, "spec.rear.preloadMinMm",
-  "spec.rear.preloadMaxMm", "spec.rear.collarPitchMm", "spec.rear.stockRateNmm",
-  "spec.fork.kind", "spec.fork.travelMm", "spec.fork.preloadMinMm", "spec.fork.preloadMaxMm",
-  "spec.fork.stockPreloadMm", "spec.fork.stockRateNmm", "spec.fork.displacementDiameterMm",
-  "spec.fork.freeAreaMm2", "spec.fork.capVolumeMm3", "spec.fork.oilLevelMinMm", "spec.fork.oilLevelMaxMm",
-  "spec.fork.stockOilLevelMm", "spec.fork.air.pistonAreaMm2", "spec.fork.air.chamberVolumeMm3",
-  "spec.fork.air.stockPressureKpaGauge", "spec.fork.air.negativeChamberVolumeMm3", "spec.fork.air.equalizeAtMm",
-  "spec.fork.stockSpring.wireDiameterMm", "spec.fork.stockSpring.meanCoilDiameterMm", "spec.fork.stockSpring.totalCoils",
-  ...["forkCompression", "forkRebound", "shockLowSpeedCompression", "shockHighSpeedCompression", "shockRebound"].flatMap(
-    (c) => ["min", "max", "stock"].map((k) => `spec.clickers.${c}.${k}`),
-  ),
+  "slug",
+  "name",
+  "bikeClass",
+  "yearFrom",
+  "yearTo",
+  "retired",
+  "notes",
+  "spec.massKg",
+  "spec.frontFraction",
+  "spec.unsprungFrontKg",
+  "spec.unsprungRearKg",
+  "spec.rakeDeg",
+  "spec.referenceRiderMassKg",
+  "spec.riderMassRangeKg.min",
+  "spec.riderMassRangeKg.max",
+  "spec.rear.wheelTravelMm",
+  "spec.rear.shockStrokeMm",
+  CURVE,
+  "spec.rear.preloadMinMm",
+  "spec.rear.preloadMaxMm",
+  "spec.rear.collarPitchMm",
+  "spec.rear.stockRateNmm",
+  "spec.fork.kind",
+  "spec.fork.travelMm",
+  "spec.fork.preloadMinMm",
+  "spec.fork.preloadMaxMm",
+  "spec.fork.stockPreloadMm",
+  "spec.fork.stockRateNmm",
+  "spec.fork.displacementDiameterMm",
+  "spec.fork.freeAreaMm2",
+  "spec.fork.capVolumeMm3",
+  "spec.fork.oilLevelMinMm",
+  "spec.fork.oilLevelMaxMm",
+  "spec.fork.stockOilLevelMm",
+  "spec.fork.air.pistonAreaMm2",
+  "spec.fork.air.chamberVolumeMm3",
+  "spec.fork.air.stockPressureKpaGauge",
+  "spec.fork.air.negativeChamberVolumeMm3",
+  "spec.fork.air.equalizeAtMm",
+  "spec.fork.stockSpring.wireDiameterMm",
+  "spec.fork.stockSpring.meanCoilDiameterMm",
+  "spec.fork.stockSpring.totalCoils",
+  ...[
+    "forkCompression",
+    "forkRebound",
+    "shockLowSpeedCompression",
+    "shockHighSpeedCompression",
+    "shockRebound",
+  ].flatMap((c) => ["min", "max", "stock"].map((k) => `spec.clickers.${c}.${k}`)),
 ] as const;
 
 const TEXT_COLUMNS = new Set(["slug", "name", "bikeClass", "notes", "spec.fork.kind"]);
 
 function getPath(obj: unknown, path: string): unknown {
-  return path.split(".").reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), obj);
+  return path
+    .split(".")
+    .reduce<unknown>((o, k) => (o && typeof o === "object" ? (o as Record<string, unknown>)[k] : undefined), obj);
 }
 
 function setPath(obj: Record<string, unknown>, path: string, value: unknown) {
@@ -70,7 +107,10 @@ export type CsvRowResult =
 
 /** Parses and validates every row on its own; `row` counts the header as row 1, as a spreadsheet does. */
 export function parseCatalogCsv(text: string): { results: CsvRowResult[]; fileError?: string } {
-  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), { header: true, skipEmptyLines: "greedy" });
+  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), {
+    header: true,
+    skipEmptyLines: "greedy",
+  });
   const headers = parsed.meta.fields ?? [];
   const missing = ["slug", "name", "bikeClass", CURVE].filter((c) => !headers.includes(c));
   if (missing.length) return { results: [], fileError: `Missing columns: ${missing.join(", ")}` };
@@ -86,7 +126,12 @@ export function parseCatalogCsv(text: string): { results: CsvRowResult[]; fileEr
         const points = cell.split(";").map((pair) => pair.split(":").map((s) => Number(s.trim())));
         if (points.some((p) => p.length !== 2 || p.some((n) => !Number.isFinite(n))))
           fields[col] = 'Write the curve as "wheel mm:ratio" pairs separated by semicolons';
-        else setPath(model, col, points.map(([wheelTravelMm, ratio]) => ({ wheelTravelMm, ratio })));
+        else
+          setPath(
+            model,
+            col,
+            points.map(([wheelTravelMm, ratio]) => ({ wheelTravelMm, ratio })),
+          );
       } else {
         const n = Number(cell);
         if (!Number.isFinite(n)) fields[col] = `"${cell}" is not a number`;
@@ -106,7 +151,8 @@ export function parseCatalogCsv(text: string): { results: CsvRowResult[]; fileEr
     results: results.map((r) => {
       if (!r.ok) return r;
       const first = seen.get(r.slug);
-      if (first !== undefined) return { row: r.row, ok: false, slug: r.slug, fields: { slug: `Same slug as row ${first}` } };
+      if (first !== undefined)
+        return { row: r.row, ok: false, slug: r.slug, fields: { slug: `Same slug as row ${first}` } };
       seen.set(r.slug, r.row);
       return r;
     }),

@@ -3,19 +3,10 @@ import { REQUEST_STATUSES } from "@/lib/requests/status";
 import { text } from "./text";
 import { disciplineSchema } from "@/lib/sizing";
 
-export const QUEUE_SORTS = [
-  "newest",
-  "oldest",
-  "number",
-  "number_asc",
-  "rider",
-  "rider_desc",
-  "status",
-] as const;
+export const QUEUE_SORTS = ["newest", "oldest", "number", "number_asc", "rider", "rider_desc", "status"] as const;
 export type QueueSort = (typeof QUEUE_SORTS)[number];
 
-const day = (field: string) =>
-  z.iso.date({ message: `${field} must be a date (YYYY-MM-DD)` }).optional();
+const day = (field: string) => z.iso.date({ message: `${field} must be a date (YYYY-MM-DD)` }).optional();
 
 /** Query string of GET /api/requests. Empty strings (a cleared filter) mean "no filter". */
 export const queueQuerySchema = z

@@ -69,7 +69,11 @@ export const bikeStepSchema = z
     if (mass) {
       const kg = mass.unit === "kg" ? mass.value : mass.value * 0.45359237;
       if (kg < 30 || kg > 250)
-        ctx.addIssue({ code: "custom", path: ["notListed", "mass", "value"], message: "Bike weight should be between 30 and 250 kg (66–550 lb)" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["notListed", "mass", "value"],
+          message: "Bike weight should be between 30 and 250 kg (66–550 lb)",
+        });
     }
   });
 

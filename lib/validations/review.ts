@@ -3,8 +3,7 @@ import { z } from "zod";
 import { text } from "./text";
 import { setupOverridesSchema } from "@/lib/sizing";
 
-const notes = (field: string) =>
-  text().trim().max(4000, `Keep the ${field} under 4000 characters`).nullish();
+const notes = (field: string) => text().trim().max(4000, `Keep the ${field} under 4000 characters`).nullish();
 
 export const saveRecommendationSchema = z.object({
   /** The version the tuner was editing; a newer save by someone else answers 409 instead of overwriting. */
@@ -16,11 +15,17 @@ export const saveRecommendationSchema = z.object({
 export type SaveRecommendationBody = z.output<typeof saveRecommendationSchema>;
 
 export const askRiderSchema = z.object({
-  question: text().trim().min(5, "Write the question (at least 5 characters)").max(2000, "Keep the question under 2000 characters"),
+  question: text()
+    .trim()
+    .min(5, "Write the question (at least 5 characters)")
+    .max(2000, "Keep the question under 2000 characters"),
 });
 
 export const declineSchema = z.object({
-  reason: text().trim().min(5, "Give the rider a reason (at least 5 characters)").max(2000, "Keep the reason under 2000 characters"),
+  reason: text()
+    .trim()
+    .min(5, "Give the rider a reason (at least 5 characters)")
+    .max(2000, "Keep the reason under 2000 characters"),
 });
 
 export const assignSchema = z.object({

@@ -36,11 +36,16 @@ const endSchema = (end: "front" | "rear") =>
     .superRefine((v, ctx) => {
       const any = v.free !== undefined || v.static !== undefined || v.race !== undefined;
       if (!any) return;
-      if (v.static === undefined) ctx.addIssue({ code: "custom", path: ["static"], message: `Enter the ${end} static sag` });
+      if (v.static === undefined)
+        ctx.addIssue({ code: "custom", path: ["static"], message: `Enter the ${end} static sag` });
       if (v.race === undefined) ctx.addIssue({ code: "custom", path: ["race"], message: `Enter the ${end} race sag` });
       else if (v.race === 0) ctx.addIssue({ code: "custom", path: ["race"], message: "Race sag must be more than 0" });
       else if (v.static !== undefined && v.race <= v.static)
-        ctx.addIssue({ code: "custom", path: ["race"], message: "Race sag (with you aboard) must be larger than static sag" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["race"],
+          message: "Race sag (with you aboard) must be larger than static sag",
+        });
     });
 
 export const sagReportSchema = z

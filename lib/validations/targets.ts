@@ -2,7 +2,13 @@
 // the clicker rules table (the engine's clickerRuleSchema).
 import { z } from "zod";
 import { text } from "./text";
-import { clickerRuleSchema, disciplineSchema, rateBasisSchema, sagTargetFractionsSchema, skillLevelSchema } from "@/lib/sizing";
+import {
+  clickerRuleSchema,
+  disciplineSchema,
+  rateBasisSchema,
+  sagTargetFractionsSchema,
+  skillLevelSchema,
+} from "@/lib/sizing";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 
 // Ranges are the engine's targetsSchema limits, so a saved row never fails sizing later.

@@ -17,7 +17,10 @@ export function activeCoils(totalCoils: number, endType: EndType): number {
 }
 
 const pos = (label: string, max: number) =>
-  z.number({ message: `Enter the ${label}` }).positive(`${label} must be above 0`).max(max, `${label} looks too large`);
+  z
+    .number({ message: `Enter the ${label}` })
+    .positive(`${label} must be above 0`)
+    .max(max, `${label} looks too large`);
 
 /** Steel spring wire G ≈ 79.3 GPa (Shigley table 10-5, music wire / chrome-silicon ≈ 77–81 GPa). */
 export const DEFAULT_SHEAR_MODULUS_MPA = 79_300;
@@ -33,9 +36,17 @@ export const coilGeometrySchema = z
   })
   .superRefine((g, ctx) => {
     if (g.outerDiameterMm - g.wireDiameterMm <= g.wireDiameterMm)
-      ctx.addIssue({ code: "custom", path: ["outerDiameterMm"], message: "Outer diameter must exceed twice the wire diameter" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["outerDiameterMm"],
+        message: "Outer diameter must exceed twice the wire diameter",
+      });
     if (activeCoils(g.totalCoils, g.endType) <= 0)
-      ctx.addIssue({ code: "custom", path: ["totalCoils"], message: "Too few coils for this end type: no active coil left" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["totalCoils"],
+        message: "Too few coils for this end type: no active coil left",
+      });
   });
 
 export const loadTestSchema = z
@@ -47,7 +58,8 @@ export const loadTestSchema = z
     forceUnit: z.enum(["N", "kgf", "lbf"]),
   })
   .superRefine((t, ctx) => {
-    if (t.length1Mm === t.length2Mm) ctx.addIssue({ code: "custom", path: ["length2Mm"], message: "The two lengths must differ" });
+    if (t.length1Mm === t.length2Mm)
+      ctx.addIssue({ code: "custom", path: ["length2Mm"], message: "The two lengths must differ" });
     else if ((t.force2 - t.force1) / (t.length1Mm - t.length2Mm) <= 0)
       ctx.addIssue({ code: "custom", path: ["force2"], message: "Force must rise as the spring gets shorter" });
   });

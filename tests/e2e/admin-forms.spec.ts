@@ -54,7 +54,14 @@ test.describe("admin forms", () => {
     const form = page.getByRole("form", { name: "Shop settings" });
     // Stand in for a server that refuses what the browser accepted (the server is the authority).
     await page.route("**/api/shop/settings", (route) =>
-      route.fulfill({ status: 400, contentType: "application/json", body: JSON.stringify({ error: "Some fields need attention.", fields: { gearMassKg: "Refused by the server", _: "Body-level note" } }) }),
+      route.fulfill({
+        status: 400,
+        contentType: "application/json",
+        body: JSON.stringify({
+          error: "Some fields need attention.",
+          fields: { gearMassKg: "Refused by the server", _: "Body-level note" },
+        }),
+      }),
     );
     await form.getByLabel("Riding gear mass (kg)").fill("12.5");
     await form.getByRole("button", { name: "Save settings" }).click();
@@ -67,7 +74,9 @@ test.describe("admin forms", () => {
     await page.unroute("**/api/shop/settings");
   });
 
-  test("targets: sag is typed in % with mm for the reference bike; the race-sag rule is checked before sending", async ({ page }) => {
+  test("targets: sag is typed in % with mm for the reference bike; the race-sag rule is checked before sending", async ({
+    page,
+  }) => {
     await page.goto(`/shop/targets`);
     let sent = 0;
     await page.route("**/api/shop/targets", (route) => ((sent += 1), route.abort()));
@@ -107,7 +116,9 @@ test.describe("admin forms", () => {
     await page.unroute("**/api/shop/targets/rules");
   });
 
-  test("stock: a shock spring above 400 N/mm is refused on the rate field, whatever unit it was typed in", async ({ page }) => {
+  test("stock: a shock spring above 400 N/mm is refused on the rate field, whatever unit it was typed in", async ({
+    page,
+  }) => {
     await page.goto(`/shop/stock`);
     let sent = 0;
     await page.route("**/api/shop/stock", (route) => ((sent += 1), route.abort()));

@@ -25,8 +25,15 @@ async function addProgressiveBike(api: APIRequestContext, name: string): Promise
   const seeded = await api.get(`/api/shop/catalog/${stableUuid("bike:mx-450-4t")}`);
   expect(seeded.status()).toBe(200);
   const { spec } = (await seeded.json()) as { spec: { rear: Record<string, unknown> } };
-  const rear = { ...spec.rear, wheelTravelMm: 300, shockStrokeMm: Number(STROKE), leverageCurve: CURVE.map(([wheelTravelMm, ratio]) => ({ wheelTravelMm, ratio })) };
-  const created = await api.post("/api/shop/catalog", { data: { name, bikeClass: "enduro-350-4t", spec: { ...spec, rear } } });
+  const rear = {
+    ...spec.rear,
+    wheelTravelMm: 300,
+    shockStrokeMm: Number(STROKE),
+    leverageCurve: CURVE.map(([wheelTravelMm, ratio]) => ({ wheelTravelMm, ratio })),
+  };
+  const created = await api.post("/api/shop/catalog", {
+    data: { name, bikeClass: "enduro-350-4t", spec: { ...spec, rear } },
+  });
   expect(created.status(), `adding the bike answered ${await created.text()}`).toBe(201);
   return ((await created.json()) as { id: string }).id;
 }
@@ -77,7 +84,11 @@ test.describe("admin catalog", () => {
     expect(model.spec.rear.leverageCurve.map((p) => [p.wheelTravelMm, p.ratio])).toEqual(CURVE);
   });
 
-  test("an invited tuner joins through the e-mailed link; deactivation signs them out at once", async ({ page, mailbox, newVisitor }) => {
+  test("an invited tuner joins through the e-mailed link; deactivation signs them out at once", async ({
+    page,
+    mailbox,
+    newVisitor,
+  }) => {
     const email = `e2e-tuner-${uniqueStamp()}@example.test`;
     // A name of its own: another run's deactivated newcomer must not answer for this one.
     const newcomer = `Tess Newcomer${uniqueLetters()}`;
@@ -125,7 +136,14 @@ test.describe("admin catalog", () => {
     const bikeId = await addProgressiveBike(owner, name);
     const email = `e2e-rider-${uniqueStamp()}@example.test`;
     const { id } = await submitRequest({
-      rider: { name: "Test Rider", email, weight: { value: 80, unit: "kg" }, gearIncluded: true, skill: "intermediate", style: "moderate" },
+      rider: {
+        name: "Test Rider",
+        email,
+        weight: { value: 80, unit: "kg" },
+        gearIncluded: true,
+        skill: "intermediate",
+        style: "moderate",
+      },
       riding: { discipline: "enduro", terrain: [], jumpSize: "medium" },
       bike: { modelId: bikeId },
       feel: { complaints: [] },

@@ -10,12 +10,17 @@ const OWNER = "owner@sagwise.test";
 const MODEL = stableUuid("bike:mx-125-2t");
 
 test.describe("calibration from sag reports", () => {
-  test("the admin applies the demo model's calibration, a new request uses it, and undo restores the catalog's", async ({ page, staffApi, submitRequest }) => {
+  test("the admin applies the demo model's calibration, a new request uses it, and undo restores the catalog's", async ({
+    page,
+    staffApi,
+    submitRequest,
+  }) => {
     const api = await staffApi(OWNER);
     // Start from the seed's state even if an earlier run stopped half-way.
     const start = await api.get(`/api/shop/catalog/${MODEL}/calibration`);
     expect(start.status()).toBe(200);
-    if (((await start.json()) as { applied: boolean }).applied) await api.post(`/api/shop/catalog/${MODEL}/calibration`, { data: { action: "undo" } });
+    if (((await start.json()) as { applied: boolean }).applied)
+      await api.post(`/api/shop/catalog/${MODEL}/calibration`, { data: { action: "undo" } });
 
     await signInWithPassword(page, OWNER, `/shop/catalog/${MODEL}`);
     await page.getByRole("link", { name: "Calibration from sag reports" }).click();
@@ -43,7 +48,9 @@ test.describe("calibration from sag reports", () => {
 
     // A rider's new request on the model is sized with the calibrated loads, and the review says so.
     const stamp = uniqueStamp();
-    const { id } = await submitRequest(answersLike("c03", { name: "Calibrated Rider", email: `calibrated.${stamp}@example.test` }));
+    const { id } = await submitRequest(
+      answersLike("c03", { name: "Calibrated Rider", email: `calibrated.${stamp}@example.test` }),
+    );
     await page.goto(`/shop/requests/${id}`);
     await expect(page.getByText("this version used the bike model's calibration from 6 sag reports")).toBeVisible();
 

@@ -26,13 +26,19 @@ async function expectNoSideways(page: Page) {
 async function expectAccessible(page: Page, what: string) {
   const result = await new AxeBuilder({ page }).analyze();
   const bad = result.violations.filter((v) => v.impact === "serious" || v.impact === "critical");
-  expect(bad.map((v) => `${what}: ${v.id} (${v.impact}) ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`)).toEqual([]);
+  expect(bad.map((v) => `${what}: ${v.id} (${v.impact}) ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`)).toEqual(
+    [],
+  );
 }
 
 const stepHeading = (page: Page) => page.getByRole("heading", { level: 2, name: /^Step \d of 5/ });
 
 test.describe("a rider's setup request", () => {
-  test("completes every step in lb and inches, keeps the draft over a reload, submits and opens the e-mailed link", async ({ page, mailbox, baseURL }) => {
+  test("completes every step in lb and inches, keeps the draft over a reload, submits and opens the e-mailed link", async ({
+    page,
+    mailbox,
+    baseURL,
+  }) => {
     const email = `phone.rider.${uniqueStamp()}@example.test`;
     await page.goto("/");
     await expectNoSideways(page);
@@ -95,7 +101,9 @@ test.describe("a rider's setup request", () => {
     await page.getByLabel("Bike weight, ready to ride (optional)").fill("245");
     await page.getByRole("group", { name: "Bike weight unit" }).getByText("lb").click();
     await page.getByLabel("Year (optional)").fill("2019");
-    await page.getByLabel(/^Photos of the bike/).setInputFiles({ name: "bike.png", mimeType: "image/png", buffer: Buffer.from(tinyPng()) });
+    await page
+      .getByLabel(/^Photos of the bike/)
+      .setInputFiles({ name: "bike.png", mimeType: "image/png", buffer: Buffer.from(tinyPng()) });
     await expect(page.getByRole("button", { name: "Remove bike.png" })).toHaveCount(1);
     await expectNoSideways(page);
     await page.getByRole("button", { name: "Next" }).click();
@@ -126,7 +134,9 @@ test.describe("a rider's setup request", () => {
     await page.getByRole("button", { name: "Send my request" }).click();
     await expect(page.getByText("Agree to be contacted about this request")).toHaveCount(1);
     await page.getByLabel(/The shop may contact me/).check();
-    const posted = page.waitForResponse((r) => r.url() === `${baseURL}/api/requests` && r.request().method() === "POST");
+    const posted = page.waitForResponse(
+      (r) => r.url() === `${baseURL}/api/requests` && r.request().method() === "POST",
+    );
     await page.getByRole("button", { name: "Send my request" }).click();
     const response = await posted;
     expect(response.status()).toBe(201);
@@ -154,9 +164,15 @@ test.describe("a rider's setup request", () => {
     await expectNoSideways(page);
   });
 
-  test("reports measured sag on an approved request and gets the verdict at once", async ({ page, submitRequest, staffApi }) => {
+  test("reports measured sag on an approved request and gets the verdict at once", async ({
+    page,
+    submitRequest,
+    staffApi,
+  }) => {
     const stamp = uniqueStamp();
-    const { id, statusUrl } = await submitRequest(answersLike("r09", { name: "Dario Sagreport", email: `sag.${stamp}@example.test` }));
+    const { id, statusUrl } = await submitRequest(
+      answersLike("r09", { name: "Dario Sagreport", email: `sag.${stamp}@example.test` }),
+    );
     const tuner = await staffApi("tuner@sagwise.test");
     const approved = await tuner.post(`/api/requests/${id}/approve`, { data: {} });
     expect(approved.ok(), `approve answered ${approved.status()}`).toBe(true);
@@ -260,7 +276,15 @@ test.describe("accessibility of the public pages (axe-core)", () => {
 
 // The answers the form test above types, as the form sends them (lb and inches, a bike not listed).
 const PHONE_RIDER_ANSWERS = (email: string): RequestAnswersInput => ({
-  rider: { name: "Phone Rider", email, weight: { value: 185, unit: "lb" }, gearIncluded: true, height: { value: 70, unit: "in" }, skill: "advanced", style: "moderate" },
+  rider: {
+    name: "Phone Rider",
+    email,
+    weight: { value: 185, unit: "lb" },
+    gearIncluded: true,
+    height: { value: 70, unit: "in" },
+    skill: "advanced",
+    style: "moderate",
+  },
   riding: { discipline: "enduro", terrain: ["rocky", "roots"], jumpSize: "small", hoursPerMonth: 12 },
   bike: {
     modelId: null,
@@ -277,7 +301,11 @@ const PHONE_RIDER_ANSWERS = (email: string): RequestAnswersInput => ({
 });
 
 test.describe("after a staff approval", () => {
-  test("the rider downloads the approved sheet from the status page and reports sag", async ({ page, submitRequest, staffApi }) => {
+  test("the rider downloads the approved sheet from the status page and reports sag", async ({
+    page,
+    submitRequest,
+    staffApi,
+  }) => {
     const created = await submitRequest(PHONE_RIDER_ANSWERS(`phone.rider.${uniqueStamp()}@example.test`));
     const tuner = await staffApi("tuner@sagwise.test");
     const approved = await tuner.post(`/api/requests/${created.id}/approve`, { data: {} });
@@ -289,7 +317,11 @@ test.describe("after a staff approval", () => {
     const sheet = await page.request.get(href!);
     expect(sheet.status()).toBe(200);
     expect(sheet.headers()["content-type"]).toContain("application/pdf");
-    expect(Buffer.from(await sheet.body()).subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    expect(
+      Buffer.from(await sheet.body())
+        .subarray(0, 5)
+        .toString("latin1"),
+    ).toBe("%PDF-");
 
     const form = page.getByRole("form", { name: "Report measured sag" });
     await form.getByRole("group", { name: "Sag unit" }).getByText("in").click();

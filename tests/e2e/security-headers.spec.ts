@@ -15,11 +15,13 @@ async function watch(page: Page) {
     // Playwright injects the listener below into every frame: the sandbox refusing it is expected.
     const text = message.text();
     const sandboxRefusal = text.includes("about:srcdoc") && text.includes("sandboxed");
-    if (message.type() === "error" && !text.startsWith("Failed to load resource") && !sandboxRefusal) problems.push(`console: ${text}`);
+    if (message.type() === "error" && !text.startsWith("Failed to load resource") && !sandboxRefusal)
+      problems.push(`console: ${text}`);
   });
   page.on("response", (response) => {
     // No favicon is shipped; the browser asks for one anyway.
-    if (response.status() >= 400 && new URL(response.url()).pathname !== "/favicon.ico") problems.push(`${response.status()} ${response.url()}`);
+    if (response.status() >= 400 && new URL(response.url()).pathname !== "/favicon.ico")
+      problems.push(`${response.status()} ${response.url()}`);
   });
   page.on("pageerror", (error) => problems.push(`page error: ${error.message}`));
   await page.addInitScript(() => {
@@ -48,8 +50,17 @@ async function openAndCheck(page: Page, path: string, problems: string[]) {
 test("the public pages pass their policy", async ({ page, submitRequest }) => {
   const problems = await watch(page);
   const rider = uniqueLetters();
-  const { statusUrl } = await submitRequest(answersLike("r01", { name: `Csp ${rider}`, email: `csp.${rider}@example.test` }));
-  for (const path of ["/", "/request", "/sign-in", "/my-requests", statusUrl, "/invite/not-a-real-invitation-token-0000"]) {
+  const { statusUrl } = await submitRequest(
+    answersLike("r01", { name: `Csp ${rider}`, email: `csp.${rider}@example.test` }),
+  );
+  for (const path of [
+    "/",
+    "/request",
+    "/sign-in",
+    "/my-requests",
+    statusUrl,
+    "/invite/not-a-real-invitation-token-0000",
+  ]) {
     await openAndCheck(page, path, problems);
   }
 });
@@ -59,7 +70,19 @@ test("the shop's pages pass their policy", async ({ page }) => {
   await signInWithPassword(page, "owner@sagwise.test", "/shop");
   const bike = stableUuid("bike:mx-450-4t");
   const request = stableUuid("request:r09");
-  const pages = ["/shop", `/shop/requests/${request}`, "/shop/catalog", "/shop/catalog/new", `/shop/catalog/${bike}`, "/shop/stock", "/shop/tools", "/shop/emails", "/shop/targets", "/shop/team", "/shop/settings"];
+  const pages = [
+    "/shop",
+    `/shop/requests/${request}`,
+    "/shop/catalog",
+    "/shop/catalog/new",
+    `/shop/catalog/${bike}`,
+    "/shop/stock",
+    "/shop/tools",
+    "/shop/emails",
+    "/shop/targets",
+    "/shop/team",
+    "/shop/settings",
+  ];
   for (const path of pages) await openAndCheck(page, path, problems);
 });
 

@@ -26,7 +26,9 @@ function poppler(tool: "pdftotext" | "pdffonts", pdf: Uint8Array): string {
 
 test.describe("setup sheet download", () => {
   test("opens for the rider's private link, with the shop's fonts embedded", async ({ request }) => {
-    const response = await request.get(`/api/requests/${r10}/sheet?version=1&token=${demoStatusToken(E2E_AUTH_SECRET, r10)}`);
+    const response = await request.get(
+      `/api/requests/${r10}/sheet?version=1&token=${demoStatusToken(E2E_AUTH_SECRET, r10)}`,
+    );
     expect(response.status()).toBe(200);
     expect(response.headers()["content-type"]).toBe("application/pdf");
     expect(response.headers()["content-disposition"]).toMatch(/^inline; filename="setup-sheet-\d+-v1\.pdf"$/);
@@ -62,10 +64,14 @@ test.describe("e-mail previews", () => {
     await expect(page.getByRole("heading", { level: 1 })).toHaveText("E-mails");
     await expect(page.getByRole("heading", { level: 2 })).toHaveCount(6);
 
-    const frame = page.frameLocator('iframe[title="Approved (or revised) setup sheet with its download link: html preview"]');
+    const frame = page.frameLocator(
+      'iframe[title="Approved (or revised) setup sheet with its download link: html preview"]',
+    );
     await expect(frame.getByRole("link", { name: /Download the setup sheet/ })).toHaveCount(1);
 
-    const sheet = page.getByRole("listitem").filter({ has: page.getByRole("heading", { name: /setup sheet with its download link/ }) });
+    const sheet = page
+      .getByRole("listitem")
+      .filter({ has: page.getByRole("heading", { name: /setup sheet with its download link/ }) });
     await sheet.getByText("Plain-text part").click();
     await expect(sheet.locator("pre")).toContainText("Download the setup sheet (version 1)");
 

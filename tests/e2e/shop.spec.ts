@@ -7,8 +7,11 @@ import { answersLike } from "./support/requests";
 
 const sagNumbers = (text: string | null) => (text?.match(/\d+\.\d/g) ?? []).map(Number);
 
-
-test("search → adjust with live recompute → approve → rider e-mailed the sheet link", async ({ page, mailbox, submitRequest }) => {
+test("search → adjust with live recompute → approve → rider e-mailed the sheet link", async ({
+  page,
+  mailbox,
+  submitRequest,
+}) => {
   // A surname no seeded or earlier rider has, so the search finds this one request.
   const name = `Quillane${uniqueLetters()}`;
   const rider = { name: `Priya ${name}`, email: `${name.toLowerCase()}@example.test` };
@@ -31,7 +34,9 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
 
   // Shock: the stiffest spring on the shelf instead of the engine's pick.
   const stock = page.getByLabel("Shock spring rate from stock");
-  const options = await stock.locator("option").evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
+  const options = await stock
+    .locator("option")
+    .evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value).filter(Boolean));
   await stock.selectOption(options.at(-1)!);
   await expect
     .poll(async () => Number(await page.getByLabel("Shock spring rate", { exact: true }).inputValue()))
@@ -63,9 +68,15 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
 
   let sheetMail: { subject: string; text?: string; html?: string } | undefined;
   await expect
-    .poll(async () => (sheetMail = (await mailbox.for(rider.email)).find((m) => /Your setup sheet for request \d+ is ready/.test(m.subject))), {
-      timeout: 20_000,
-    })
+    .poll(
+      async () =>
+        (sheetMail = (await mailbox.for(rider.email)).find((m) =>
+          /Your setup sheet for request \d+ is ready/.test(m.subject),
+        )),
+      {
+        timeout: 20_000,
+      },
+    )
     .toBeTruthy();
   expect(`${sheetMail!.text}${sheetMail!.html}`).toMatch(
     new RegExp(`/api/requests/${requestId}/sheet\\?version=1&(amp;)?token=[A-Za-z0-9_-]{20,}`),

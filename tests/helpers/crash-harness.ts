@@ -18,7 +18,10 @@ async function main() {
     for await (const chunk of req) chunks.push(chunk as Buffer);
     const headers = new Headers();
     for (const [name, value] of Object.entries(req.headers)) if (typeof value === "string") headers.set(name, value);
-    headers.set(PEER_HEADER, req.socket.remoteAddress === "127.0.0.1" ? (req.headers["x-test-client"] as string) : "0.0.0.0");
+    headers.set(
+      PEER_HEADER,
+      req.socket.remoteAddress === "127.0.0.1" ? (req.headers["x-test-client"] as string) : "0.0.0.0",
+    );
     const response = await POST(
       new Request(`http://127.0.0.1${req.url}`, { method: req.method, headers, body: Buffer.concat(chunks) }),
       undefined as never,

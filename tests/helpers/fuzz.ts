@@ -18,7 +18,23 @@ export const nextClient = () => ({ [PEER_HEADER]: `198.18.${(++clients >> 8) & 2
 export const hostileString = fc.oneof(
   fc.string({ unit: "binary", maxLength: 40 }),
   fc.string({ unit: "grapheme", maxLength: 40 }),
-  fc.constantFrom("\u0000", "a\u0000b", "Name\u0000", "\ud800", "\udfff x", "../../etc/passwd", "%00", "' or 1=1 --", "<script>alert(1)</script>", "x".repeat(5000), "", " ", "NaN", "1e309", "-0"),
+  fc.constantFrom(
+    "\u0000",
+    "a\u0000b",
+    "Name\u0000",
+    "\ud800",
+    "\udfff x",
+    "../../etc/passwd",
+    "%00",
+    "' or 1=1 --",
+    "<script>alert(1)</script>",
+    "x".repeat(5000),
+    "",
+    " ",
+    "NaN",
+    "1e309",
+    "-0",
+  ),
 );
 const hostileValue: fc.Arbitrary<unknown> = fc.oneof(
   { weight: 4, arbitrary: hostileString },
@@ -49,7 +65,8 @@ function mutate(base: unknown, path: Path, mode: "replace" | "nul" | "delete", v
   }
   const last = path.at(-1)!;
   if (mode === "delete") delete parent[last];
-  else if (mode === "nul") parent[last] = typeof parent[last] === "string" ? `${parent[last] as string}\u0000` : "\u0000";
+  else if (mode === "nul")
+    parent[last] = typeof parent[last] === "string" ? `${parent[last] as string}\u0000` : "\u0000";
   else parent[last] = value;
   return copy;
 }
@@ -58,8 +75,21 @@ function mutate(base: unknown, path: Path, mode: "replace" | "nul" | "delete", v
 export function bodiesAround(valid: unknown): fc.Arbitrary<string> {
   const paths = leafPaths(valid);
   const mutated = fc
-    .tuple(fc.array(fc.record({ at: fc.nat({ max: paths.length - 1 }), mode: fc.constantFrom("replace", "nul", "nul", "delete"), value: hostileValue }), { minLength: 1, maxLength: 3 }))
-    .map(([changes]) => JSON.stringify(changes.reduce((body, c) => mutate(body, paths[c.at]!, c.mode as "replace" | "nul" | "delete", c.value), valid)));
+    .tuple(
+      fc.array(
+        fc.record({
+          at: fc.nat({ max: paths.length - 1 }),
+          mode: fc.constantFrom("replace", "nul", "nul", "delete"),
+          value: hostileValue,
+        }),
+        { minLength: 1, maxLength: 3 },
+      ),
+    )
+    .map(([changes]) =>
+      JSON.stringify(
+        changes.reduce((body, c) => mutate(body, paths[c.at]!, c.mode as "replace" | "nul" | "delete", c.value), valid),
+      ),
+    );
   return fc.oneof(
     { weight: 6, arbitrary: mutated },
     { weight: 2, arbitrary: fc.jsonValue().map((v) => JSON.stringify(v)) },
@@ -94,4 +124,8 @@ export async function expectNo5xx(
 }
 
 export const json = (url: string, body: string, method = "POST") =>
-  new Request(`${ORIGIN()}${url}`, { method, headers: { "content-type": "application/json", origin: ORIGIN(), ...nextClient() }, body });
+  new Request(`${ORIGIN()}${url}`, {
+    method,
+    headers: { "content-type": "application/json", origin: ORIGIN(), ...nextClient() },
+    body,
+  });

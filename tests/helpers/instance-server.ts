@@ -29,10 +29,13 @@ const server = createServer(async (req, res) => {
     const path = new URL(url).pathname;
     const uploadId = /^\/api\/uploads\/([^/]+)$/.exec(path)?.[1];
     const response =
-      req.method === "POST" && path === "/api/requests" ? await submit(request, undefined as never)
-      : req.method === "GET" && uploadId ? await photo(request, { params: Promise.resolve({ id: uploadId }) })
-      : req.method === "POST" && path === "/__drain" ? Response.json(await drainOutbox())
-      : new Response("not served here", { status: 404 });
+      req.method === "POST" && path === "/api/requests"
+        ? await submit(request, undefined as never)
+        : req.method === "GET" && uploadId
+          ? await photo(request, { params: Promise.resolve({ id: uploadId }) })
+          : req.method === "POST" && path === "/__drain"
+            ? Response.json(await drainOutbox())
+            : new Response("not served here", { status: 404 });
     res.writeHead(response.status, Object.fromEntries(response.headers));
     res.end(Buffer.from(await response.arrayBuffer()));
   } catch (error) {

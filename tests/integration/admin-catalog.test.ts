@@ -14,7 +14,16 @@ import { recommend } from "@/lib/sizing";
 import { referenceAnswers } from "@/lib/shop/target-preview";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 import { ORIGIN } from "../helpers/auth";
-import { idContext, jsonRequest, LR, newModel, PROGRESSIVE_STROKE_MM, shockTravelExact, staffCookie, noCtx } from "./admin-helpers";
+import {
+  idContext,
+  jsonRequest,
+  LR,
+  newModel,
+  PROGRESSIVE_STROKE_MM,
+  shockTravelExact,
+  staffCookie,
+  noCtx,
+} from "./admin-helpers";
 
 let tuner: string;
 let created: { id: string; slug: string; spec: { rear: { shockStrokeMm: number } } };
@@ -27,7 +36,8 @@ beforeAll(async () => {
 afterAll(closeTestDatabase);
 
 const snapshot = async () => JSON.stringify(await listAllBikeModels());
-const body = async (r: Response) => (await r.json()) as { error: string; fields: Record<string, string> } & Record<string, unknown>;
+const body = async (r: Response) =>
+  (await r.json()) as { error: string; fields: Record<string, string> } & Record<string, unknown>;
 
 describe("create and edit", () => {
   it("a tuner saves a model; the listed columns follow the spec", async () => {
@@ -63,7 +73,10 @@ describe("create and edit", () => {
     ["a year range backwards", { yearFrom: 2025, yearTo: 2020 }, "yearTo"],
   ])("refuses %s, naming the field, and changes nothing", async (_what, over, field) => {
     const before = await snapshot();
-    const response = await putModel(jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, newModel(over)), idContext(created.id));
+    const response = await putModel(
+      jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, newModel(over)),
+      idContext(created.id),
+    );
     expect(response.status).toBe(400);
     expect(Object.keys((await body(response)).fields)).toContain(field);
     expect(await snapshot()).toBe(before);
@@ -91,19 +104,27 @@ describe("create and edit", () => {
     const model = newModel({ name: "Test 350 enduro 2025" });
     model.spec.fork = { ...model.spec.fork, travelMm: 300 };
     model.spec.rear.wheelTravelMm = 300;
-    const response = await putModel(jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, model), idContext(created.id));
+    const response = await putModel(
+      jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, model),
+      idContext(created.id),
+    );
     expect(response.status).toBe(200);
     expect(await response.json()).toMatchObject({ name: "Test 350 enduro 2025", slug: "test-350-enduro-2025" });
   });
 
   it("anonymous callers get 401", async () => {
-    expect((await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", undefined, newModel()))).status).toBe(401);
+    expect((await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", undefined, newModel()))).status).toBe(
+      401,
+    );
   });
 });
 
 describe("duplicate and retire", () => {
   it("duplicates under a new slug and name", async () => {
-    const response = await duplicate(jsonRequest(`/api/shop/catalog/${created.id}/duplicate`, "POST", tuner), idContext(created.id));
+    const response = await duplicate(
+      jsonRequest(`/api/shop/catalog/${created.id}/duplicate`, "POST", tuner),
+      idContext(created.id),
+    );
     expect(response.status).toBe(201);
     const copy = (await response.json()) as { id: string; slug: string; name: string; spec: unknown };
     expect(copy.id).not.toBe(created.id);
@@ -112,20 +133,34 @@ describe("duplicate and retire", () => {
   });
 
   it("a retired model leaves the list but stays readable by id", async () => {
-    const response = await retire(jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: true }), idContext(created.id));
+    const response = await retire(
+      jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: true }),
+      idContext(created.id),
+    );
     expect(response.status).toBe(200);
-    const listed = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog", "GET", tuner))).json()) as { items: { id: string }[] };
+    const listed = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog", "GET", tuner))).json()) as {
+      items: { id: string }[];
+    };
     expect(listed.items.map((i) => i.id)).not.toContain(created.id);
-    const onlyRetired = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?retired=only", "GET", tuner))).json()) as { items: { id: string }[] };
+    const onlyRetired = (await (
+      await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?retired=only", "GET", tuner))
+    ).json()) as { items: { id: string }[] };
     expect(onlyRetired.items.map((i) => i.id)).toEqual([created.id]);
     expect((await loadBikeSpec(created.id))?.spec.rear.wheelTravelMm).toBe(300);
-    await retire(jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: false }), idContext(created.id));
+    await retire(
+      jsonRequest(`/api/shop/catalog/${created.id}/retire`, "POST", tuner, { retired: false }),
+      idContext(created.id),
+    );
   });
 
   it("search finds a model by class, case-insensitive", async () => {
-    const found = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=ENDURO-350", "GET", tuner))).json()) as { items: { id: string }[] };
+    const found = (await (
+      await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=ENDURO-350", "GET", tuner))
+    ).json()) as { items: { id: string }[] };
     expect(found.items.map((i) => i.id)).toContain(created.id);
-    const none = (await (await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=no-such-bike", "GET", tuner))).json()) as { items: unknown[] };
+    const none = (await (
+      await noCtx(listCatalog)(jsonRequest("/api/shop/catalog?q=no-such-bike", "GET", tuner))
+    ).json()) as { items: unknown[] };
     expect(none.items).toEqual([]);
   });
 
@@ -137,7 +172,13 @@ describe("duplicate and retire", () => {
 
 describe("CSV", () => {
   const csvImport = (text: string) =>
-    noCtx(importCsv)(new Request(`${ORIGIN()}/api/shop/catalog/csv`, { method: "POST", headers: { cookie: tuner, "content-type": "text/csv" }, body: text }));
+    noCtx(importCsv)(
+      new Request(`${ORIGIN()}/api/shop/catalog/csv`, {
+        method: "POST",
+        headers: { cookie: tuner, "content-type": "text/csv" },
+        body: text,
+      }),
+    );
 
   it("import of the export changes nothing, and a second export is identical", async () => {
     const first = await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text();
@@ -154,7 +195,9 @@ describe("CSV", () => {
   });
 
   it("a bad row is reported with its field and reason; the good rows are saved", async () => {
-    const lines = (await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text()).split("\n");
+    const lines = (await (await noCtx(exportCsv)(jsonRequest("/api/shop/catalog/csv", "GET", tuner))).text()).split(
+      "\n",
+    );
     const header = lines[0]!.split(",");
     const slugCol = header.indexOf("slug");
     const strokeCol = header.indexOf("spec.rear.shockStrokeMm");
@@ -175,8 +218,14 @@ describe("CSV", () => {
     ].join("\n");
     const response = await csvImport(text);
     expect(response.status).toBe(200);
-    const result = (await response.json()) as { saved: { row: number; slug: string }[]; refused: { row: number; slug: string; fields: Record<string, string> }[] };
-    expect(result.saved.map((s) => [s.row, s.slug])).toEqual([[2, "import-good-1"], [5, "import-good-2"]]);
+    const result = (await response.json()) as {
+      saved: { row: number; slug: string }[];
+      refused: { row: number; slug: string; fields: Record<string, string> }[];
+    };
+    expect(result.saved.map((s) => [s.row, s.slug])).toEqual([
+      [2, "import-good-1"],
+      [5, "import-good-2"],
+    ]);
     expect(result.refused.map((r) => [r.row, r.slug, Object.keys(r.fields)])).toEqual([
       [3, "import-bad-stroke", ["spec.rear.shockStrokeMm"]],
       [4, "import-bad-mass", ["spec.massKg"]],
@@ -199,7 +248,12 @@ describe("the engine uses a saved model", () => {
     const loaded = await loadBikeSpec(created.id);
     expect(loaded).not.toBeNull();
     const context = await loadShopSizingContext(loaded!.spec, "enduro", "intermediate");
-    const answers = referenceAnswers({ riderMassKg: 80, discipline: "enduro", skill: "intermediate", bikeModelId: created.id });
+    const answers = referenceAnswers({
+      riderMassKg: 80,
+      discipline: "enduro",
+      skill: "intermediate",
+      bikeModelId: created.id,
+    });
     const rec = recommend(buildSizingInput(answers, context));
     const k = rec.rear.chosenRate.nMm;
     const p = rec.rear.preloadMm;

@@ -15,7 +15,11 @@ export async function staffCookie(email: string, password = DEMO_PASSWORD): Prom
 export function jsonRequest(path: string, method: string, cookie: string | undefined, body?: unknown): Request {
   return new Request(`${ORIGIN()}${path}`, {
     method,
-    headers: { ...(cookie ? { cookie } : {}), ...(body !== undefined ? { "content-type": "application/json" } : {}), origin: ORIGIN() },
+    headers: {
+      ...(cookie ? { cookie } : {}),
+      ...(body !== undefined ? { "content-type": "application/json" } : {}),
+      origin: ORIGIN(),
+    },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
 }
@@ -51,7 +55,5 @@ export const newModel = (over: Record<string, unknown> = {}) => ({
 });
 
 /** Route handlers without route params take an unused second argument. */
-export const noCtx =
-  (handler: (request: Request, context: never) => Promise<Response>) =>
-  (request: Request) =>
-    handler(request, undefined as never);
+export const noCtx = (handler: (request: Request, context: never) => Promise<Response>) => (request: Request) =>
+  handler(request, undefined as never);

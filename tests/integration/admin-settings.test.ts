@@ -33,7 +33,14 @@ const fields = async (r: Response) => Object.keys(((await r.json()) as { fields:
 describe("spring stock", () => {
   it("stores a rate entered in lbf/in in N/mm", async () => {
     const response = await noCtx(addSpring)(
-      jsonRequest("/api/shop/stock", "POST", tuner, { end: "shock", rate: 300, rateUnit: "lbf/in", quantity: 2, freeLengthMm: 260, innerDiameterMm: 61 }),
+      jsonRequest("/api/shop/stock", "POST", tuner, {
+        end: "shock",
+        rate: 300,
+        rateUnit: "lbf/in",
+        quantity: 2,
+        freeLengthMm: 260,
+        innerDiameterMm: 61,
+      }),
     );
     expect(response.status).toBe(201);
     const row = (await response.json()) as { id: string; rateNmm: number };
@@ -43,7 +50,10 @@ describe("spring stock", () => {
 
   it("stores a rate entered in kgf/mm in N/mm and edits it", async () => {
     const id = stableUuid("fork-spring:0");
-    const response = await putSpring(jsonRequest(`/api/shop/stock/${id}`, "PUT", tuner, { end: "fork", rate: 0.46, rateUnit: "kgf/mm", quantity: 4 }), idContext(id));
+    const response = await putSpring(
+      jsonRequest(`/api/shop/stock/${id}`, "PUT", tuner, { end: "fork", rate: 0.46, rateUnit: "kgf/mm", quantity: 4 }),
+      idContext(id),
+    );
     expect(response.status).toBe(200);
     // 1 kgf = 9.80665 N exactly (CGPM 1901; NIST SP 811 B.8): 0.46 kgf/mm = 4.511059 N/mm.
     expect(((await response.json()) as { rateNmm: number }).rateNmm).toBeCloseTo(4.511059, 6);
@@ -53,7 +63,11 @@ describe("spring stock", () => {
     ["a negative quantity", { end: "fork", rate: 0.5, rateUnit: "kgf/mm", quantity: -1 }, ["quantity"]],
     ["an unknown unit and end", { end: "hub", rate: 5, rateUnit: "lb", quantity: 1 }, ["end", "rateUnit"]],
     ["a fork spring of 60 N/mm", { end: "fork", rate: 60, rateUnit: "N/mm", quantity: 1 }, ["rate"]],
-    ["a zero inner diameter", { end: "shock", rate: 50, rateUnit: "N/mm", quantity: 1, innerDiameterMm: 0 }, ["innerDiameterMm"]],
+    [
+      "a zero inner diameter",
+      { end: "shock", rate: 50, rateUnit: "N/mm", quantity: 1, innerDiameterMm: 0 },
+      ["innerDiameterMm"],
+    ],
   ])("refuses %s, naming the field, nothing changed", async (_w, payload, names) => {
     const before = JSON.stringify(await listSpringStock());
     const response = await noCtx(addSpring)(jsonRequest("/api/shop/stock", "POST", tuner, payload));
@@ -77,29 +91,55 @@ describe("setup targets", () => {
 
   it("a tuner is refused (403) and the row is unchanged", async () => {
     const before = await getSetupTarget("motocross", "intermediate");
-    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", tuner, { discipline: "motocross", skill: "intermediate", values: edited() }));
+    const response = await noCtx(putTarget)(
+      jsonRequest("/api/shop/targets", "PUT", tuner, {
+        discipline: "motocross",
+        skill: "intermediate",
+        values: edited(),
+      }),
+    );
     expect(response.status).toBe(403);
     expect(await getSetupTarget("motocross", "intermediate")).toEqual(before);
-    expect((await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", tuner, { rules: [] }))).status).toBe(403);
+    expect((await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", tuner, { rules: [] }))).status).toBe(
+      403,
+    );
   });
 
   it("an admin saves a row, and reset puts back the engine's defaults", async () => {
-    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "motocross", skill: "intermediate", values: edited() }));
+    const response = await noCtx(putTarget)(
+      jsonRequest("/api/shop/targets", "PUT", owner, {
+        discipline: "motocross",
+        skill: "intermediate",
+        values: edited(),
+      }),
+    );
     expect(response.status).toBe(200);
     expect(await getSetupTarget("motocross", "intermediate")).toEqual(edited());
-    const reset = await noCtx(resetTarget)(jsonRequest("/api/shop/targets/reset", "POST", owner, { discipline: "motocross", skill: "intermediate" }));
+    const reset = await noCtx(resetTarget)(
+      jsonRequest("/api/shop/targets/reset", "POST", owner, { discipline: "motocross", skill: "intermediate" }),
+    );
     expect(reset.status).toBe(200);
     // Engine defaults (lib/sizing/defaults.ts): motocross rear race sag 0.335, intermediate offset 0.
     expect((await getSetupTarget("motocross", "intermediate"))?.sag.rearRace).toBe(0.335);
   });
 
   it.each([
-    ["race sag inside the static window", (v: ReturnType<typeof edited>) => ({ ...v, sag: { ...v.sag, rearRace: 0.12 } }), ["values.sag.rearRace"]],
+    [
+      "race sag inside the static window",
+      (v: ReturnType<typeof edited>) => ({ ...v, sag: { ...v.sag, rearRace: 0.12 } }),
+      ["values.sag.rearRace"],
+    ],
     ["a rate factor of 2", (v: ReturnType<typeof edited>) => ({ ...v, rateFactor: 2 }), ["values.rateFactor"]],
-    ["a rear share of 1.2", (v: ReturnType<typeof edited>) => ({ ...v, riderRearShare: 1.2 }), ["values.riderRearShare"]],
+    [
+      "a rear share of 1.2",
+      (v: ReturnType<typeof edited>) => ({ ...v, riderRearShare: 1.2 }),
+      ["values.riderRearShare"],
+    ],
   ])("refuses %s, naming the field, nothing changed", async (_w, change, names) => {
     const before = await getSetupTarget("enduro", "pro");
-    const response = await noCtx(putTarget)(jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "enduro", skill: "pro", values: change(edited()) }));
+    const response = await noCtx(putTarget)(
+      jsonRequest("/api/shop/targets", "PUT", owner, { discipline: "enduro", skill: "pro", values: change(edited()) }),
+    );
     expect(response.status).toBe(400);
     expect(await fields(response)).toEqual(names);
     expect(await getSetupTarget("enduro", "pro")).toEqual(before);
@@ -130,10 +170,21 @@ describe("setup targets", () => {
 
 describe("clicker rules", () => {
   it("replaces the table, refuses a bad rule naming it, and resets to the engine's defaults", async () => {
-    const rule = { trigger: { kind: "terrain", terrain: "mud" }, clicker: "forkRebound", change: 1, reason: "Mud: quicken fork rebound 1 click" };
-    expect((await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule] }))).status).toBe(200);
+    const rule = {
+      trigger: { kind: "terrain", terrain: "mud" },
+      clicker: "forkRebound",
+      change: 1,
+      reason: "Mud: quicken fork rebound 1 click",
+    };
+    expect(
+      (await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule] }))).status,
+    ).toBe(200);
     expect(await listClickerRules()).toEqual([rule]);
-    const bad = await noCtx(putRules)(jsonRequest("/api/shop/targets/rules", "PUT", owner, { rules: [rule, { ...rule, clicker: "rearHub", change: 40 }] }));
+    const bad = await noCtx(putRules)(
+      jsonRequest("/api/shop/targets/rules", "PUT", owner, {
+        rules: [rule, { ...rule, clicker: "rearHub", change: 40 }],
+      }),
+    );
     expect(bad.status).toBe(400);
     expect(await fields(bad)).toEqual(["rules.1.change", "rules.1.clicker"]);
     expect(await listClickerRules()).toEqual([rule]);
@@ -164,7 +215,14 @@ describe("shop settings", () => {
   it("an admin saves; e-mail is stored lower-case and an empty website as none", async () => {
     const response = await noCtx(putSettings)(jsonRequest("/api/shop/settings", "PUT", owner, valid));
     expect(response.status).toBe(200);
-    expect(await getShopSettings()).toMatchObject({ name: "Ridge Line Suspension", email: "desk@ridgeline.test", website: null, paperSize: "LETTER", units: "imperial", gearMassKg: 9 });
+    expect(await getShopSettings()).toMatchObject({
+      name: "Ridge Line Suspension",
+      email: "desk@ridgeline.test",
+      website: null,
+      paperSize: "LETTER",
+      units: "imperial",
+      gearMassKg: 9,
+    });
   });
 
   it("refuses a bad paper size, e-mail and frequency window, naming each, nothing changed", async () => {
@@ -174,7 +232,9 @@ describe("shop settings", () => {
     );
     expect(response.status).toBe(400);
     expect(await fields(response)).toEqual(["email", "gearMassKg", "paperSize"]);
-    const window = await noCtx(putSettings)(jsonRequest("/api/shop/settings", "PUT", owner, { ...valid, frequencyRatioMax: 0.5 }));
+    const window = await noCtx(putSettings)(
+      jsonRequest("/api/shop/settings", "PUT", owner, { ...valid, frequencyRatioMax: 0.5 }),
+    );
     expect(await fields(window)).toEqual(["frequencyRatioMax"]);
     expect(await getShopSettings()).toEqual(before);
   });

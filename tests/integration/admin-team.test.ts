@@ -46,22 +46,31 @@ describe("admin-only actions", () => {
   it("a tuner gets 403 on team, and nothing is sent", async () => {
     const before = sent.length;
     expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", tuner))).status).toBe(403);
-    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", tuner, { email: "x@example.test", role: "tuner" }))).status).toBe(403);
+    expect(
+      (await noCtx(invite)(jsonRequest("/api/shop/team", "POST", tuner, { email: "x@example.test", role: "tuner" })))
+        .status,
+    ).toBe(403);
     const id = await memberId("tuner2@sagwise.test");
-    expect((await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", tuner, { active: false }), idContext(id))).status).toBe(403);
+    expect(
+      (await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", tuner, { active: false }), idContext(id))).status,
+    ).toBe(403);
     expect(sent.length).toBe(before);
   });
 });
 
 describe("invitations", () => {
   it("refuses a bad e-mail and a bad role, naming the fields", async () => {
-    const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email: "not-mail", role: "owner" }));
+    const response = await noCtx(invite)(
+      jsonRequest("/api/shop/team", "POST", owner, { email: "not-mail", role: "owner" }),
+    );
     expect(response.status).toBe(400);
     expect(Object.keys(((await response.json()) as { fields: object }).fields).sort()).toEqual(["email", "role"]);
   });
 
   it("refuses to invite someone already on the team (409)", async () => {
-    const response = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email: "tuner2@sagwise.test", role: "tuner" }));
+    const response = await noCtx(invite)(
+      jsonRequest("/api/shop/team", "POST", owner, { email: "tuner2@sagwise.test", role: "tuner" }),
+    );
     expect(response.status).toBe(409);
   });
 
@@ -80,12 +89,16 @@ describe("invitations", () => {
     expect(row.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(JSON.stringify(rows)).not.toContain(token);
 
-    const short = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "N", password: "short" }));
+    const short = await noCtx(accept)(
+      jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "N", password: "short" }),
+    );
     expect(short.status).toBe(400);
     expect(Object.keys(((await short.json()) as { fields: object }).fields).sort()).toEqual(["name", "password"]);
     expect(await findUserByEmail(email)).toBeNull();
 
-    const accepted = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
+    const accepted = await noCtx(accept)(
+      jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }),
+    );
     expect(accepted.status).toBe(201);
     const cookie = cookieFrom(accepted);
     expect(cookie).toMatch(/session_token=/);
@@ -93,15 +106,24 @@ describe("invitations", () => {
     expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(403);
 
     const actions = (await db.select().from(auditEvents)).map((e) => [e.action, e.actorLabel]);
-    expect(actions).toEqual(expect.arrayContaining([["staff.invited", "Mara Quillfeather"], ["staff.joined", "New Tuner"]]));
+    expect(actions).toEqual(
+      expect.arrayContaining([
+        ["staff.invited", "Mara Quillfeather"],
+        ["staff.joined", "New Tuner"],
+      ]),
+    );
 
-    const again = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }));
+    const again = await noCtx(accept)(
+      jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "New Tuner", password: "a-long-password-1" }),
+    );
     expect(again.status).toBe(409);
   });
 
   it("two people racing on one invitation link: one account, one 201, the other 409", async () => {
     const email = "racing.tuner@example.test";
-    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(201);
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(
+      201,
+    );
     const token = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
     const body = (name: string) => ({ token, name, password: "a-long-password-1" });
     const answers = await Promise.all([
@@ -118,12 +140,20 @@ describe("invitations", () => {
 
   it("an invitation that cannot be accepted stays open: nothing is marked used without an account", async () => {
     const email = "taken.meanwhile@example.test";
-    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(201);
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(
+      201,
+    );
     const token = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
     // Someone made a staff account with this address after the invitation went out.
     const { ensureStaffUser } = await import("@/lib/auth/staff");
     await ensureStaffUser({ email, name: "Made Elsewhere", role: "tuner", password: "another-long-password" });
-    const refused = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token, name: "Late Joiner", password: "a-long-password-1" }));
+    const refused = await noCtx(accept)(
+      jsonRequest("/api/invite/accept", "POST", undefined, {
+        token,
+        name: "Late Joiner",
+        password: "a-long-password-1",
+      }),
+    );
     expect(refused.status).toBe(409);
     const db = await getDb();
     const row = (await db.select().from(staffInvites)).find((r) => r.email === email)!;
@@ -131,7 +161,13 @@ describe("invitations", () => {
   });
 
   it("an unknown token is a 404", async () => {
-    const response = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, { token: "x".repeat(43), name: "Someone", password: "a-long-password-1" }));
+    const response = await noCtx(accept)(
+      jsonRequest("/api/invite/accept", "POST", undefined, {
+        token: "x".repeat(43),
+        name: "Someone",
+        password: "a-long-password-1",
+      }),
+    );
     expect(response.status).toBe(404);
   });
 });
@@ -141,7 +177,10 @@ describe("roles and deactivation", () => {
     const cookie = await staffCookie("tuner2@sagwise.test");
     expect((await catalogAs(cookie)).status).toBe(200);
     const id = await memberId("tuner2@sagwise.test");
-    const response = await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { active: false }), idContext(id));
+    const response = await patchMember(
+      jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { active: false }),
+      idContext(id),
+    );
     expect(response.status).toBe(200);
     expect(await response.json()).toMatchObject({ banned: true });
     expect((await catalogAs(cookie)).status).toBe(401);
@@ -153,7 +192,10 @@ describe("roles and deactivation", () => {
 
   it("changes a role, and the new role applies", async () => {
     const id = await memberId("tuner2@sagwise.test");
-    const response = await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { role: "admin" }), idContext(id));
+    const response = await patchMember(
+      jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { role: "admin" }),
+      idContext(id),
+    );
     expect(response.status).toBe(200);
     const cookie = await staffCookie("tuner2@sagwise.test");
     expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", cookie))).status).toBe(200);
@@ -163,9 +205,15 @@ describe("roles and deactivation", () => {
 
   it("the last active admin can be neither demoted nor deactivated (409), and stays admin", async () => {
     const ownerId = await memberId("owner@sagwise.test");
-    const demote = await patchMember(jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", owner, { role: "tuner" }), idContext(ownerId));
+    const demote = await patchMember(
+      jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", owner, { role: "tuner" }),
+      idContext(ownerId),
+    );
     expect(demote.status).toBe(409);
-    const self = await patchMember(jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", owner, { active: false }), idContext(ownerId));
+    const self = await patchMember(
+      jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", owner, { active: false }),
+      idContext(ownerId),
+    );
     expect(self.status).toBe(409);
     expect((await listStaff()).find((m) => m.id === ownerId)).toMatchObject({ role: "admin", banned: false });
     expect((await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", owner))).status).toBe(200);
@@ -176,10 +224,16 @@ describe("roles and deactivation", () => {
     await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", owner, { role: "admin" }), idContext(id));
     const second = await staffCookie("tuner2@sagwise.test");
     const ownerId = await memberId("owner@sagwise.test");
-    const response = await patchMember(jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", second, { role: "tuner" }), idContext(ownerId));
+    const response = await patchMember(
+      jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", second, { role: "tuner" }),
+      idContext(ownerId),
+    );
     expect(response.status).toBe(200);
     // Now tuner2 is the last admin: demoting them is refused.
-    const back = await patchMember(jsonRequest(`/api/shop/team/${id}`, "PATCH", second, { role: "tuner" }), idContext(id));
+    const back = await patchMember(
+      jsonRequest(`/api/shop/team/${id}`, "PATCH", second, { role: "tuner" }),
+      idContext(id),
+    );
     expect(back.status).toBe(409);
     await patchMember(jsonRequest(`/api/shop/team/${ownerId}`, "PATCH", second, { role: "admin" }), idContext(ownerId));
   });

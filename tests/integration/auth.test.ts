@@ -16,7 +16,12 @@ beforeAll(async () => {
   kind = (await createTestDatabase()).kind;
   server.listen({ onUnhandledRequest: "error" });
   sent = captureMail(server);
-  await ensureStaffUser({ email: "tuner@sagwise.test", name: "Test Tuner", role: "tuner", password: "correct-horse-1" });
+  await ensureStaffUser({
+    email: "tuner@sagwise.test",
+    name: "Test Tuner",
+    role: "tuner",
+    password: "correct-horse-1",
+  });
 });
 afterAll(async () => {
   server.close();

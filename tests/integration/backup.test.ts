@@ -61,12 +61,23 @@ function envFor(dataDir: string, url: string | undefined): NodeJS.ProcessEnv {
 }
 
 function run(script: "backup" | "restore", dataDir: string, url: string | undefined, ...args: string[]) {
-  return spawnSync("npx", ["tsx", `scripts/${script}.ts`, ...args], { encoding: "utf8", env: envFor(dataDir, url), timeout: 120_000 });
+  return spawnSync("npx", ["tsx", `scripts/${script}.ts`, ...args], {
+    encoding: "utf8",
+    env: envFor(dataDir, url),
+    timeout: 120_000,
+  });
 }
 
 /** The same without blocking this process (which must keep refreshing a lock it holds meanwhile). */
-function runAsync(script: "backup" | "restore", dataDir: string, ...args: string[]): Promise<{ status: number | null; stderr: string }> {
-  const child = spawn("npx", ["tsx", `scripts/${script}.ts`, ...args], { env: envFor(dataDir, undefined), stdio: ["ignore", "ignore", "pipe"] });
+function runAsync(
+  script: "backup" | "restore",
+  dataDir: string,
+  ...args: string[]
+): Promise<{ status: number | null; stderr: string }> {
+  const child = spawn("npx", ["tsx", `scripts/${script}.ts`, ...args], {
+    env: envFor(dataDir, undefined),
+    stdio: ["ignore", "ignore", "pipe"],
+  });
   let stderr = "";
   child.stderr.on("data", (c: Buffer) => (stderr += c.toString()));
   const timer = setTimeout(() => child.kill("SIGKILL"), 120_000);

@@ -26,7 +26,12 @@ const spec125 = sizingDefaults.GENERIC_BIKE_CLASSES.find((c) => c.id === "mx-125
 
 interface Summary {
   reports: number;
-  fit: null | { parameters: { rearSprungKg: number; frontSprungKg: number; riderRearShare: number }; residualsMm: number[]; rmsBeforeMm: number; rmsAfterMm: number };
+  fit: null | {
+    parameters: { rearSprungKg: number; frontSprungKg: number; riderRearShare: number };
+    residualsMm: number[];
+    rmsBeforeMm: number;
+    rmsAfterMm: number;
+  };
   applied: boolean;
   reason?: string;
   catalog: { rearSprungKg: number; frontSprungKg: number; riderRearShare: number };
@@ -38,13 +43,23 @@ async function get(id: string, cookie?: string) {
 }
 async function post(id: string, cookie: string | undefined, body: unknown) {
   const response = await POST(jsonRequest(url(id), "POST", cookie, body), idContext(id));
-  return { status: response.status, body: (await response.json()) as Summary & { error?: string; fields?: Record<string, string> } };
+  return {
+    status: response.status,
+    body: (await response.json()) as Summary & { error?: string; fields?: Record<string, string> },
+  };
 }
 
 /** A new request on the 125 class from the same rider, as the public form would send it. */
 async function newRecommendation(email: string): Promise<Recommendation> {
   const answers = requestAnswersSchema.parse({
-    rider: { name: "Calibration Check", email, weight: { value: 72, unit: "kg" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+    rider: {
+      name: "Calibration Check",
+      email,
+      weight: { value: 72, unit: "kg" },
+      gearIncluded: false,
+      skill: "intermediate",
+      style: "moderate",
+    },
     riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 10 },
     bike: { modelId: model125, year: 2024 },
     feel: { complaints: [] },
@@ -96,7 +111,10 @@ describe("the demo model's sag reports", () => {
     expect(body.fit!.rmsAfterMm).toBeLessThan(body.fit!.rmsBeforeMm);
     expect(body.fit!.rmsAfterMm).toBeLessThan(1);
     // The catalog column is the model's weight split: sprung = m·(1−f) − unsprung (lib/sizing/README.md, loads).
-    expect(body.catalog.rearSprungKg).toBeCloseTo(spec125.massKg * (1 - spec125.frontFraction) - spec125.unsprungRearKg, 9);
+    expect(body.catalog.rearSprungKg).toBeCloseTo(
+      spec125.massKg * (1 - spec125.frontFraction) - spec125.unsprungRearKg,
+      9,
+    );
     // The seeded riders measured a bike heavier than the catalog says, at both ends.
     expect(body.fit!.parameters.rearSprungKg).toBeGreaterThan(body.catalog.rearSprungKg + 1);
     expect(body.fit!.parameters.frontSprungKg).toBeGreaterThan(body.catalog.frontSprungKg + 0.5);
@@ -113,7 +131,12 @@ describe("the demo model's sag reports", () => {
       new Request(`${ORIGIN()}/api/status/${r09}/sag`, {
         method: "POST",
         headers: { "content-type": "application/json" },
-        body: JSON.stringify({ token: demoStatusToken(resolveAuthSecret(), r09), unit: "mm", rear: { static: "34", race: "104" }, front: { static: "30", race: "75" } }),
+        body: JSON.stringify({
+          token: demoStatusToken(resolveAuthSecret(), r09),
+          unit: "mm",
+          rear: { static: "34", race: "104" },
+          front: { static: "30", race: "75" },
+        }),
       }),
       idContext(r09),
     );
@@ -175,7 +198,11 @@ describe("apply and undo", () => {
     const db = await getDb();
     const rows = await db.select().from(bikeCalibrations).where(eq(bikeCalibrations.bikeModelId, model125));
     expect(rows).toHaveLength(1);
-    expect(rows[0]).toMatchObject({ reports: 6, appliedByLabel: "Mara Quillfeather", undoneByLabel: "Mara Quillfeather" });
+    expect(rows[0]).toMatchObject({
+      reports: 6,
+      appliedByLabel: "Mara Quillfeather",
+      undoneByLabel: "Mara Quillfeather",
+    });
     expect(rows[0]!.undoneAt).toBeInstanceOf(Date);
     const kept = await db
       .select({ output: recommendationVersions.output, input: recommendationVersions.input })
@@ -183,6 +210,8 @@ describe("apply and undo", () => {
       .where(and(eq(recommendationVersions.version, 1)));
     const calibratedKept = kept.filter((v) => (v.output as Recommendation).resolved.calibration);
     expect(calibratedKept).toHaveLength(1);
-    expect((calibratedKept[0]!.input as { bike: { calibration?: unknown } }).bike.calibration).toMatchObject({ reports: 6 });
+    expect((calibratedKept[0]!.input as { bike: { calibration?: unknown } }).bike.calibration).toMatchObject({
+      reports: 6,
+    });
   });
 });

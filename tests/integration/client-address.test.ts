@@ -5,7 +5,14 @@
 import { describe, expect, it } from "vitest";
 import { POST as submit } from "@/app/api/requests/route";
 import { POST as authPost } from "@/app/api/auth/[...all]/route";
-import { CLIENT_HEADER, PEER_HEADER, clientAddress, normaliseAddress, trustPeerHeader, withClientHeader } from "@/lib/api/client-address";
+import {
+  CLIENT_HEADER,
+  PEER_HEADER,
+  clientAddress,
+  normaliseAddress,
+  trustPeerHeader,
+  withClientHeader,
+} from "@/lib/api/client-address";
 import { resetEnvForTests } from "@/lib/env";
 import { setupTestApp } from "../helpers/app";
 import { ORIGIN } from "../helpers/auth";
@@ -74,7 +81,11 @@ async function tenSubmits(client: string, forged: (i: number) => string | undefi
     const response = await submit(
       new Request(`${ORIGIN()}/api/requests`, {
         method: "POST",
-        headers: { "content-type": "application/json", ...fromClient(client), ...(xff ? { "x-forwarded-for": xff } : {}) },
+        headers: {
+          "content-type": "application/json",
+          ...fromClient(client),
+          ...(xff ? { "x-forwarded-for": xff } : {}),
+        },
         body: "{}",
       }),
       undefined as never,
@@ -112,7 +123,12 @@ describe("forged X-Forwarded-For does not buy more submits", () => {
       const response = await authPost(
         new Request(`${ORIGIN()}/api/auth/sign-in/email`, {
           method: "POST",
-          headers: { "content-type": "application/json", origin: ORIGIN(), ...fromClient("203.0.113.80"), "x-forwarded-for": `198.51.100.${i + 1}` },
+          headers: {
+            "content-type": "application/json",
+            origin: ORIGIN(),
+            ...fromClient("203.0.113.80"),
+            "x-forwarded-for": `198.51.100.${i + 1}`,
+          },
           body: JSON.stringify({ email: "nobody@example.test", password: "wrong-password-123" }),
         }),
       );

@@ -24,7 +24,10 @@ afterAll(() => {
 function startHarness(...args: string[]): Promise<{ child: ChildProcess; port: number }> {
   const env: NodeJS.ProcessEnv = { ...process.env, DATA_DIR: dataDir, NODE_ENV: "test" };
   delete env.DATABASE_URL;
-  const child = spawn(process.execPath, ["--import", "tsx", "tests/helpers/crash-harness.ts", ...args], { env, stdio: ["ignore", "pipe", "pipe"] });
+  const child = spawn(process.execPath, ["--import", "tsx", "tests/helpers/crash-harness.ts", ...args], {
+    env,
+    stdio: ["ignore", "pipe", "pipe"],
+  });
   children.push(child);
   let stderr = "";
   child.stderr!.on("data", (c: Buffer) => (stderr += c.toString()));
@@ -44,7 +47,14 @@ function startHarness(...args: string[]): Promise<{ child: ChildProcess; port: n
 // A valid request (the same shape as tests/integration/requests-intake.test.ts uses).
 const body = (n: number) =>
   JSON.stringify({
-    rider: { name: `Crash Rider ${n}`, email: `crash.${n}@example.test`, weight: { value: 80, unit: "kg" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+    rider: {
+      name: `Crash Rider ${n}`,
+      email: `crash.${n}@example.test`,
+      weight: { value: 80, unit: "kg" },
+      gearIncluded: false,
+      skill: "intermediate",
+      style: "moderate",
+    },
     riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 10 },
     bike: { modelId: stableUuid("bike:mx-450-4t"), year: 2023 },
     feel: { complaints: ["bottoming"], notes: "Bottoms on the big table." },
@@ -93,11 +103,20 @@ describe("SIGKILL during concurrent submits", () => {
 
     const handle = await openPglite(path.join(dataDir, "pglite"));
     try {
-      const rows = await handle.db.select({ id: setupRequests.id }).from(setupRequests).where(inArray(setupRequests.id, acknowledged));
+      const rows = await handle.db
+        .select({ id: setupRequests.id })
+        .from(setupRequests)
+        .where(inArray(setupRequests.id, acknowledged));
       expect(rows.map((r) => r.id).sort()).toEqual([...acknowledged].sort());
-      const versions = await handle.db.select({ id: recommendationVersions.requestId }).from(recommendationVersions).where(inArray(recommendationVersions.requestId, acknowledged));
+      const versions = await handle.db
+        .select({ id: recommendationVersions.requestId })
+        .from(recommendationVersions)
+        .where(inArray(recommendationVersions.requestId, acknowledged));
       expect(versions).toHaveLength(acknowledged.length);
-      const mails = await handle.db.select({ id: outboundEmails.requestId }).from(outboundEmails).where(eq(outboundEmails.template, "request-received"));
+      const mails = await handle.db
+        .select({ id: outboundEmails.requestId })
+        .from(outboundEmails)
+        .where(eq(outboundEmails.template, "request-received"));
       expect(mails.map((m) => m.id)).toEqual(expect.arrayContaining(acknowledged));
     } finally {
       await handle.close();

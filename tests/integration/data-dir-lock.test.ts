@@ -80,12 +80,18 @@ describe("data-folder lock", () => {
     const dataDir = path.join(dir, "pids");
     // pid_max on Linux is at most 4194304, so this pid cannot be alive; the lock is fresh all the same.
     mkdirSync(`${dataDir}.lock`);
-    writeFileSync(`${dataDir}.lock-owner`, JSON.stringify({ pid: 4194399, host: os.hostname(), since: "2026-01-01T00:00:00Z", command: "gone" }));
+    writeFileSync(
+      `${dataDir}.lock-owner`,
+      JSON.stringify({ pid: 4194399, host: os.hostname(), since: "2026-01-01T00:00:00Z", command: "gone" }),
+    );
     const refused = await acquireDataDirLock(dataDir, { waitMs: 0 }).catch((e: unknown) => e);
     expect(refused).toBeInstanceOf(DataDirLockedError);
     expect((refused as Error).message).toContain("process 4194399");
     // Not refreshed for longer than the stale time, while naming a live process (our parent): taken over.
-    writeFileSync(`${dataDir}.lock-owner`, JSON.stringify({ pid: process.ppid, host: os.hostname(), since: "2026-01-01T00:00:00Z", command: "reused pid" }));
+    writeFileSync(
+      `${dataDir}.lock-owner`,
+      JSON.stringify({ pid: process.ppid, host: os.hostname(), since: "2026-01-01T00:00:00Z", command: "reused pid" }),
+    );
     const old = new Date(Date.now() - LOCK_STALE_MS - 5_000);
     utimesSync(`${dataDir}.lock`, old, old);
     const release = await acquireDataDirLock(dataDir, { waitMs: 0 });

@@ -19,14 +19,24 @@ describe("migrations", () => {
     const result = await handle.db.execute(
       sql`select table_name from information_schema.tables where table_schema = 'public'`,
     );
-    const names = (result as unknown as { rows: { table_name: string }[] }).rows.map(
-      (r) => r.table_name,
-    );
+    const names = (result as unknown as { rows: { table_name: string }[] }).rows.map((r) => r.table_name);
     for (const table of [
-      "user", "session", "account", "verification", "shop_settings", "bike_models",
-      "spring_stock", "setup_targets", "clicker_rules", "setup_requests",
-      "recommendation_versions", "request_messages", "uploads", "sag_reports",
-      "audit_events", "outbound_emails",
+      "user",
+      "session",
+      "account",
+      "verification",
+      "shop_settings",
+      "bike_models",
+      "spring_stock",
+      "setup_targets",
+      "clicker_rules",
+      "setup_requests",
+      "recommendation_versions",
+      "request_messages",
+      "uploads",
+      "sag_reports",
+      "audit_events",
+      "outbound_emails",
     ]) {
       expect(names).toContain(table);
     }

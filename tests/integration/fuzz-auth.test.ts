@@ -17,10 +17,14 @@ describe("fuzzing the sign-in endpoints: 0 × 5xx, 0 rows for refused bodies", {
   it("POST /api/auth/sign-in/magic-link", async () => {
     const valid = { email: "fuzz.rider@example.test", callbackURL: "/my-requests" };
     // A well-formed e-mail gets a link (a verification row): that is the endpoint's job.
-    await expectNo5xx(bodiesAround(valid), (body) => authPost(json("/api/auth/sign-in/magic-link", body)), { allowWrites: (s) => s === 200 });
+    await expectNo5xx(bodiesAround(valid), (body) => authPost(json("/api/auth/sign-in/magic-link", body)), {
+      allowWrites: (s) => s === 200,
+    });
   });
   it("GET /api/auth/magic-link/verify", async () => {
-    const query = fc.tuple(hostileString, hostileString).map(([token, callbackURL]) => JSON.stringify({ token, callbackURL }));
+    const query = fc
+      .tuple(hostileString, hostileString)
+      .map(([token, callbackURL]) => JSON.stringify({ token, callbackURL }));
     await expectNo5xx(query, (encoded) => {
       const { token, callbackURL } = JSON.parse(encoded) as Record<string, string>;
       const url = new URL(`${ORIGIN()}/api/auth/magic-link/verify`);

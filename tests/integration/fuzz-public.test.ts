@@ -23,7 +23,14 @@ import { tinyJpeg } from "../fixtures/images";
 setupTestApp({ seed: true, tempDataDir: true });
 
 const validAnswers = {
-  rider: { name: "Fuzz Rider", email: "fuzz.rider@example.test", weight: { value: 80, unit: "kg" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+  rider: {
+    name: "Fuzz Rider",
+    email: "fuzz.rider@example.test",
+    weight: { value: 80, unit: "kg" },
+    gearIncluded: false,
+    skill: "intermediate",
+    style: "moderate",
+  },
   riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 10 },
   bike: { modelId: stableUuid("bike:mx-450-4t"), year: 2023 },
   feel: { complaints: ["bottoming"], notes: "Bottoms on the big table." },
@@ -48,7 +55,11 @@ describe("a NUL character in a text field", () => {
 
 describe("fuzzing the public endpoints: 0 × 5xx, 0 rows for refused bodies", { timeout: 300_000 }, () => {
   it("POST /api/requests (JSON)", async () => {
-    const tally = await expectNo5xx(bodiesAround(validAnswers), (body) => submit(json("/api/requests", body), undefined as never), { allowWrites: created });
+    const tally = await expectNo5xx(
+      bodiesAround(validAnswers),
+      (body) => submit(json("/api/requests", body), undefined as never),
+      { allowWrites: created },
+    );
     expect(tally.get(400) ?? 0).toBeGreaterThan(RUNS / 2);
   });
 
@@ -57,48 +68,90 @@ describe("fuzzing the public endpoints: 0 × 5xx, 0 rows for refused bodies", { 
       name: hostileString,
       bytes: fc.oneof(fc.uint8Array({ maxLength: 64 }), fc.constant(tinyJpeg())),
     });
-    const arbitrary = fc.tuple(bodiesAround(validAnswers), fc.array(photo, { maxLength: 2 }), fc.boolean()).map(([answers, photos, withAnswers]) => JSON.stringify({ answers, photos: photos.map((p) => ({ name: p.name, bytes: Array.from(p.bytes) })), withAnswers }));
-    await expectNo5xx(arbitrary, (encoded) => {
-      const { answers: raw, photos, withAnswers } = JSON.parse(encoded) as { answers: string; photos: { name: string; bytes: number[] }[]; withAnswers: boolean };
-      const form = new FormData();
-      if (withAnswers) form.set("answers", raw);
-      for (const p of photos) form.append("photos", new File([new Uint8Array(p.bytes)], p.name, { type: "image/jpeg" }));
-      return submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", headers: nextClient(), body: form }), undefined as never);
-    }, { allowWrites: created });
+    const arbitrary = fc
+      .tuple(bodiesAround(validAnswers), fc.array(photo, { maxLength: 2 }), fc.boolean())
+      .map(([answers, photos, withAnswers]) =>
+        JSON.stringify({
+          answers,
+          photos: photos.map((p) => ({ name: p.name, bytes: Array.from(p.bytes) })),
+          withAnswers,
+        }),
+      );
+    await expectNo5xx(
+      arbitrary,
+      (encoded) => {
+        const {
+          answers: raw,
+          photos,
+          withAnswers,
+        } = JSON.parse(encoded) as {
+          answers: string;
+          photos: { name: string; bytes: number[] }[];
+          withAnswers: boolean;
+        };
+        const form = new FormData();
+        if (withAnswers) form.set("answers", raw);
+        for (const p of photos)
+          form.append("photos", new File([new Uint8Array(p.bytes)], p.name, { type: "image/jpeg" }));
+        return submit(
+          new Request(`${ORIGIN()}/api/requests`, { method: "POST", headers: nextClient(), body: form }),
+          undefined as never,
+        );
+      },
+      { allowWrites: created },
+    );
   });
 
   it("POST /api/status/:id/answer", async () => {
     const id = fc.oneof({ weight: 4, arbitrary: fc.constant(requestId) }, { weight: 1, arbitrary: hostileString });
-    const arbitrary = fc.tuple(id, bodiesAround({ token: statusToken(), body: "The bike is stock apart from the bars." })).map((t) => JSON.stringify(t));
-    await expectNo5xx(arbitrary, (encoded) => {
-      const [target, body] = JSON.parse(encoded) as [string, string];
-      return answer(json(`/api/status/x/answer`, body), params(target));
-    }, { allowWrites: created });
+    const arbitrary = fc
+      .tuple(id, bodiesAround({ token: statusToken(), body: "The bike is stock apart from the bars." }))
+      .map((t) => JSON.stringify(t));
+    await expectNo5xx(
+      arbitrary,
+      (encoded) => {
+        const [target, body] = JSON.parse(encoded) as [string, string];
+        return answer(json(`/api/status/x/answer`, body), params(target));
+      },
+      { allowWrites: created },
+    );
   });
 
   it("POST /api/status/:id/sag", async () => {
     const id = fc.oneof({ weight: 4, arbitrary: fc.constant(requestId) }, { weight: 1, arbitrary: hostileString });
-    const valid = { token: statusToken(), unit: "mm", front: { static: 30, race: 70 }, rear: { free: 10, static: 35, race: 105 } };
+    const valid = {
+      token: statusToken(),
+      unit: "mm",
+      front: { static: 30, race: 70 },
+      rear: { free: 10, static: 35, race: 105 },
+    };
     const arbitrary = fc.tuple(id, bodiesAround(valid)).map((t) => JSON.stringify(t));
-    await expectNo5xx(arbitrary, (encoded) => {
-      const [target, body] = JSON.parse(encoded) as [string, string];
-      return sag(json(`/api/status/x/sag`, body), params(target));
-    }, { allowWrites: created });
+    await expectNo5xx(
+      arbitrary,
+      (encoded) => {
+        const [target, body] = JSON.parse(encoded) as [string, string];
+        return sag(json(`/api/status/x/sag`, body), params(target));
+      },
+      { allowWrites: created },
+    );
   });
 
   it("POST /api/invite/accept", async () => {
     const valid = { token: "a".repeat(43), name: "New Tuner", password: "long-enough-password" };
-    await expectNo5xx(bodiesAround(valid), (body) => acceptInvite(json("/api/invite/accept", body), undefined as never));
+    await expectNo5xx(bodiesAround(valid), (body) =>
+      acceptInvite(json("/api/invite/accept", body), undefined as never),
+    );
   });
 
-
-
-
   it("GET /api/bikes?q=", async () => {
-    await expectNo5xx(hostileString, (q) => {
-      const url = new URL(`${ORIGIN()}/api/bikes`);
-      url.searchParams.set("q", q);
-      return listBikes(new Request(url, { headers: nextClient() }), undefined as never);
-    }, { allowWrites: () => false });
+    await expectNo5xx(
+      hostileString,
+      (q) => {
+        const url = new URL(`${ORIGIN()}/api/bikes`);
+        url.searchParams.set("q", q);
+        return listBikes(new Request(url, { headers: nextClient() }), undefined as never);
+      },
+      { allowWrites: () => false },
+    );
   });
 });

@@ -50,7 +50,7 @@ describe("mail fake: send through the resend SDK", () => {
       text: "Open https://demo.sagwise.test/r/abc",
       headers: { "X-Sagwise-Request": "1042" },
       tags: [{ name: "template", value: "approved" }],
-      attachments: [{ filename: "setup-sheet \"v2\".pdf", content: pdf, contentType: "application/pdf" }],
+      attachments: [{ filename: 'setup-sheet "v2".pdf', content: pdf, contentType: "application/pdf" }],
     });
     expect(error).toBeNull();
     expect(data?.id).toMatch(/^[0-9a-f-]{36}$/);
@@ -60,12 +60,31 @@ describe("mail fake: send through the resend SDK", () => {
     expect(list.status).toBe(200);
     expect(list.body.object).toBe("list");
     expect(list.body.data).toHaveLength(1);
-    expect(list.body.data[0]).toMatchObject({ id, from: FROM, to: [RIDER], cc: ["tuner@sagwise.test"], reply_to: ["shop@sagwise.test"], subject: "Your setup sheet <v2>", html: HTML });
+    expect(list.body.data[0]).toMatchObject({
+      id,
+      from: FROM,
+      to: [RIDER],
+      cc: ["tuner@sagwise.test"],
+      reply_to: ["shop@sagwise.test"],
+      subject: "Your setup sheet <v2>",
+      html: HTML,
+    });
     // The listing keeps attachment names and sizes but not their bodies.
-    expect(list.body.data[0]?.attachments[0]).toEqual({ filename: 'setup-sheet "v2".pdf', content_type: "application/pdf", content_id: null, path: null, size: pdf.length });
+    expect(list.body.data[0]?.attachments[0]).toEqual({
+      filename: 'setup-sheet "v2".pdf',
+      content_type: "application/pdf",
+      content_id: null,
+      path: null,
+      size: pdf.length,
+    });
 
     const one = await getJson<StoredEmail>(`${fake.url}/emails/${id}`);
-    expect(one.body).toMatchObject({ id, headers: { "X-Sagwise-Request": "1042" }, tags: [{ name: "template", value: "approved" }], text: "Open https://demo.sagwise.test/r/abc" });
+    expect(one.body).toMatchObject({
+      id,
+      headers: { "X-Sagwise-Request": "1042" },
+      tags: [{ name: "template", value: "approved" }],
+      text: "Open https://demo.sagwise.test/r/abc",
+    });
     expect(Buffer.from(one.body.attachments[0]?.content ?? "", "base64").equals(pdf)).toBe(true);
 
     // The SDK's own getter parses the same record.
@@ -73,12 +92,20 @@ describe("mail fake: send through the resend SDK", () => {
     expect(viaSdk.data?.subject).toBe("Your setup sheet <v2>");
 
     const download = await fetch(`${fake.url}/inbox/${id}/attachments/0`);
-    expect(download.headers.get("content-disposition")).toBe(`attachment; filename="setup-sheet v2.pdf"; filename*=UTF-8''setup-sheet%20v2.pdf`);
+    expect(download.headers.get("content-disposition")).toBe(
+      `attachment; filename="setup-sheet v2.pdf"; filename*=UTF-8''setup-sheet%20v2.pdf`,
+    );
     expect(Buffer.from(await download.arrayBuffer()).equals(pdf)).toBe(true);
   });
 
   it("shows the message in the inbox with its html escaped into a sandboxed srcdoc", async () => {
-    const { data } = await resend.emails.send({ from: FROM, to: RIDER, subject: "Sign in <now> & go", html: HTML, text: "plain part here" });
+    const { data } = await resend.emails.send({
+      from: FROM,
+      to: RIDER,
+      subject: "Sign in <now> & go",
+      html: HTML,
+      text: "plain part here",
+    });
     const inbox = await (await fetch(`${fake.url}/`)).text();
     expect(inbox).toContain("Sign in &lt;now&gt; &amp; go");
     expect(inbox).toContain(`href="/inbox/${data!.id}"`);
@@ -150,7 +177,11 @@ describe("mail fake: rejections in the API's error shape", () => {
       { from: FROM, to: RIDER, subject: "ok", text: "t" },
       { from: FROM, to: RIDER, text: "t" } as never,
     ]);
-    expect(batch.error).toEqual({ statusCode: 422, name: "missing_required_field", message: "Missing `[1].subject` field." });
+    expect(batch.error).toEqual({
+      statusCode: 422,
+      name: "missing_required_field",
+      message: "Missing `[1].subject` field.",
+    });
     expect((await getJson(`${fake.url}/emails`)).body.data).toHaveLength(0);
   });
 
@@ -179,7 +210,9 @@ describe("mail fake: persistence", () => {
     fake = await startMailFake({ port: 0, dir });
     resend = new Resend("re_test_key", { baseUrl: fake.url });
     const after = await getJson(`${fake.url}/emails`);
-    expect(after.body.data.map((m: { id: string; subject: string }) => [m.id, m.subject])).toEqual([[data!.id, "kept"]]);
+    expect(after.body.data.map((m: { id: string; subject: string }) => [m.id, m.subject])).toEqual([
+      [data!.id, "kept"],
+    ]);
     // A message sent after the restart still sorts first.
     await resend.emails.send({ from: FROM, to: RIDER, subject: "newer", text: "t" });
     expect((await getJson(`${fake.url}/emails`)).body.data[0]?.subject).toBe("newer");

@@ -46,9 +46,18 @@ describe("notifyRider", () => {
   });
 
   it("records a failed send as failed in the audit trail, without throwing", async () => {
-    app.server.use(http.post(`${mailBaseUrl()}/emails`, () => HttpResponse.json({ statusCode: 500, name: "internal_server_error", message: "down" }, { status: 500 })));
+    app.server.use(
+      http.post(`${mailBaseUrl()}/emails`, () =>
+        HttpResponse.json({ statusCode: 500, name: "internal_server_error", message: "down" }, { status: 500 }),
+      ),
+    );
     configureOutbox({ maxAttempts: 2 });
-    const result = await notifyRider(await getDb(), requestId, { kind: "request-declined", reason: "Test" }, { actor: { userId: null, label: "Test tuner" } });
+    const result = await notifyRider(
+      await getDb(),
+      requestId,
+      { kind: "request-declined", reason: "Test" },
+      { actor: { userId: null, label: "Test tuner" } },
+    );
     await drainOutbox({ settle: true });
     resetOutboxPolicy();
     expect(await findOutboundEmail(result.outboundEmailId)).toMatchObject({ status: "failed", attempts: 2 });
@@ -56,6 +65,10 @@ describe("notifyRider", () => {
     const last = audit.at(-1)!;
     expect(last.action).toBe("email.failed");
     expect(last.actorLabel).toBe("Test tuner");
-    expect(last.detail).toMatchObject({ template: "request-declined", outboundEmailId: result.outboundEmailId, attempts: 2 });
+    expect(last.detail).toMatchObject({
+      template: "request-declined",
+      outboundEmailId: result.outboundEmailId,
+      attempts: 2,
+    });
   });
 });

@@ -14,7 +14,16 @@ import { claimDueEmails, findOutboundEmail } from "@/db/queries/outbound-emails"
 import { startMailFake, type MailFake } from "@/fakes/mail/server";
 import type { StoredEmail } from "@/fakes/mail/store";
 import { resetEnvForTests } from "@/lib/env";
-import { configureOutbox, drainOutbox, kickOutbox, resetOutboxPolicy, queueMail, startOutboxWorker, stopOutboxWorker, type SendMailInput } from "@/lib/mail";
+import {
+  configureOutbox,
+  drainOutbox,
+  kickOutbox,
+  resetOutboxPolicy,
+  queueMail,
+  startOutboxWorker,
+  stopOutboxWorker,
+  type SendMailInput,
+} from "@/lib/mail";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 
 let dir: string;
@@ -31,7 +40,13 @@ async function inbox(to: string): Promise<StoredEmail[]> {
   return ((await res.json()) as { data: StoredEmail[] }).data;
 }
 
-const message = (to: string): SendMailInput => ({ template: "sign-in-link", to, subject: "Sign in", html: "<p>Hello</p>", text: "Hello" });
+const message = (to: string): SendMailInput => ({
+  template: "sign-in-link",
+  to,
+  subject: "Sign in",
+  html: "<p>Hello</p>",
+  text: "Hello",
+});
 
 async function queue(input: SendMailInput) {
   const db = await getDb();

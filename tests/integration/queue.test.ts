@@ -123,7 +123,13 @@ describe("GET /api/requests over 10,000 requests", () => {
     const lo = Date.parse(`${from}T00:00:00Z`);
     const hi = Date.parse(`${to}T00:00:00Z`) + 24 * HOUR;
     const expected = rows
-      .filter((r) => r.discipline === "cross-country" && r.tuner === "t1" && r.createdAt.getTime() >= lo && r.createdAt.getTime() < hi)
+      .filter(
+        (r) =>
+          r.discipline === "cross-country" &&
+          r.tuner === "t1" &&
+          r.createdAt.getTime() >= lo &&
+          r.createdAt.getTime() < hi,
+      )
       .sort(newestFirst);
     expect(expected.length).toBeGreaterThan(5);
     const { body } = await list({ discipline: "cross-country", tuner: tunerIds.t1, from, to, pageSize: 100 });
@@ -156,7 +162,12 @@ describe("GET /api/requests over 10,000 requests", () => {
     const asc = await list({ bikeClass: "bulk-a", status: "declined", sort: "rider", pageSize: 20 });
     expect(asc.body.items.map((r) => r.riderName)).toEqual(byName.slice(0, 20).map((r) => r.riderName));
     const desc = await list({ bikeClass: "bulk-a", status: "declined", sort: "rider_desc", pageSize: 20 });
-    expect(desc.body.items.map((r) => r.riderName)).toEqual(byName.reverse().slice(0, 20).map((r) => r.riderName));
+    expect(desc.body.items.map((r) => r.riderName)).toEqual(
+      byName
+        .reverse()
+        .slice(0, 20)
+        .map((r) => r.riderName),
+    );
     const byNumber = await list({ bikeClass: "bulk-a", sort: "number_asc", pageSize: 10 });
     const numbers = byNumber.body.items.map((r) => r.number);
     expect(numbers).toEqual([...numbers].sort((a, b) => a - b));
@@ -194,7 +205,10 @@ describe("GET /api/requests over 10,000 requests", () => {
     expect((await list({}, "")).status).toBe(401);
     expect((await list({}, riderCookie)).status).toBe(403);
     const db = await getDb();
-    const [one] = await db.select({ n: setupRequests.number }).from(setupRequests).where(eq(setupRequests.id, rows[0]!.id!));
+    const [one] = await db
+      .select({ n: setupRequests.number })
+      .from(setupRequests)
+      .where(eq(setupRequests.id, rows[0]!.id!));
     expect(one?.n).toBeGreaterThan(0);
   });
 });

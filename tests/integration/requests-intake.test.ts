@@ -25,12 +25,18 @@ import { heicHeader, pdfBytes, tinyJpeg, tinyPng } from "../fixtures/images";
 const app = setupTestApp({ seed: true, tempDataDir: true });
 let ip = 0;
 
-
 const bike450 = stableUuid("bike:mx-450-4t");
 
 function answers(overrides: Record<string, unknown> = {}) {
   return {
-    rider: { name: "Test Rider", email: "Test.Rider@Example.test", weight: { value: 180, unit: "lb" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+    rider: {
+      name: "Test Rider",
+      email: "Test.Rider@Example.test",
+      weight: { value: 180, unit: "lb" },
+      gearIncluded: false,
+      skill: "intermediate",
+      style: "moderate",
+    },
     riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 10 },
     bike: { modelId: bike450, year: 2023 },
     feel: { complaints: ["bottoming"], notes: "Bottoms on the big table." },
@@ -41,8 +47,12 @@ function answers(overrides: Record<string, unknown> = {}) {
 
 // Each call comes from its own address unless a test asks otherwise, so the limiter stays out of the way.
 const post = (body: BodyInit, headers: Record<string, string> = {}, from = `10.0.${++ip >> 8}.${ip & 255}`) =>
-  submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body, headers: { ...fromClient(from), ...headers } }), undefined as never);
-const postJson = (value: unknown, from?: string) => post(JSON.stringify(value), { "content-type": "application/json" }, from);
+  submit(
+    new Request(`${ORIGIN()}/api/requests`, { method: "POST", body, headers: { ...fromClient(from), ...headers } }),
+    undefined as never,
+  );
+const postJson = (value: unknown, from?: string) =>
+  post(JSON.stringify(value), { "content-type": "application/json" }, from);
 function postForm(value: unknown, files: { bytes: Uint8Array; name: string; type: string }[] = []) {
   const form = new FormData();
   form.set("answers", typeof value === "string" ? value : JSON.stringify(value));
@@ -74,13 +84,22 @@ describe("POST /api/requests, valid", () => {
 
     const db = await getDb();
     const [row] = await db.select().from(setupRequests).where(eq(setupRequests.id, body.id));
-    expect(row).toMatchObject({ status: "submitted", riderEmail: "test.rider@example.test", bikeModelId: bike450, bikeClass: "mx-450-4t", bikeYear: 2023 });
+    expect(row).toMatchObject({
+      status: "submitted",
+      riderEmail: "test.rider@example.test",
+      bikeModelId: bike450,
+      bikeClass: "mx-450-4t",
+      bikeYear: 2023,
+    });
     expect(row!.bikeLabel).toBe("450 four-stroke motocross (typical values)");
     // 1 lb = 0.45359237 kg exactly (NIST SP 811, appendix B): 180 lb = 81.6466266 kg.
     expect(row!.riderMassKg).toBeCloseTo(81.6466266, 6);
     expect((row!.answers as { rider: { weight: unknown } }).rider.weight).toEqual({ value: 180, unit: "lb" });
 
-    const versions = await db.select().from(recommendationVersions).where(eq(recommendationVersions.requestId, body.id));
+    const versions = await db
+      .select()
+      .from(recommendationVersions)
+      .where(eq(recommendationVersions.requestId, body.id));
     expect(versions).toHaveLength(1);
     expect(versions[0]).toMatchObject({ version: 1, state: "draft" });
     const output = recommendationSchema.parse(versions[0]!.output);
@@ -187,19 +206,39 @@ describe("POST /api/requests, refused", () => {
   const cases: [string, unknown, string][] = [
     ["missing e-mail", answers({ rider: { ...answers().rider, email: "" } }), "rider.email"],
     ["bad e-mail", answers({ rider: { ...answers().rider, email: "rider@" } }), "rider.email"],
-    ["negative weight", answers({ rider: { ...answers().rider, weight: { value: -5, unit: "kg" } } }), "rider.weight.value"],
-    ["unknown unit", answers({ rider: { ...answers().rider, weight: { value: 80, unit: "stone" } } }), "rider.weight.unit"],
+    [
+      "negative weight",
+      answers({ rider: { ...answers().rider, weight: { value: -5, unit: "kg" } } }),
+      "rider.weight.value",
+    ],
+    [
+      "unknown unit",
+      answers({ rider: { ...answers().rider, weight: { value: 80, unit: "stone" } } }),
+      "rider.weight.unit",
+    ],
     ["unknown discipline", answers({ riding: { ...answers().riding, discipline: "ice-racing" } }), "riding.discipline"],
     ["no bike", answers({ bike: { modelId: null } }), "bike.modelId"],
     ["unknown bike", answers({ bike: { modelId: "00000000-0000-4000-8000-000000000000" } }), "bike.modelId"],
     [
       "not listed without travel",
-      answers({ bike: { modelId: null, notListed: { description: "Old twin-shock", forkTravel: { value: 250, unit: "mm" } } } }),
+      answers({
+        bike: { modelId: null, notListed: { description: "Old twin-shock", forkTravel: { value: 250, unit: "mm" } } },
+      }),
       "bike.notListed.rearWheelTravel",
     ],
     [
       "not listed, bike weight a typo",
-      answers({ bike: { modelId: null, notListed: { description: "Tiny", rearWheelTravel: { value: 300, unit: "mm" }, forkTravel: { value: 300, unit: "mm" }, mass: { value: 12, unit: "kg" } } } }),
+      answers({
+        bike: {
+          modelId: null,
+          notListed: {
+            description: "Tiny",
+            rearWheelTravel: { value: 300, unit: "mm" },
+            forkTravel: { value: 300, unit: "mm" },
+            mass: { value: 12, unit: "kg" },
+          },
+        },
+      }),
       "bike.notListed.mass.value",
     ],
     ["no consent", answers({ review: { consent: false } }), "review.consent"],
@@ -224,21 +263,57 @@ describe("POST /api/requests, refused", () => {
   });
 
   const photoCases: [string, { bytes: Uint8Array; name: string; type: string }[], number, string, RegExp][] = [
-    ["a text file renamed .jpg", [{ bytes: new TextEncoder().encode("just some text, not a photo"), name: "bike.jpg", type: "image/jpeg" }], 400, "photos.0", /not a JPEG, PNG or WebP/],
-    ["a PDF named .png after a good photo", [{ bytes: tinyPng(), name: "ok.png", type: "image/png" }, { bytes: pdfBytes(), name: "manual.png", type: "image/png" }], 400, "photos.1", /not a JPEG, PNG or WebP/],
-    ["a HEIC photo", [{ bytes: heicHeader(), name: "IMG_0001.HEIC", type: "image/heic" }], 400, "photos.0", /HEIC.*JPEG/],
-    ["an oversize photo", [{ bytes: tinyJpeg(10 * 1024 * 1024 + 1), name: "huge.jpg", type: "image/jpeg" }], 413, "photos.0", /at most 10 MB/],
-    ["seven photos", Array.from({ length: 7 }, (_, i) => ({ bytes: tinyPng(), name: `p${i}.png`, type: "image/png" })), 400, "photos", /at most 6 photos/],
+    [
+      "a text file renamed .jpg",
+      [{ bytes: new TextEncoder().encode("just some text, not a photo"), name: "bike.jpg", type: "image/jpeg" }],
+      400,
+      "photos.0",
+      /not a JPEG, PNG or WebP/,
+    ],
+    [
+      "a PDF named .png after a good photo",
+      [
+        { bytes: tinyPng(), name: "ok.png", type: "image/png" },
+        { bytes: pdfBytes(), name: "manual.png", type: "image/png" },
+      ],
+      400,
+      "photos.1",
+      /not a JPEG, PNG or WebP/,
+    ],
+    [
+      "a HEIC photo",
+      [{ bytes: heicHeader(), name: "IMG_0001.HEIC", type: "image/heic" }],
+      400,
+      "photos.0",
+      /HEIC.*JPEG/,
+    ],
+    [
+      "an oversize photo",
+      [{ bytes: tinyJpeg(10 * 1024 * 1024 + 1), name: "huge.jpg", type: "image/jpeg" }],
+      413,
+      "photos.0",
+      /at most 10 MB/,
+    ],
+    [
+      "seven photos",
+      Array.from({ length: 7 }, (_, i) => ({ bytes: tinyPng(), name: `p${i}.png`, type: "image/png" })),
+      400,
+      "photos",
+      /at most 6 photos/,
+    ],
   ];
 
-  it.each(photoCases)("%s: refused naming the photo, no row and no file", async (_name, files, status, field, message) => {
-    const before = await counts();
-    const response = await postForm(answers(), files);
-    expect(response.status).toBe(status);
-    const json = (await response.json()) as { fields: Record<string, string> };
-    expect(json.fields[field]).toMatch(message);
-    expect(await counts()).toEqual(before);
-  });
+  it.each(photoCases)(
+    "%s: refused naming the photo, no row and no file",
+    async (_name, files, status, field, message) => {
+      const before = await counts();
+      const response = await postForm(answers(), files);
+      expect(response.status).toBe(status);
+      const json = (await response.json()) as { fields: Record<string, string> };
+      expect(json.fields[field]).toMatch(message);
+      expect(await counts()).toEqual(before);
+    },
+  );
 
   it("answers 415 to a body that is neither JSON nor a form", async () => {
     const response = await post("rider=me", { "content-type": "text/plain" });
@@ -265,15 +340,30 @@ describe("GET /api/bikes", () => {
   const bikes = async (q = "") => {
     const response = await listBikes(new Request(`${ORIGIN()}/api/bikes${q}`), undefined as never);
     expect(response.status).toBe(200);
-    return ((await response.json()) as { items: { id: string; name: string; bikeClass: string; travel: { rearWheelMm: number; forkMm: number } }[] }).items;
+    return (
+      (await response.json()) as {
+        items: { id: string; name: string; bikeClass: string; travel: { rearWheelMm: number; forkMm: number } }[];
+      }
+    ).items;
   };
 
   it("searches the active catalog by name and hides retired models", async () => {
     expect((await bikes()).length).toBe(5);
     const found = await bikes("?q=450");
-    expect(found).toEqual([{ id: bike450, name: "450 four-stroke motocross (typical values)", bikeClass: "mx-450-4t", typical: true, travel: { rearWheelMm: 310, forkMm: 310 } }]);
+    expect(found).toEqual([
+      {
+        id: bike450,
+        name: "450 four-stroke motocross (typical values)",
+        bikeClass: "mx-450-4t",
+        typical: true,
+        travel: { rearWheelMm: 310, forkMm: 310 },
+      },
+    ]);
     const db = await getDb();
-    await db.update(bikeModels).set({ retiredAt: new Date() }).where(eq(bikeModels.id, stableUuid("bike:youth-85")));
+    await db
+      .update(bikeModels)
+      .set({ retiredAt: new Date() })
+      .where(eq(bikeModels.id, stableUuid("bike:youth-85")));
     expect((await bikes("?q=85")).length).toBe(0);
     expect((await bikes()).map((b) => b.bikeClass)).not.toContain("youth-85");
   });

@@ -33,7 +33,10 @@ async function call(handler: Handler, id: string, method: string, body?: unknown
     }),
     { params: Promise.resolve({ id }) },
   );
-  return { status: response.status, body: (await response.json()) as Record<string, unknown> & { error?: string; fields?: Record<string, string> } };
+  return {
+    status: response.status,
+    body: (await response.json()) as Record<string, unknown> & { error?: string; fields?: Record<string, string> },
+  };
 }
 
 beforeAll(async () => {
@@ -123,10 +126,16 @@ describe("override → recompute → save → approve → revise", () => {
   });
 
   it("names the bad figure and keeps what was saved", async () => {
-    const bad = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { rateNmm: -5 } } });
+    const bad = await call(saveRecommendation, id, "PATCH", {
+      basedOnVersion: 1,
+      overrides: { rear: { rateNmm: -5 } },
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.fields).toHaveProperty(["overrides.rear.rateNmm"]);
-    const beyond = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { raceSagMm: 390 } } });
+    const beyond = await call(saveRecommendation, id, "PATCH", {
+      basedOnVersion: 1,
+      overrides: { rear: { raceSagMm: 390 } },
+    });
     expect(beyond.status).toBe(400);
     expect(Object.keys(beyond.body.fields ?? {}).join()).toContain("overrides.rear");
     const stale = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 2, overrides: {} });
@@ -166,14 +175,20 @@ describe("override → recompute → save → approve → revise", () => {
   });
 
   it("revising after approval makes version 2; approving it supersedes 1 and says revised", async () => {
-    const revised = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { rateNmm: stiffer } } });
+    const revised = await call(saveRecommendation, id, "PATCH", {
+      basedOnVersion: 1,
+      overrides: { rear: { rateNmm: stiffer } },
+    });
     expect(revised.status).toBe(200);
     expect(revised.body).toMatchObject({ version: 2, newVersion: true });
     expect((await getRequestRow(id))!.request.status).toBe("in_review");
     const approved = await call(approve, id, "POST");
     expect(approved.body).toMatchObject({ version: 2, revised: true });
     const versions = await listVersions(id);
-    expect(versions.map((v) => [v.version, v.state])).toEqual([[1, "superseded"], [2, "approved"]]);
+    expect(versions.map((v) => [v.version, v.state])).toEqual([
+      [1, "superseded"],
+      [2, "approved"],
+    ]);
     // Earlier versions stay readable as they were approved.
     expect((versions[0]!.output as Recommendation).rear.chosenRate.kgfMm).toBeCloseTo(5.2, 9);
     await drainOutbox();
@@ -249,7 +264,10 @@ describe("ask, decline, assign", () => {
   it("a sanity warning holds approval until the tuner acknowledges it (lib/sizing/README.md, sanity limits)", async () => {
     const id = stableUuid("request:r04"); // 450 class, in review
     // k·p/LR(0) = 60·25/3.05 ≈ 492 N holds the ≈ 408 N static rear load: static sag 0 on a coil end.
-    const saved = await call(saveRecommendation, id, "PATCH", { basedOnVersion: 1, overrides: { rear: { rateNmm: 60, preloadMm: 25 } } });
+    const saved = await call(saveRecommendation, id, "PATCH", {
+      basedOnVersion: 1,
+      overrides: { rear: { rateNmm: 60, preloadMm: 25 } },
+    });
     expect(saved.status).toBe(200);
     const out = saved.body.output as Recommendation;
     const codes = out.warnings.filter((w) => w.requiresAcknowledgement).map((w) => w.code);

@@ -83,7 +83,11 @@ const METHODS = ["GET", "POST", "PUT", "PATCH", "DELETE"] as const;
 const ROOT = process.cwd();
 
 /** `app/api/shop/stock/[id]/route.ts` → `/api/shop/stock/[id]`. */
-const routePathOf = (file: string) => `/${path.dirname(path.relative(path.join(ROOT, "app"), file)).split(path.sep).join("/")}`;
+const routePathOf = (file: string) =>
+  `/${path
+    .dirname(path.relative(path.join(ROOT, "app"), file))
+    .split(path.sep)
+    .join("/")}`;
 // Every app/api/**/route.ts (readdirSync's recursive listing: Node 20 has no fs.globSync).
 const routeFiles = (readdirSync(path.join(ROOT, "app/api"), { recursive: true }) as string[])
   .filter((f) => path.basename(f) === "route.ts")
@@ -91,7 +95,12 @@ const routeFiles = (readdirSync(path.join(ROOT, "app/api"), { recursive: true })
   .sort();
 
 type Handler = (request: Request, context: { params: Promise<Record<string, string | string[]>> }) => Promise<Response>;
-interface Probe { key: string; method: (typeof METHODS)[number]; route: string; handler: Handler }
+interface Probe {
+  key: string;
+  method: (typeof METHODS)[number];
+  route: string;
+  handler: Handler;
+}
 
 const RIDER_A = "dario.lindqvist@example.test"; // owns demo request r09 (db/seed-data.ts)
 const RIDER_B = "hana.whitlock@example.test";
@@ -104,7 +113,8 @@ beforeAll(async () => {
   cookies.admin = cookieFrom(await signInStaff("owner@sagwise.test", password));
   cookies.riderA = (await signInWithEmailLink(RIDER_A, app.sent)).cookie;
   cookies.riderB = (await signInWithEmailLink(RIDER_B, app.sent)).cookie;
-  for (const who of ["tuner", "admin", "riderA", "riderB"] as const) expect(cookies[who], who).toMatch(/session_token=/);
+  for (const who of ["tuner", "admin", "riderA", "riderB"] as const)
+    expect(cookies[who], who).toMatch(/session_token=/);
 
   const db = await getDb();
   ids.request = stableUuid("request:r09");
@@ -115,15 +125,28 @@ beforeAll(async () => {
   ids.member = tuner2!.id;
   // A photo of rider A's: submitted as a rider would, then found through the request's status.
   const form = new FormData();
-  form.set("answers", JSON.stringify({
-    rider: { name: "Dario Lindqvist", email: RIDER_A, weight: { value: 86, unit: "kg" }, gearIncluded: false, skill: "advanced", style: "moderate" },
-    riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 8 },
-    bike: { modelId: ids.bike, year: 2022 },
-    feel: { complaints: ["bottoming"] },
-    review: { consent: true },
-  }));
+  form.set(
+    "answers",
+    JSON.stringify({
+      rider: {
+        name: "Dario Lindqvist",
+        email: RIDER_A,
+        weight: { value: 86, unit: "kg" },
+        gearIncluded: false,
+        skill: "advanced",
+        style: "moderate",
+      },
+      riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 8 },
+      bike: { modelId: ids.bike, year: 2022 },
+      feel: { complaints: ["bottoming"] },
+      review: { consent: true },
+    }),
+  );
   form.append("photos", new File([tinyJpeg() as BlobPart], "bike.jpg", { type: "image/jpeg" }));
-  const created = await submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient() }), undefined as never);
+  const created = await submit(
+    new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient() }),
+    undefined as never,
+  );
   expect(created.status, await created.clone().text()).toBe(201);
   const { uploads } = await import("@/db/schema");
   const { id: requestId } = (await created.json()) as { id: string };
@@ -147,12 +170,17 @@ function target(route: string, method: string): { url: string; params: Record<st
     return { url: `/api/auth/${sub.join("/")}`, params: { all: sub } };
   }
   const id =
-    route.startsWith("/api/requests/") || route.startsWith("/api/status/") ? ids.request
-    : route.startsWith("/api/shop/catalog/") ? ids.bike
-    : route.startsWith("/api/shop/stock/") ? ids.stock
-    : route.startsWith("/api/shop/team/") ? ids.member
-    : route.startsWith("/api/uploads/") ? ids.upload
-    : undefined;
+    route.startsWith("/api/requests/") || route.startsWith("/api/status/")
+      ? ids.request
+      : route.startsWith("/api/shop/catalog/")
+        ? ids.bike
+        : route.startsWith("/api/shop/stock/")
+          ? ids.stock
+          : route.startsWith("/api/shop/team/")
+            ? ids.member
+            : route.startsWith("/api/uploads/")
+              ? ids.upload
+              : undefined;
   return { url: route.replace("[id]", id ?? "") + (PROBE_QUERY[`${method} ${route}`] ?? ""), params: id ? { id } : {} };
 }
 
@@ -184,8 +212,14 @@ describe("role matrix over every route file", () => {
   it("finds the routes, and every route and method is in the table (and nothing stale is)", () => {
     expect(routeFiles.length).toBeGreaterThan(25);
     const found = probes.map((p) => p.key).sort();
-    expect(found.filter((k) => !(k in EXPECTED)), "routes missing from EXPECTED").toEqual([]);
-    expect(Object.keys(EXPECTED).filter((k) => !found.includes(k)), "EXPECTED rows with no route").toEqual([]);
+    expect(
+      found.filter((k) => !(k in EXPECTED)),
+      "routes missing from EXPECTED",
+    ).toEqual([]);
+    expect(
+      Object.keys(EXPECTED).filter((k) => !found.includes(k)),
+      "EXPECTED rows with no route",
+    ).toEqual([]);
   });
 
   // Staff last: their calls may change the probed rows (a retired bike, an answered question).
@@ -193,18 +227,24 @@ describe("role matrix over every route file", () => {
   it.each(probes.map((p) => [p.key, p] as const))("%s", async (_key, probe) => {
     const wrong: string[] = [];
     for (const who of order) {
-      const { url, params } = probe.key === "DELETE /api/shop/stock/[id]" ? await freshStock() : target(probe.route, probe.method);
+      const { url, params } =
+        probe.key === "DELETE /api/shop/stock/[id]" ? await freshStock() : target(probe.route, probe.method);
       const headers: Record<string, string> = { origin: ORIGIN(), ...fromClient() };
       if (cookies[who]) headers.cookie = cookies[who]!;
       const hasBody = probe.method !== "GET" && probe.method !== "DELETE";
       if (hasBody) headers["content-type"] = "application/json";
       const response = await probe.handler(
-        new Request(`${ORIGIN()}${url}`, { method: probe.method, headers, body: hasBody ? JSON.stringify(PROBE_BODY[probe.key]?.() ?? {}) : undefined }),
+        new Request(`${ORIGIN()}${url}`, {
+          method: probe.method,
+          headers,
+          body: hasBody ? JSON.stringify(PROBE_BODY[probe.key]?.() ?? {}) : undefined,
+        }),
         { params: Promise.resolve(params) },
       );
       const expected = EXPECTED[probe.key]![who];
       const status = response.status;
-      const outcome: Outcome | number = status === 401 || status === 403 || status === 404 ? status : status < 500 ? "ok" : status;
+      const outcome: Outcome | number =
+        status === 401 || status === 403 || status === 404 ? status : status < 500 ? "ok" : status;
       if (outcome !== expected) wrong.push(`${who}: expected ${expected}, got ${status}`);
     }
     expect(wrong).toEqual([]);

@@ -86,7 +86,11 @@ describe("demo seed", () => {
   it("gives one catalog model at least five sag reports, each on its approved version", async () => {
     const db = await getDb();
     const rows = await db
-      .select({ model: schema.setupRequests.bikeModelId, state: schema.recommendationVersions.state, measured: schema.sagReports.measured })
+      .select({
+        model: schema.setupRequests.bikeModelId,
+        state: schema.recommendationVersions.state,
+        measured: schema.sagReports.measured,
+      })
       .from(schema.sagReports)
       .innerJoin(schema.setupRequests, eq(schema.setupRequests.id, schema.sagReports.requestId))
       .innerJoin(schema.recommendationVersions, eq(schema.recommendationVersions.id, schema.sagReports.versionId));
@@ -97,7 +101,8 @@ describe("demo seed", () => {
     // Read like a rider reads a tape: whole millimetres.
     for (const r of rows) {
       const mm = (r.measured as { mm: Record<string, { staticMm: number; raceMm: number }> }).mm;
-      for (const end of Object.values(mm)) expect(Number.isInteger(end.staticMm) && Number.isInteger(end.raceMm)).toBe(true);
+      for (const end of Object.values(mm))
+        expect(Number.isInteger(end.staticMm) && Number.isInteger(end.raceMm)).toBe(true);
     }
   });
 
@@ -115,7 +120,10 @@ describe("GET /api/requests over the demo data", () => {
       undefined as never,
     );
     expect(response.status).toBe(200);
-    return (await response.json()) as { items: { id: string; status: string; riderName: string; createdAt: string }[]; total: number };
+    return (await response.json()) as {
+      items: { id: string; status: string; riderName: string; createdAt: string }[];
+      total: number;
+    };
   };
 
   it("filters by status with the right total", async () => {

@@ -86,7 +86,11 @@ describe("setup sheet of seeded approved request r09", () => {
     expect(info.Title).toBe("Setup sheet, request 9, version 1");
     // Only the shipped Inter, embedded as subsets: no text left to a viewer's fallback font.
     const fonts = pdfFonts(pdf);
-    expect(fonts.map((f) => f.name.replace(/^[A-Z]{6}\+/, "")).sort()).toEqual(["Inter-Bold", "Inter-Regular", "Inter-SemiBold"]);
+    expect(fonts.map((f) => f.name.replace(/^[A-Z]{6}\+/, "")).sort()).toEqual([
+      "Inter-Bold",
+      "Inter-Regular",
+      "Inter-SemiBold",
+    ]);
     expect(fonts.every((f) => f.embedded)).toBe(true);
   });
 
@@ -117,7 +121,8 @@ describe("setup sheet of seeded approved request r09", () => {
     // The rate tables read back from the page: a line of kgf/mm figures sits between its N/mm and
     // lbf/in lines, fork (recommended, stock) then shock (recommended, stock) from left to right.
     const lines = text.split("\n").filter((l) => l.trim());
-    const figures = (line: string, u: string) => [...line.matchAll(new RegExp(`([\\d.]+) ${u}`, "g"))].map((m) => m[1]!);
+    const figures = (line: string, u: string) =>
+      [...line.matchAll(new RegExp(`([\\d.]+) ${u}`, "g"))].map((m) => m[1]!);
     const rows = lines.flatMap((line, i) => {
       const kgf = figures(line, "kgf/mm");
       if (kgf.length < 2) return [];
@@ -130,8 +135,12 @@ describe("setup sheet of seeded approved request r09", () => {
     for (const { n, kgf, lbf } of rows) {
       // The N/mm figure is itself rounded: allow its rounding, carried through the factor.
       const nTol = halfUlp(n);
-      expect(Math.abs(convertRate(Number(n), "N/mm", "kgf/mm") - Number(kgf))).toBeLessThanOrEqual(halfUlp(kgf) + convertRate(nTol, "N/mm", "kgf/mm") + 1e-9);
-      expect(Math.abs(convertRate(Number(n), "N/mm", "lbf/in") - Number(lbf))).toBeLessThanOrEqual(halfUlp(lbf) + convertRate(nTol, "N/mm", "lbf/in") + 1e-9);
+      expect(Math.abs(convertRate(Number(n), "N/mm", "kgf/mm") - Number(kgf))).toBeLessThanOrEqual(
+        halfUlp(kgf) + convertRate(nTol, "N/mm", "kgf/mm") + 1e-9,
+      );
+      expect(Math.abs(convertRate(Number(n), "N/mm", "lbf/in") - Number(lbf))).toBeLessThanOrEqual(
+        halfUlp(lbf) + convertRate(nTol, "N/mm", "lbf/in") + 1e-9,
+      );
     }
   });
 
@@ -143,10 +152,16 @@ describe("setup sheet of seeded approved request r09", () => {
     expect(flat).toContain(`${turns.toFixed(1)} turns from where the collar`);
     for (const end of [rec.front, rec.rear]) {
       expect(flat).toContain(`Race sag target ${end.sagTargets.raceSagMm.toFixed(0)} mm`);
-      expect(flat).toContain(`Static sag window ${end.sagTargets.staticSagMinMm.toFixed(0)}–${end.sagTargets.staticSagMaxMm.toFixed(0)} mm`);
-      expect(flat).toContain(`race ${end.predicted.raceSagMm.toFixed(0)} mm, static ${end.predicted.staticSagMm.toFixed(0)} mm`);
+      expect(flat).toContain(
+        `Static sag window ${end.sagTargets.staticSagMinMm.toFixed(0)}–${end.sagTargets.staticSagMaxMm.toFixed(0)} mm`,
+      );
+      expect(flat).toContain(
+        `race ${end.predicted.raceSagMm.toFixed(0)} mm, static ${end.predicted.staticSagMm.toFixed(0)} mm`,
+      );
     }
-    expect(flat).toContain(`Oil level ${rec.front.oilLevelMm!.toFixed(0)} mm (stock ${rec.front.stockOilLevelMm.toFixed(0)} mm)`);
+    expect(flat).toContain(
+      `Oil level ${rec.front.oilLevelMm!.toFixed(0)} mm (stock ${rec.front.stockOilLevelMm.toFixed(0)} mm)`,
+    );
   });
 
   it("lists every starting clicker position counted out from fully closed, beside stock", () => {
@@ -160,7 +175,8 @@ describe("setup sheet of seeded approved request r09", () => {
       shockRebound: "Shock rebound",
     } as const;
     for (const c of rec.clickers) {
-      const count = (v: number) => (c.unit === "clicks" ? `${v} click${v === 1 ? "" : "s"}` : `${String(v)} turn${v === 1 ? "" : "s"}`);
+      const count = (v: number) =>
+        c.unit === "clicks" ? `${v} click${v === 1 ? "" : "s"}` : `${String(v)} turn${v === 1 ? "" : "s"}`;
       expect(flat).toContain(`${names[c.id]} ${count(c.position)} ${count(c.stock)}`);
     }
   });
@@ -264,12 +280,17 @@ describe("who may open a sheet", () => {
       expect(((await bad.json()) as { fields: Record<string, string> }).fields).toHaveProperty("version");
     }
     const missing = await getSheet(r09, {}, staffCookie);
-    expect(((await missing.json()) as { fields: Record<string, string> }).fields.version).toBe("Give the version number");
+    expect(((await missing.json()) as { fields: Record<string, string> }).fields.version).toBe(
+      "Give the version number",
+    );
   });
 
   it("lets the rider in by their own e-mail sign-in, and no other rider", async () => {
     const db = await getDb();
-    const [row] = await db.select({ email: setupRequests.riderEmail }).from(setupRequests).where(eq(setupRequests.id, r09));
+    const [row] = await db
+      .select({ email: setupRequests.riderEmail })
+      .from(setupRequests)
+      .where(eq(setupRequests.id, r09));
     const own = await signInWithEmailLink(row!.email, sent);
     expect((await getSheet(r09, { version: "1" }, own.cookie)).status).toBe(200);
     const other = await signInWithEmailLink("someone.else@example.test", sent);
@@ -292,7 +313,9 @@ describe("an air fork, imperial shop, US Letter (invented data, generic class)",
     expect(flat).toContain(`${unit(p.kpaGauge, "kPa").toNumber("lbf/inch^2").toFixed(1)} psi`);
     // 1 in = 25.4 mm exactly (NIST SP 811 B.8).
     const race = data.recommendation.rear.sagTargets.raceSagMm;
-    expect(flat).toContain(`Race sag target ${race.toFixed(0)} mm (${unit(race, "mm").toNumber("inch").toFixed(2)} in)`);
+    expect(flat).toContain(
+      `Race sag target ${race.toFixed(0)} mm (${unit(race, "mm").toNumber("inch").toFixed(2)} in)`,
+    );
     expect(flat).not.toContain("Oil level: measured down");
     expect(pdfInfo(pdf)["Page size"]).toContain("612 x 792");
   });

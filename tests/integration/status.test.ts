@@ -24,14 +24,17 @@ const app = setupTestApp({ seed: true, tempDataDir: true });
 const id = (key: string) => stableUuid(`request:${key}`);
 const token = (key: string) => demoStatusToken(resolveAuthSecret(), id(key));
 
-
 const params = (value: string) => ({ params: Promise.resolve({ id: value }) });
 let ip = 0;
 const postTo = (handler: typeof answer, requestId: string, body: unknown, cookie?: string) =>
   handler(
     new Request(`${ORIGIN()}/api/status/${requestId}/x`, {
       method: "POST",
-      headers: { "content-type": "application/json", ...fromClient(`10.1.${++ip >> 8}.${ip & 255}`), ...(cookie ? { cookie } : {}) },
+      headers: {
+        "content-type": "application/json",
+        ...fromClient(`10.1.${++ip >> 8}.${ip & 255}`),
+        ...(cookie ? { cookie } : {}),
+      },
       body: JSON.stringify(body),
     }),
     params(requestId),
@@ -63,7 +66,12 @@ describe("POST /api/status/:id/answer", () => {
   it("another rider's token changes nothing (404)", async () => {
     const response = await postTo(answer, id("r07"), { token: token("r09"), body: "Original linkage." });
     expect(response.status).toBe(404);
-    const [row] = await (await getDb()).select().from(setupRequests).where(eq(setupRequests.id, id("r07")));
+    const [row] = await (
+      await getDb()
+    )
+      .select()
+      .from(setupRequests)
+      .where(eq(setupRequests.id, id("r07")));
     expect(row!.status).toBe("waiting_for_rider");
   });
 
@@ -77,11 +85,20 @@ describe("POST /api/status/:id/answer", () => {
     const response = await postTo(answer, id("r07"), { token: token("r07"), body: "Original linkage, never lowered." });
     expect(response.status).toBe(201);
     const db = await getDb();
-    const [row] = await db.select().from(setupRequests).where(eq(setupRequests.id, id("r07")));
+    const [row] = await db
+      .select()
+      .from(setupRequests)
+      .where(eq(setupRequests.id, id("r07")));
     expect(row!.status).toBe("in_review");
-    const messages = await db.select().from(requestMessages).where(and(eq(requestMessages.requestId, id("r07")), eq(requestMessages.author, "rider")));
+    const messages = await db
+      .select()
+      .from(requestMessages)
+      .where(and(eq(requestMessages.requestId, id("r07")), eq(requestMessages.author, "rider")));
     expect(messages.map((m) => m.body)).toEqual(["Original linkage, never lowered."]);
-    expect((await listAuditForRequest(id("r07"))).at(-1)).toMatchObject({ action: "request.rider_answered", actorLabel: "rider" });
+    expect((await listAuditForRequest(id("r07"))).at(-1)).toMatchObject({
+      action: "request.rider_answered",
+      actorLabel: "rider",
+    });
     // Answering again when nothing is asked: 409, nothing added.
     expect((await postTo(answer, id("r07"), { token: token("r07"), body: "Again" })).status).toBe(409);
   });
@@ -97,42 +114,96 @@ describe("POST /api/status/:id/answer", () => {
 
 describe("POST /api/status/:id/sag", () => {
   it("converts inches to mm, answers with the engine's verdict per end, and stores the report", async () => {
-    const body = { token: token("r09"), unit: "in", rear: { free: "1.1", static: "1.3", race: "4.1" }, front: { static: "1.2", race: "2.3" } };
+    const body = {
+      token: token("r09"),
+      unit: "in",
+      rear: { free: "1.1", static: "1.3", race: "4.1" },
+      front: { static: "1.2", race: "2.3" },
+    };
     const response = await postTo(sag, id("r09"), body);
     expect(response.status).toBe(201);
-    const result = (await response.json()) as { measured: { mm: Record<string, { freeMm: number | null; staticMm: number; raceMm: number }> }; verdict: Record<string, { verdict: string; message: string }> };
+    const result = (await response.json()) as {
+      measured: { mm: Record<string, { freeMm: number | null; staticMm: number; raceMm: number }> };
+      verdict: Record<string, { verdict: string; message: string }>;
+    };
     // 1 in = 25.4 mm exactly (NIST SP 811, appendix B).
     expect(result.measured.mm.rear).toEqual({ freeMm: 27.94, staticMm: 33.02, raceMm: 104.14 });
     expect(result.measured.mm.front).toEqual({ freeMm: null, staticMm: 30.48, raceMm: 58.42 });
 
     const db = await getDb();
-    const [version] = await db.select().from(recommendationVersions).where(eq(recommendationVersions.requestId, id("r09")));
-    for (const [end, m] of [["rear", { staticSagMm: 33.02, raceSagMm: 104.14 }], ["front", { staticSagMm: 30.48, raceSagMm: 58.42 }]] as const) {
-      const expected = sagVerdict({ input: version!.input as SizingInput, recommendation: version!.output as Recommendation, end, measured: m });
+    const [version] = await db
+      .select()
+      .from(recommendationVersions)
+      .where(eq(recommendationVersions.requestId, id("r09")));
+    for (const [end, m] of [
+      ["rear", { staticSagMm: 33.02, raceSagMm: 104.14 }],
+      ["front", { staticSagMm: 30.48, raceSagMm: 58.42 }],
+    ] as const) {
+      const expected = sagVerdict({
+        input: version!.input as SizingInput,
+        recommendation: version!.output as Recommendation,
+        end,
+        measured: m,
+      });
       expect(result.verdict[end]!.verdict).toBe(expected.verdict);
       expect(result.verdict[end]!.message).toBe(expected.message);
     }
-    const [stored] = await db.select().from(sagReports).where(eq(sagReports.requestId, id("r09")));
+    const [stored] = await db
+      .select()
+      .from(sagReports)
+      .where(eq(sagReports.requestId, id("r09")));
     expect(stored!.versionId).toBe(version!.id);
     expect(stored!.measured).toMatchObject({ asGiven: { unit: "in", rear: { free: 1.1, static: 1.3, race: 4.1 } } });
     expect((await listAuditForRequest(id("r09"))).at(-1)).toMatchObject({ action: "sag.reported" });
   });
 
   it("refuses race sag not larger than static sag, naming the field", async () => {
-    const response = await postTo(sag, id("r09"), { token: token("r09"), unit: "mm", rear: { static: "100", race: "35" }, front: {} });
+    const response = await postTo(sag, id("r09"), {
+      token: token("r09"),
+      unit: "mm",
+      rear: { static: "100", race: "35" },
+      front: {},
+    });
     expect(response.status).toBe(400);
-    expect(((await response.json()) as { fields: Record<string, string> }).fields["rear.race"]).toMatch(/larger than static/);
+    expect(((await response.json()) as { fields: Record<string, string> }).fields["rear.race"]).toMatch(
+      /larger than static/,
+    );
   });
 
   it("refuses race sag beyond the travel (engine check) naming the field", async () => {
-    const response = await postTo(sag, id("r09"), { token: token("r09"), unit: "mm", rear: { static: "30", race: "320" }, front: {} });
+    const response = await postTo(sag, id("r09"), {
+      token: token("r09"),
+      unit: "mm",
+      rear: { static: "30", race: "320" },
+      front: {},
+    });
     expect(response.status).toBe(400);
-    expect(((await response.json()) as { fields: Record<string, string> }).fields["rear.race"]).toMatch(/less than the travel/);
+    expect(((await response.json()) as { fields: Record<string, string> }).fields["rear.race"]).toMatch(
+      /less than the travel/,
+    );
   });
 
   it("is refused before approval (409) and with another rider's token (404)", async () => {
-    expect((await postTo(sag, id("r01"), { token: token("r01"), unit: "mm", rear: { static: "30", race: "100" }, front: {} })).status).toBe(409);
-    expect((await postTo(sag, id("r10"), { token: token("r09"), unit: "mm", rear: { static: "30", race: "100" }, front: {} })).status).toBe(404);
+    expect(
+      (
+        await postTo(sag, id("r01"), {
+          token: token("r01"),
+          unit: "mm",
+          rear: { static: "30", race: "100" },
+          front: {},
+        })
+      ).status,
+    ).toBe(409);
+    expect(
+      (
+        await postTo(sag, id("r10"), {
+          token: token("r09"),
+          unit: "mm",
+          rear: { static: "30", race: "100" },
+          front: {},
+        })
+      ).status,
+    ).toBe(404);
   });
 });
 
@@ -142,7 +213,14 @@ describe("GET /api/uploads/:id", () => {
     form.set(
       "answers",
       JSON.stringify({
-        rider: { name: "Photo Rider", email: "photo.rider@example.test", weight: { value: 75, unit: "kg" }, gearIncluded: true, skill: "novice", style: "smooth" },
+        rider: {
+          name: "Photo Rider",
+          email: "photo.rider@example.test",
+          weight: { value: 75, unit: "kg" },
+          gearIncluded: true,
+          skill: "novice",
+          style: "smooth",
+        },
         riding: { discipline: "trail", terrain: [], jumpSize: "none" },
         bike: { modelId: stableUuid("bike:enduro-300-2t") },
         feel: { complaints: [] },
@@ -151,14 +229,20 @@ describe("GET /api/uploads/:id", () => {
     );
     const png = tinyPng();
     form.append("photos", new File([png as BlobPart], "<script>.html", { type: "text/html" }));
-    const created = await submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient("10.2.0.1") }), undefined as never);
+    const created = await submit(
+      new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient("10.2.0.1") }),
+      undefined as never,
+    );
     expect(created.status).toBe(201);
     const { id: requestId, statusUrl } = (await created.json()) as { id: string; statusUrl: string };
     const riderToken = statusUrl.split("/").pop()!;
     const [upload] = await (await getDb()).select().from(uploads).where(eq(uploads.requestId, requestId));
 
     const get = (query: string, cookie?: string) =>
-      photo(new Request(`${ORIGIN()}/api/uploads/${upload!.id}${query}`, { headers: cookie ? { cookie } : {} }), params(upload!.id));
+      photo(
+        new Request(`${ORIGIN()}/api/uploads/${upload!.id}${query}`, { headers: cookie ? { cookie } : {} }),
+        params(upload!.id),
+      );
 
     const byToken = await get(`?token=${riderToken}`);
     expect(byToken.status).toBe(200);
@@ -175,7 +259,10 @@ describe("GET /api/uploads/:id", () => {
     expect((await get("", ownRider.cookie)).status).toBe(200);
     const staff = cookieFrom(await signInStaff("tuner@sagwise.test", "sagwise-demo"));
     expect((await get("", staff)).status).toBe(200);
-    const badId = await photo(new Request(`${ORIGIN()}/api/uploads/not-a-uuid`, { headers: { cookie: staff } }), params("not-a-uuid"));
+    const badId = await photo(
+      new Request(`${ORIGIN()}/api/uploads/not-a-uuid`, { headers: { cookie: staff } }),
+      params("not-a-uuid"),
+    );
     expect(badId.status).toBe(404);
   });
 });

@@ -27,7 +27,13 @@ const S3_VARS = ["S3_BUCKET", "S3_ENDPOINT", "S3_ACCESS_KEY_ID", "S3_SECRET_ACCE
 
 beforeAll(async () => {
   s3Dir = mkdtempSync(path.join(os.tmpdir(), "sagwise-s3-"));
-  s3 = new S3rver({ address: "127.0.0.1", port: 0, silent: true, directory: s3Dir, configureBuckets: [{ name: BUCKET, configs: [] }] });
+  s3 = new S3rver({
+    address: "127.0.0.1",
+    port: 0,
+    silent: true,
+    directory: s3Dir,
+    configureBuckets: [{ name: BUCKET, configs: [] }],
+  });
   const { port } = await s3.run();
   Object.assign(process.env, {
     S3_BUCKET: BUCKET,
@@ -48,7 +54,14 @@ afterAll(async () => {
 });
 
 const answers = {
-  rider: { name: "Bucket Rider", email: "bucket.rider@example.test", weight: { value: 70, unit: "kg" }, gearIncluded: false, skill: "intermediate", style: "moderate" },
+  rider: {
+    name: "Bucket Rider",
+    email: "bucket.rider@example.test",
+    weight: { value: 70, unit: "kg" },
+    gearIncluded: false,
+    skill: "intermediate",
+    style: "moderate",
+  },
   riding: { discipline: "motocross", terrain: ["loam"], jumpSize: "medium", hoursPerMonth: 8 },
   bike: { modelId: stableUuid("bike:mx-450-4t"), year: 2023 },
   feel: { complaints: ["bottoming"] },
@@ -59,7 +72,10 @@ async function submitWith(files: Uint8Array[]) {
   const form = new FormData();
   form.set("answers", JSON.stringify(answers));
   files.forEach((bytes, i) => form.append("photos", new File([bytes as BlobPart], `p${i}.img`)));
-  const response = await submit(new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient() }), undefined as never);
+  const response = await submit(
+    new Request(`${ORIGIN()}/api/requests`, { method: "POST", body: form, headers: fromClient() }),
+    undefined as never,
+  );
   expect(response.status, await response.clone().text()).toBe(201);
   return (await response.json()) as { id: string; statusUrl: string };
 }
@@ -71,13 +87,24 @@ describe("photos in an S3-compatible bucket", () => {
     const png = tinyPng();
     const { id, statusUrl } = await submitWith([jpeg, png]);
     const token = statusUrl.split("/").pop()!;
-    const rows = await (await getDb()).select().from(uploads).where(eq(uploads.requestId, id)).orderBy(uploads.createdAt);
+    const rows = await (
+      await getDb()
+    )
+      .select()
+      .from(uploads)
+      .where(eq(uploads.requestId, id))
+      .orderBy(uploads.createdAt);
     expect(rows).toHaveLength(2);
     // Nothing on disk: the bucket holds them.
     const local = path.join(app.dataDir, "uploads");
     expect(existsSync(local) ? readdirSync(local) : []).toEqual([]);
-    for (const [row, bytes, type] of [[rows[0]!, jpeg, "image/jpeg"], [rows[1]!, png, "image/png"]] as const) {
-      const response = await photo(new Request(`${ORIGIN()}/api/uploads/${row.id}?token=${token}`), { params: Promise.resolve({ id: row.id }) });
+    for (const [row, bytes, type] of [
+      [rows[0]!, jpeg, "image/jpeg"],
+      [rows[1]!, png, "image/png"],
+    ] as const) {
+      const response = await photo(new Request(`${ORIGIN()}/api/uploads/${row.id}?token=${token}`), {
+        params: Promise.resolve({ id: row.id }),
+      });
       expect(response.status).toBe(200);
       expect(response.headers.get("content-type")).toBe(type);
       expect(response.headers.get("x-content-type-options")).toBe("nosniff");
@@ -89,7 +116,10 @@ describe("photos in an S3-compatible bucket", () => {
     const { id, statusUrl } = await submitWith([tinyJpeg(64)]);
     const [row] = await (await getDb()).select().from(uploads).where(eq(uploads.requestId, id));
     await (await photoStore()).remove(row!.storageKey);
-    const response = await photo(new Request(`${ORIGIN()}/api/uploads/${row!.id}?token=${statusUrl.split("/").pop()}`), { params: Promise.resolve({ id: row!.id }) });
+    const response = await photo(
+      new Request(`${ORIGIN()}/api/uploads/${row!.id}?token=${statusUrl.split("/").pop()}`),
+      { params: Promise.resolve({ id: row!.id }) },
+    );
     expect(response.status).toBe(404);
   });
 

@@ -20,7 +20,14 @@ describe("active coils by end type (Shigley, Mechanical Engineering Design, tabl
 
 describe("spring check from wire and coils", () => {
   it("rate, index, Wahl factor and stress for d = 5 mm, OD = 45 mm, 12 coils squared and ground", () => {
-    const r = coilReport({ wireDiameterMm: 5, outerDiameterMm: 45, totalCoils: 12, endType: "squared-ground", shearModulusMpa: 79_300, loadN: 300 });
+    const r = coilReport({
+      wireDiameterMm: 5,
+      outerDiameterMm: 45,
+      totalCoils: 12,
+      endType: "squared-ground",
+      shearModulusMpa: 79_300,
+      loadN: 300,
+    });
     // D = OD − d = 40 mm; C = 8; n_a = 10 (table 10-1).
     expect(r.meanDiameterMm).toBe(40);
     expect(r.springIndex).toBe(8);
@@ -33,7 +40,14 @@ describe("spring check from wire and coils", () => {
   });
 
   it("refuses an outer diameter not above twice the wire, and too few coils, naming the field", () => {
-    const bad = coilGeometrySchema.safeParse({ wireDiameterMm: 10, outerDiameterMm: 19, totalCoils: 2, endType: "squared", shearModulusMpa: 79_300, loadN: 0 });
+    const bad = coilGeometrySchema.safeParse({
+      wireDiameterMm: 10,
+      outerDiameterMm: 19,
+      totalCoils: 2,
+      endType: "squared",
+      shearModulusMpa: 79_300,
+      loadN: 0,
+    });
     expect(bad.success).toBe(false);
     expect(bad.error!.issues.map((i) => i.path.join(".")).sort()).toEqual(["outerDiameterMm", "totalCoils"]);
   });

@@ -11,14 +11,25 @@ import { referenceAnswers } from "@/lib/shop/target-preview";
 import { recommend, sizingDefaults } from "@/lib/sizing";
 
 const rec = recommend(
-  buildSizingInput(referenceAnswers({ riderMassKg: 80, discipline: "enduro", skill: "intermediate", bikeModelId: "6f1c2a4e-9b3d-4c5e-8f7a-1b2c3d4e5f60" }), {
-    bike: sizingDefaults.GENERIC_BIKE_CLASSES[0]!.spec,
-    targets: null,
-    stock: { forkRatesNmm: sizingDefaults.TYPICAL_FORK_RATES_NMM, shockRatesNmm: sizingDefaults.TYPICAL_SHOCK_RATES_NMM },
-    clickerRules: undefined,
-    gearMassKg: sizingDefaults.DEFAULT_GEAR_MASS_KG,
-    frequencyRatioWindow: { ...sizingDefaults.FREQUENCY_RATIO_WINDOW },
-  }),
+  buildSizingInput(
+    referenceAnswers({
+      riderMassKg: 80,
+      discipline: "enduro",
+      skill: "intermediate",
+      bikeModelId: "6f1c2a4e-9b3d-4c5e-8f7a-1b2c3d4e5f60",
+    }),
+    {
+      bike: sizingDefaults.GENERIC_BIKE_CLASSES[0]!.spec,
+      targets: null,
+      stock: {
+        forkRatesNmm: sizingDefaults.TYPICAL_FORK_RATES_NMM,
+        shockRatesNmm: sizingDefaults.TYPICAL_SHOCK_RATES_NMM,
+      },
+      clickerRules: undefined,
+      gearMassKg: sizingDefaults.DEFAULT_GEAR_MASS_KG,
+      frequencyRatioWindow: { ...sizingDefaults.FREQUENCY_RATIO_WINDOW },
+    },
+  ),
 );
 
 describe("ChartSvg through ForceChart", () => {

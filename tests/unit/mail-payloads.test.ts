@@ -49,7 +49,10 @@ function listen() {
       posted.push((await request.json()) as Payload);
       if (failNext > 0) {
         failNext -= 1;
-        return HttpResponse.json({ statusCode: 503, name: "internal_server_error", message: "Mail API unavailable" }, { status: 503 });
+        return HttpResponse.json(
+          { statusCode: 503, name: "internal_server_error", message: "Mail API unavailable" },
+          { status: 503 },
+        );
       }
       return HttpResponse.json({ id: `msg_${posted.length}` });
     }),
@@ -158,15 +161,27 @@ describe("rider e-mails through notifyRider", () => {
     const response = await download(sheet);
     expect(response.status).toBe(200);
     expect(response.headers.get("content-type")).toBe("application/pdf");
-    expect(Buffer.from(await response.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
+    expect(
+      Buffer.from(await response.arrayBuffer())
+        .subarray(0, 5)
+        .toString(),
+    ).toBe("%PDF-");
   });
 
   it("sheet-ready, revised: links the new version, and the old one stays readable", async () => {
     const db = await getDb();
-    const v1 = await db.select().from(recommendationVersions).where(and(eq(recommendationVersions.requestId, r09), eq(recommendationVersions.version, 1)));
+    const v1 = await db
+      .select()
+      .from(recommendationVersions)
+      .where(and(eq(recommendationVersions.requestId, r09), eq(recommendationVersions.version, 1)));
     const copy = { ...v1[0]!, id: stableUuid("version:r09:2") };
-    await db.insert(recommendationVersions).values({ ...copy, version: 2, state: "approved", notesForRider: "Revised: one more turn of preload." });
-    await db.update(recommendationVersions).set({ state: "superseded" }).where(eq(recommendationVersions.id, v1[0]!.id));
+    await db
+      .insert(recommendationVersions)
+      .values({ ...copy, version: 2, state: "approved", notesForRider: "Revised: one more turn of preload." });
+    await db
+      .update(recommendationVersions)
+      .set({ state: "superseded" })
+      .where(eq(recommendationVersions.id, v1[0]!.id));
 
     listen();
     await notify(r09, { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true });
@@ -198,16 +213,24 @@ describe("e-mails not tied to a request", () => {
     const link = linkIn(mail, "/api/auth/magic-link/verify?token=");
     const cookie = cookieFrom(await authGet(new Request(link, { headers: { origin: ORIGIN() } })));
     expect(cookie).toContain("session_token");
-    const sheet = await sheetGet(new Request(`${appBaseUrl()}/api/requests/${r09}/sheet?version=2`, { headers: { cookie } }), {
-      params: Promise.resolve({ id: r09 }),
-    });
+    const sheet = await sheetGet(
+      new Request(`${appBaseUrl()}/api/requests/${r09}/sheet?version=2`, { headers: { cookie } }),
+      {
+        params: Promise.resolve({ id: r09 }),
+      },
+    );
     expect(sheet.status).toBe(200);
   });
 
   it("staff-invite: names the inviter, the role and carries the invitation link", async () => {
     listen();
     const url = `${appBaseUrl()}/invite/invented-invite-token`;
-    await queueTemplateEmail(await getDb(), "staff-invite", { url, role: "tuner", inviterName: "Mara Quillfeather", shopName: SHOP }, { to: "new.tuner@sagwise.test" });
+    await queueTemplateEmail(
+      await getDb(),
+      "staff-invite",
+      { url, role: "tuner", inviterName: "Mara Quillfeather", shopName: SHOP },
+      { to: "new.tuner@sagwise.test" },
+    );
     await drainOutbox();
     const mail = lastPayload("staff-invite", "new.tuner@sagwise.test");
     expect(mail.subject).toBe(`Mara Quillfeather invited you to the ${SHOP} workspace`);
@@ -221,9 +244,16 @@ describe("a failed rider e-mail", () => {
     listen();
     failNext = 99;
     configureOutbox({ maxAttempts: 3 });
-    const queued = await notifyRider(await getDb(), r09, { kind: "sheet-ready", version: 2, tunerName: "Teo Brambleton", revised: true });
+    const queued = await notifyRider(await getDb(), r09, {
+      kind: "sheet-ready",
+      version: 2,
+      tunerName: "Teo Brambleton",
+      revised: true,
+    });
     // Until the worker has sent it, the request page shows it on its way.
-    const pending = renderToStaticMarkup(EmailStatusItems({ emails: await listOutboundEmailsForRequest(r09) })).split("<li").at(-1)!;
+    const pending = renderToStaticMarkup(EmailStatusItems({ emails: await listOutboundEmailsForRequest(r09) }))
+      .split("<li")
+      .at(-1)!;
     expect(pending).toContain(">Sending<");
     expect(pending).not.toContain('role="alert"');
     // Backoff waits are passed on a virtual clock (their lengths are checked in mail.test.ts).
@@ -235,7 +265,13 @@ describe("a failed rider e-mail", () => {
     const emails = await listOutboundEmailsForRequest(r09);
     const failed = emails.at(-1)!;
     expect(failed.id).toBe(queued.outboundEmailId);
-    expect(failed).toMatchObject({ template: "sheet-ready", status: "failed", attempts: 3, toAddress: RIDER, sentAt: null });
+    expect(failed).toMatchObject({
+      template: "sheet-ready",
+      status: "failed",
+      attempts: 3,
+      toAddress: RIDER,
+      sentAt: null,
+    });
     expect(failed.lastError).toBe("internal_server_error (503): Mail API unavailable");
     expect(emails.filter((e) => e.status === "sent").length).toBeGreaterThanOrEqual(5);
     expect((await findSheetVersion(r09, 2))?.state).toBe("approved");

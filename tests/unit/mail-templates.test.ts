@@ -42,17 +42,35 @@ describe.each(emailTemplateNames)("template %s", (name) => {
 
 describe("template wording", () => {
   it("sign-in link states how long the link works", async () => {
-    const one = await renderTemplate("sign-in-link", { url: "https://demo.sagwise.test/s", expiresInMinutes: 1, shopName: "Shop" });
+    const one = await renderTemplate("sign-in-link", {
+      url: "https://demo.sagwise.test/s",
+      expiresInMinutes: 1,
+      shopName: "Shop",
+    });
     expect(one.text).toContain("stops working after 1 minute.");
-    const many = await renderTemplate("sign-in-link", { url: "https://demo.sagwise.test/s", expiresInMinutes: 30, shopName: "Shop" });
+    const many = await renderTemplate("sign-in-link", {
+      url: "https://demo.sagwise.test/s",
+      expiresInMinutes: 30,
+      shopName: "Shop",
+    });
     expect(many.text).toContain("stops working after 30 minutes.");
   });
 
   it("staff invite names the inviter and the role", async () => {
-    const admin = await renderTemplate("staff-invite", { url: "https://demo.sagwise.test/i", role: "admin", inviterName: "Alex Demo", shopName: "Shop" });
+    const admin = await renderTemplate("staff-invite", {
+      url: "https://demo.sagwise.test/i",
+      role: "admin",
+      inviterName: "Alex Demo",
+      shopName: "Shop",
+    });
     expect(admin.subject).toBe("Alex Demo invited you to the Shop workspace");
     expect(admin.text).toContain("As an admin you can");
-    const tuner = await renderTemplate("staff-invite", { url: "https://demo.sagwise.test/i", role: "tuner", inviterName: "Alex Demo", shopName: "Shop" });
+    const tuner = await renderTemplate("staff-invite", {
+      url: "https://demo.sagwise.test/i",
+      role: "tuner",
+      inviterName: "Alex Demo",
+      shopName: "Shop",
+    });
     expect(tuner.text).toContain("As a tuner you can");
   });
 });

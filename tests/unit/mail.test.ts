@@ -9,7 +9,15 @@ import { afterAll, afterEach, beforeAll, describe, expect, it } from "vitest";
 import { getDb } from "@/db/client";
 import { outboundEmails, setupRequests } from "@/db/schema";
 import { resetEnvForTests } from "@/lib/env";
-import { MailInputError, configureOutbox, drainOutbox, queueMail, queueTemplateEmail, resetOutboxPolicy, type SendMailInput } from "@/lib/mail";
+import {
+  MailInputError,
+  configureOutbox,
+  drainOutbox,
+  queueMail,
+  queueTemplateEmail,
+  resetOutboxPolicy,
+  type SendMailInput,
+} from "@/lib/mail";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 
 const API = "https://mail-api.sagwise.test";
@@ -50,7 +58,13 @@ async function queue(input: SendMailInput) {
   return db.transaction((tx) => queueMail(tx, input));
 }
 
-const simple = (to: string): SendMailInput => ({ template: "sign-in-link", to, subject: "Sign in", html: "<p>x</p>", text: "x" });
+const simple = (to: string): SendMailInput => ({
+  template: "sign-in-link",
+  to,
+  subject: "Sign in",
+  html: "<p>x</p>",
+  text: "x",
+});
 
 async function rowOf(id: string) {
   const db = await getDb();
@@ -194,21 +208,34 @@ describe("queueMail / queueTemplateEmail, then the outbox worker", () => {
 
     expect(await drainOutbox({ now: t0 })).toEqual({ sent: 0, retried: 1, failed: 0 });
     let row = await rowOf(queued.outboundEmailId);
-    expect(row).toMatchObject({ status: "queued", attempts: 1, lastError: "internal_server_error (503): Service unavailable" });
+    expect(row).toMatchObject({
+      status: "queued",
+      attempts: 1,
+      lastError: "internal_server_error (503): Service unavailable",
+    });
     // Exponential backoff (common practice): the base wait, then doubled before each later try.
     expect(row!.nextAttemptAt.getTime() - t0.getTime()).toBe(5_000);
     expect(await drainOutbox({ now: at(4_999) })).toEqual({ sent: 0, retried: 0, failed: 0 });
 
     expect(await drainOutbox({ now: at(5_000) })).toEqual({ sent: 0, retried: 1, failed: 0 });
     row = await rowOf(queued.outboundEmailId);
-    expect(row).toMatchObject({ status: "queued", attempts: 2, lastError: "rate_limit_exceeded (429): Too many requests" });
+    expect(row).toMatchObject({
+      status: "queued",
+      attempts: 2,
+      lastError: "rate_limit_exceeded (429): Too many requests",
+    });
     expect(row!.nextAttemptAt.getTime() - at(5_000).getTime()).toBe(10_000);
 
     expect(await drainOutbox({ now: at(15_000) })).toEqual({ sent: 1, retried: 0, failed: 0 });
     expect(captured).toHaveLength(3);
     // Every try carries the same key, so the provider never delivers twice.
     expect(new Set(captured.map((c) => c.idempotencyKey)).size).toBe(1);
-    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "sent", attempts: 3, providerMessageId: "third-time-lucky", lastError: null });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({
+      status: "sent",
+      attempts: 3,
+      providerMessageId: "third-time-lucky",
+      lastError: null,
+    });
   });
 
   it("records a send that always fails as failed after the last attempt, with the error", async () => {
@@ -232,7 +259,11 @@ describe("queueMail / queueTemplateEmail, then the outbox worker", () => {
     respondWith(() => HttpResponse.error(), ok("after-network-blip"));
     const queued = await queue(simple("rider.four@riders.test"));
     await drainOutbox({ settle: true });
-    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "sent", attempts: 2, providerMessageId: "after-network-blip" });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({
+      status: "sent",
+      attempts: 2,
+      providerMessageId: "after-network-blip",
+    });
   });
 
   it("does not retry a request the API rejects (422)", async () => {
@@ -240,7 +271,11 @@ describe("queueMail / queueTemplateEmail, then the outbox worker", () => {
     const queued = await queue(simple("rider.five@riders.test"));
     expect(await drainOutbox({ settle: true })).toEqual({ sent: 0, retried: 0, failed: 1 });
     expect(captured).toHaveLength(1);
-    expect(await rowOf(queued.outboundEmailId)).toMatchObject({ status: "failed", attempts: 1, lastError: "validation_error (422): Invalid `to` field." });
+    expect(await rowOf(queued.outboundEmailId)).toMatchObject({
+      status: "failed",
+      attempts: 1,
+      lastError: "validation_error (422): Invalid `to` field.",
+    });
   });
 
   it("sends at most one batch per claim and keeps claiming until nothing is due", async () => {

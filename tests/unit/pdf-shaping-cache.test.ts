@@ -90,11 +90,14 @@ describe("a sheet rendered with the cache", () => {
     const sheets = [demoSheetData(), demoSheetData({ airFork: true, draft: true, paperSize: "LETTER" })];
     // Straight through react-pdf first, before renderSetupSheet has turned the cache on.
     const plain: Buffer[] = [];
-    for (const data of sheets) plain.push(await renderToBuffer(createElement(SetupSheet, { data }) as Parameters<typeof renderToBuffer>[0]));
+    for (const data of sheets)
+      plain.push(await renderToBuffer(createElement(SetupSheet, { data }) as Parameters<typeof renderToBuffer>[0]));
     for (let round = 0; round < 2; round++) {
       for (const [i, data] of sheets.entries()) expect((await renderSetupSheet(data)).equals(plain[i]!)).toBe(true);
     }
-    const regular = Font.getFont({ fontFamily: SHEET_FONT, fontWeight: 400 }) as unknown as { data: { layout: () => unknown } };
+    const regular = Font.getFont({ fontFamily: SHEET_FONT, fontWeight: 400 }) as unknown as {
+      data: { layout: () => unknown };
+    };
     const cache = cacheShaping(regular.data);
     const size = cache.size;
     expect(size).toBeGreaterThan(50);

@@ -28,7 +28,10 @@ describe("editorSchema (the form's resolver schema)", () => {
   });
 
   it("flattens react-hook-form's nested errors back to paths", () => {
-    const nested = { rear: { rateNmm: { type: "custom", message: "Too soft" } }, clickers: { forkRebound: { type: "custom", message: "0 to 100" } } };
+    const nested = {
+      rear: { rateNmm: { type: "custom", message: "Too soft" } },
+      clickers: { forkRebound: { type: "custom", message: "0 to 100" } },
+    };
     expect(flatErrors(nested)).toEqual({ "rear.rateNmm": "Too soft", "clickers.forkRebound": "0 to 100" });
   });
 });
@@ -41,7 +44,10 @@ describe("overridesFrom", () => {
   });
 
   it("converts typed rates to N/mm (1 kgf = 9.80665 N; 1 lbf = 4.4482216152605 N; 1 in = 25.4 mm — NIST SP 811)", () => {
-    const { overrides } = overridesFrom({ ...empty, rearRate: "5.4", rearRateUnit: "kgf/mm", frontRate: "25", frontRateUnit: "lbf/in" }, false);
+    const { overrides } = overridesFrom(
+      { ...empty, rearRate: "5.4", rearRateUnit: "kgf/mm", frontRate: "25", frontRateUnit: "lbf/in" },
+      false,
+    );
     expect(overrides.rear?.rateNmm).toBeCloseTo(5.4 * 9.80665, 10);
     expect(overrides.front?.rateNmm).toBeCloseTo((25 * 4.4482216152605) / 25.4, 10);
   });

@@ -14,7 +14,12 @@ const post = (body?: string, path = `/x/${ID}`) =>
   new Request(`http://localhost${path}`, { method: "POST", headers: { "content-type": "application/json" }, body });
 
 const optionalBody = route(
-  { access: "public", params: idParams, notFound: "No such request.", body: z.object({ version: z.number().int().optional() }) },
+  {
+    access: "public",
+    params: idParams,
+    notFound: "No such request.",
+    body: z.object({ version: z.number().int().optional() }),
+  },
   async ({ params, body }) => json({ id: params.id, body }),
 );
 
@@ -41,8 +46,9 @@ describe("route(): body", () => {
   });
 
   it("answers 400 naming a required field missing from an empty body", async () => {
-    const required = route({ access: "public", body: z.object({ reason: z.string({ error: "Give a reason" }) }) }, async () =>
-      json({}),
+    const required = route(
+      { access: "public", body: z.object({ reason: z.string({ error: "Give a reason" }) }) },
+      async () => json({}),
     );
     const response = await required(post(""));
     expect(response.status).toBe(400);
@@ -63,8 +69,9 @@ describe("route(): params and query", () => {
   });
 
   it("parses the query string by schema (400 naming the field)", async () => {
-    const handler = route({ access: "public", query: z.object({ page: z.coerce.number().int("Whole number") }) }, async ({ query }) =>
-      json(query),
+    const handler = route(
+      { access: "public", query: z.object({ page: z.coerce.number().int("Whole number") }) },
+      async ({ query }) => json(query),
     );
     expect(await (await handler(new Request("http://localhost/x?page=3"))).json()).toEqual({ page: 3 });
     const bad = await handler(new Request("http://localhost/x?page=2.5"));
@@ -100,7 +107,7 @@ describe("withErrors: domain errors to HTTP, once", () => {
 
   it("answers 500 without the details of an unexpected error", async () => {
     const log = vi.spyOn(console, "error").mockImplementation(() => {});
-    const response = await throwing(new Error("relation \"secret_table\" does not exist"))(post());
+    const response = await throwing(new Error('relation "secret_table" does not exist'))(post());
     expect(response.status).toBe(500);
     expect(JSON.stringify(await response.json())).not.toContain("secret_table");
     log.mockRestore();

@@ -19,14 +19,22 @@ const context: ShopSizingContext = {
 };
 
 function answersWith(bike: Partial<RequestAnswers["bike"]>): RequestAnswers {
-  const base = referenceAnswers({ riderMassKg: 80, discipline: "enduro", skill: "intermediate", bikeModelId: "6f1c2a4e-9b3d-4c5e-8f7a-1b2c3d4e5f60" });
+  const base = referenceAnswers({
+    riderMassKg: 80,
+    discipline: "enduro",
+    skill: "intermediate",
+    bikeModelId: "6f1c2a4e-9b3d-4c5e-8f7a-1b2c3d4e5f60",
+  });
   return { ...base, bike: { ...base.bike, ...bike } };
 }
 
 describe("currentSprings in the engine input", () => {
   it("converts the rider's rates to N/mm (NIST SP 811 factors)", () => {
     const input = buildSizingInput(
-      answersWith({ currentForkSpring: { value: 0.46, unit: "kgf/mm" }, currentShockSpring: { value: 300, unit: "lbf/in" } }),
+      answersWith({
+        currentForkSpring: { value: 0.46, unit: "kgf/mm" },
+        currentShockSpring: { value: 300, unit: "lbf/in" },
+      }),
       context,
     );
     expect(input.currentSprings!.forkRateNmm).toBeCloseTo(0.46 * 9.80665, 9);
@@ -35,13 +43,18 @@ describe("currentSprings in the engine input", () => {
 
   it("is absent when the rider gave no springs, and keeps the one end given", () => {
     expect(buildSizingInput(answersWith({}), context).currentSprings).toBeUndefined();
-    expect(currentSpringsNmm(answersWith({ currentShockSpring: { value: 52, unit: "N/mm" } }))).toEqual({ shockRateNmm: 52 });
+    expect(currentSpringsNmm(answersWith({ currentShockSpring: { value: 52, unit: "N/mm" } }))).toEqual({
+      shockRateNmm: 52,
+    });
   });
 
   it("leaves out a rate outside the engine's range instead of refusing the request", () => {
     // 400 lbf/in is about 70 N/mm: no single fork spring is that stiff (common practice: a fork spring
     // per leg is well under 10 N/mm), most likely both legs added up.
-    const given = answersWith({ currentForkSpring: { value: 400, unit: "lbf/in" }, currentShockSpring: { value: 5.4, unit: "kgf/mm" } });
+    const given = answersWith({
+      currentForkSpring: { value: 400, unit: "lbf/in" },
+      currentShockSpring: { value: 5.4, unit: "kgf/mm" },
+    });
     const input = buildSizingInput(given, context);
     expect(input.currentSprings).toEqual({ shockRateNmm: 5.4 * 9.80665 });
     expect(() => recommend(input)).not.toThrow();
@@ -50,7 +63,13 @@ describe("currentSprings in the engine input", () => {
   it("does not change the recommendation", () => {
     const without = recommend(buildSizingInput(answersWith({}), context));
     const withSprings = recommend(
-      buildSizingInput(answersWith({ currentForkSpring: { value: 4.6, unit: "N/mm" }, currentShockSpring: { value: 54, unit: "N/mm" } }), context),
+      buildSizingInput(
+        answersWith({
+          currentForkSpring: { value: 4.6, unit: "N/mm" },
+          currentShockSpring: { value: 54, unit: "N/mm" },
+        }),
+        context,
+      ),
     );
     expect(withSprings.rear.chosenRate).toEqual(without.rear.chosenRate);
     expect(withSprings.front.chosenRate).toEqual(without.front.chosenRate);

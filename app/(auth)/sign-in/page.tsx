@@ -5,11 +5,7 @@ import { safeNextPath } from "@/lib/validations/auth";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-export default async function SignInPage({
-  searchParams,
-}: {
-  searchParams: Promise<{ next?: string | string[] }>;
-}) {
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string | string[] }> }) {
   const { next } = await searchParams;
   const destination = safeNextPath(typeof next === "string" ? next : undefined, "/shop");
   return (
@@ -17,12 +13,16 @@ export default async function SignInPage({
       <h1 className="text-2xl font-bold">Sign in</h1>
       <div className="grid gap-6 md:grid-cols-2">
         <section aria-labelledby="staff-heading" className="rounded-xl border border-stone-200 bg-white p-5 shadow-sm">
-          <h2 id="staff-heading" className="mb-1 text-lg font-semibold">Shop staff</h2>
+          <h2 id="staff-heading" className="mb-1 text-lg font-semibold">
+            Shop staff
+          </h2>
           <p className="mb-4 text-sm text-stone-600">Tuners and the shop owner sign in with a password.</p>
           <StaffSignInForm next={destination} />
         </section>
         <section aria-labelledby="rider-heading" className="rounded-xl border border-stone-200 bg-white p-5 shadow-sm">
-          <h2 id="rider-heading" className="mb-1 text-lg font-semibold">Riders</h2>
+          <h2 id="rider-heading" className="mb-1 text-lg font-semibold">
+            Riders
+          </h2>
           <p className="mb-4 text-sm text-stone-600">
             No password needed: we e-mail you a link that opens all your setup requests.
           </p>

@@ -27,7 +27,10 @@ export default async function MyRequestsPage() {
           {requests.map((r) => (
             <li key={r.id} className="rounded-xl border border-stone-200 bg-white p-4">
               <div className="flex flex-wrap items-center justify-between gap-2">
-                <Link href={`/my-requests/${r.id}`} className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline">
+                <Link
+                  href={`/my-requests/${r.id}`}
+                  className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline"
+                >
                   Request {r.number} · {r.bikeLabel}
                 </Link>
                 <StatusBadge status={r.status} />

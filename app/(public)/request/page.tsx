@@ -12,7 +12,8 @@ export default async function RequestPage() {
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold">Ask for a suspension setup</h1>
       <p className="text-stone-700">
-        Five short steps, about five minutes. Your answers are kept on this phone as you go, so you can stop and come back.
+        Five short steps, about five minutes. Your answers are kept on this phone as you go, so you can stop and come
+        back.
       </p>
       <RequestForm metric={(settings?.units ?? "metric") !== "imperial"} />
     </div>

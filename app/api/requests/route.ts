@@ -19,10 +19,16 @@ import { requestAnswersSchema } from "@/lib/validations/request";
 export const dynamic = "force-dynamic";
 
 // Empty filters (a cleared field) mean "no filter".
-const queueQuery = z.preprocess((raw) => queueParams(new URLSearchParams(raw as Record<string, string>)), queueQuerySchema);
+const queueQuery = z.preprocess(
+  (raw) => queueParams(new URLSearchParams(raw as Record<string, string>)),
+  queueQuerySchema,
+);
 
 export const GET = route({ access: STAFF_ROLES, query: queueQuery }, async ({ user, query }) => {
-  const [page, counts] = await Promise.all([listQueue(query, user.id), query.counts ? countRequestsByStatus() : undefined]);
+  const [page, counts] = await Promise.all([
+    listQueue(query, user.id),
+    query.counts ? countRequestsByStatus() : undefined,
+  ]);
   return json(counts ? { ...page, counts } : page);
 });
 
@@ -31,7 +37,9 @@ export const GET = route({ access: STAFF_ROLES, query: queueQuery }, async ({ us
 const limitSubmissions = createLimiter("submit", 8, 15 * 60);
 
 const bad = (field: string, message: string, status: 400 | 413 = 400) =>
-  status === 413 ? new TooLargeError(message, { [field]: message }) : new ValidationError(message, { [field]: message });
+  status === 413
+    ? new TooLargeError(message, { [field]: message })
+    : new ValidationError(message, { [field]: message });
 
 async function readBody(request: Request): Promise<{ answers: unknown; photos: IncomingPhoto[] }> {
   const type = request.headers.get("content-type") ?? "";
@@ -53,12 +61,17 @@ async function readBody(request: Request): Promise<{ answers: unknown; photos: I
       throw bad("answers", "The answers are not valid JSON.");
     }
     const files = form.getAll("photos").filter((f): f is File => typeof f !== "string");
-    if (files.length > MAX_PHOTOS) throw bad("photos", `Send at most ${MAX_PHOTOS} photos (you chose ${files.length}).`);
+    if (files.length > MAX_PHOTOS)
+      throw bad("photos", `Send at most ${MAX_PHOTOS} photos (you chose ${files.length}).`);
     const photos: IncomingPhoto[] = [];
     for (const [i, file] of files.entries()) {
       // Refuse by the declared size before reading a large file into memory.
       if (file.size > MAX_PHOTO_BYTES)
-        throw bad(`photos.${i}`, `“${displayName(file.name)}” is ${(file.size / 1048576).toFixed(1)} MB; each photo may be at most 10 MB.`, 413);
+        throw bad(
+          `photos.${i}`,
+          `“${displayName(file.name)}” is ${(file.size / 1048576).toFixed(1)} MB; each photo may be at most 10 MB.`,
+          413,
+        );
       photos.push({ originalName: file.name, bytes: new Uint8Array(await file.arrayBuffer()) });
     }
     return { answers, photos };

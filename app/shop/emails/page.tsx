@@ -29,7 +29,11 @@ export default async function EmailPreviewsPage() {
       </div>
       <ul className="flex flex-col gap-8">
         {previews.map((p) => (
-          <li key={p.name} aria-labelledby={`email-${p.name}`} className="rounded-xl border border-stone-200 bg-white p-4">
+          <li
+            key={p.name}
+            aria-labelledby={`email-${p.name}`}
+            className="rounded-xl border border-stone-200 bg-white p-4"
+          >
             <h2 id={`email-${p.name}`} className="text-lg font-semibold">
               {p.description}
             </h2>

@@ -14,10 +14,14 @@ export default async function TeamPage() {
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold">Team</h1>
       <p className="max-w-3xl text-sm text-stone-700">
-        Invite tuners and admins by e-mail. Deactivating someone signs them out everywhere at once. The shop always keeps at
-        least one active admin.
+        Invite tuners and admins by e-mail. Deactivating someone signs them out everywhere at once. The shop always
+        keeps at least one active admin.
       </p>
-      <TeamManager members={members} invites={invites.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString() }))} selfId={admin.id} />
+      <TeamManager
+        members={members}
+        invites={invites.map((i) => ({ ...i, expiresAt: i.expiresAt.toISOString() }))}
+        selfId={admin.id}
+      />
     </div>
   );
 }

@@ -27,7 +27,14 @@ export function ForceChart({ title, geometry, width }: { title: string; geometry
           </G>
         ))}
         {g.xTicks.map((t) => (
-          <SvgText key={`x${t.value}`} x={t.position} y={bottom + 18} style={tick} fill={COLORS.muted} textAnchor="middle">
+          <SvgText
+            key={`x${t.value}`}
+            x={t.position}
+            y={bottom + 18}
+            style={tick}
+            fill={COLORS.muted}
+            textAnchor="middle"
+          >
             {String(t.value)}
           </SvgText>
         ))}
@@ -35,8 +42,21 @@ export function ForceChart({ title, geometry, width }: { title: string; geometry
         <Line x1={left} x2={right} y1={bottom} y2={bottom} stroke={COLORS.ink} strokeWidth={1.2} />
         {g.markers.map((m) => (
           <G key={m.label}>
-            <Line x1={m.position} x2={m.position} y1={top} y2={bottom} stroke={COLORS.amber} strokeWidth={1.2} strokeDasharray="4 3" />
-            <SvgText x={m.position + 3} y={m.label === "race sag" ? top + 14 : top + 30} style={tick} fill={COLORS.amber}>
+            <Line
+              x1={m.position}
+              x2={m.position}
+              y1={top}
+              y2={bottom}
+              stroke={COLORS.amber}
+              strokeWidth={1.2}
+              strokeDasharray="4 3"
+            />
+            <SvgText
+              x={m.position + 3}
+              y={m.label === "race sag" ? top + 14 : top + 30}
+              style={tick}
+              fill={COLORS.amber}
+            >
               {m.label}
             </SvgText>
           </G>

@@ -20,8 +20,8 @@ export function Clickers({ clickers }: { clickers: ClickerSetting[] }) {
     <View wrap={false}>
       <Text style={s.h2}>Starting clicker positions</Text>
       <Text style={{ marginBottom: 4 }}>
-        Turn each adjuster in gently until it stops (fully closed; never force it), then count out the number
-        given. Start here, ride, and change one adjuster at a time.
+        Turn each adjuster in gently until it stops (fully closed; never force it), then count out the number given.
+        Start here, ride, and change one adjuster at a time.
       </Text>
       <View style={s.tableHead}>
         <Text style={{ width: W.name }}>Adjuster</Text>

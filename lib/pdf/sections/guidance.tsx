@@ -24,7 +24,9 @@ export function SagSteps() {
   return (
     <View wrap={false}>
       <Text style={s.h2}>How to measure sag</Text>
-      <Text style={{ marginBottom: 3 }}>Measure in millimetres on level ground, with two helpers. Each step uses the same two marks.</Text>
+      <Text style={{ marginBottom: 3 }}>
+        Measure in millimetres on level ground, with two helpers. Each step uses the same two marks.
+      </Text>
       <Bullets items={SAG_STEPS} numbered />
     </View>
   );
@@ -39,7 +41,15 @@ export function Cautions() {
   );
 }
 
-export function NotesAndReport({ notes, reportUrl, approved }: { notes: string | null; reportUrl: string; approved: boolean }) {
+export function NotesAndReport({
+  notes,
+  reportUrl,
+  approved,
+}: {
+  notes: string | null;
+  reportUrl: string;
+  approved: boolean;
+}) {
   return (
     <View wrap={false}>
       <Text style={s.h2}>Notes from your tuner</Text>

@@ -24,7 +24,13 @@ export function RiderAndBike({ data }: { data: SheetData }) {
         <Text style={s.h2}>Bike</Text>
         <KeyValue label="Model">{request.bikeLabel}</KeyValue>
         <KeyValue label="Year">{request.bikeYear ? String(request.bikeYear) : "–"}</KeyValue>
-        <KeyValue label="Fork">{rec.front.kind === "air" ? "Air spring" : rec.front.sprungLegs === 1 ? "Coil, one spring" : "Coil, a spring in each leg"}</KeyValue>
+        <KeyValue label="Fork">
+          {rec.front.kind === "air"
+            ? "Air spring"
+            : rec.front.sprungLegs === 1
+              ? "Coil, one spring"
+              : "Coil, a spring in each leg"}
+        </KeyValue>
         <KeyValue label="Rear wheel travel">{fixed(rec.input.bike.rear.wheelTravelMm, 0)} mm</KeyValue>
       </View>
     </View>

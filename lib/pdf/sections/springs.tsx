@@ -6,11 +6,25 @@ import { fixed, length, rateParts, turns } from "../format";
 import { s } from "../styles";
 import { KeyValue } from "./parts";
 
-function RateTable({ rateNmm, stockNmm, currentNmm, end }: { rateNmm: number; stockNmm: number | null; currentNmm?: number; end: "fork" | "shock" }) {
+function RateTable({
+  rateNmm,
+  stockNmm,
+  currentNmm,
+  end,
+}: {
+  rateNmm: number;
+  stockNmm: number | null;
+  currentNmm?: number;
+  end: "fork" | "shock";
+}) {
   const rec = rateParts(rateNmm, end);
   const stock = stockNmm === null ? null : rateParts(stockNmm, end);
   const now = currentNmm === undefined ? null : rateParts(currentNmm, end);
-  const rows: [keyof typeof rec, string][] = [["nMm", "N/mm"], ["kgfMm", "kgf/mm"], ["lbfIn", "lbf/in"]];
+  const rows: [keyof typeof rec, string][] = [
+    ["nMm", "N/mm"],
+    ["kgfMm", "kgf/mm"],
+    ["lbfIn", "lbf/in"],
+  ];
   const w = now ? "33%" : "50%";
   return (
     <View style={{ marginBottom: 4 }}>
@@ -61,7 +75,15 @@ function SagLines({ result, imperial }: { result: FrontResult | RearResult; impe
   );
 }
 
-export function ForkCard({ front, imperial, currentNmm }: { front: FrontResult; imperial: boolean; currentNmm?: number }) {
+export function ForkCard({
+  front,
+  imperial,
+  currentNmm,
+}: {
+  front: FrontResult;
+  imperial: boolean;
+  currentNmm?: number;
+}) {
   const coil = front.kind !== "air" && front.chosenRate;
   return (
     <View style={[s.card, s.col]} wrap={false}>
@@ -71,11 +93,18 @@ export function ForkCard({ front, imperial, currentNmm }: { front: FrontResult; 
           <Text style={s.muted}>
             Spring rate {front.sprungLegs === 1 ? "of the one spring" : "per leg, a spring in each leg"}
           </Text>
-          <RateTable rateNmm={front.chosenRate!.nMm} stockNmm={front.stockRate?.nMm ?? null} currentNmm={currentNmm} end="fork" />
+          <RateTable
+            rateNmm={front.chosenRate!.nMm}
+            stockNmm={front.stockRate?.nMm ?? null}
+            currentNmm={currentNmm}
+            end="fork"
+          />
           <BasisLine basis={front.rateBasis} />
           <KeyValue label="Preload">{length(front.preloadMm ?? 0, 1, imperial)}</KeyValue>
           <KeyValue label="Oil level">{`${length(front.oilLevelMm ?? front.stockOilLevelMm, 0, imperial)} (stock ${fixed(front.stockOilLevelMm, 0)} mm)`}</KeyValue>
-          <Text style={s.small}>Oil level: measured down from the top of the outer tube, fork fully compressed, spring out.</Text>
+          <Text style={s.small}>
+            Oil level: measured down from the top of the outer tube, fork fully compressed, spring out.
+          </Text>
         </>
       ) : (
         <>
@@ -87,7 +116,9 @@ export function ForkCard({ front, imperial, currentNmm }: { front: FrontResult; 
               <Text style={{ width: "33%", fontWeight: 700 }}>{fixed(front.airPressure.psiGauge, 1)} psi</Text>
             </View>
           ) : null}
-          <Text style={s.small}>Set the pressure, then fine-tune it by measuring sag: air forks vary from one to the next.</Text>
+          <Text style={s.small}>
+            Set the pressure, then fine-tune it by measuring sag: air forks vary from one to the next.
+          </Text>
           <KeyValue label="Oil level">{`as stock, ${length(front.stockOilLevelMm, 0, imperial)}`}</KeyValue>
         </>
       )}
@@ -96,7 +127,17 @@ export function ForkCard({ front, imperial, currentNmm }: { front: FrontResult; 
   );
 }
 
-export function ShockCard({ rear, collarPitchMm, imperial, currentNmm }: { rear: RearResult; collarPitchMm: number; imperial: boolean; currentNmm?: number }) {
+export function ShockCard({
+  rear,
+  collarPitchMm,
+  imperial,
+  currentNmm,
+}: {
+  rear: RearResult;
+  collarPitchMm: number;
+  imperial: boolean;
+  currentNmm?: number;
+}) {
   return (
     <View style={[s.card, s.col]} wrap={false}>
       <Text style={s.h3}>Shock (rear)</Text>

@@ -123,11 +123,14 @@ export async function signInWithPassword(page: Page, email: string, next: string
 export async function signInLinkFor(mailbox: Mailbox, email: string): Promise<string> {
   let link: string | undefined;
   await expect
-    .poll(async () => {
-      const [newest] = await mailbox.for(email);
-      link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(newest?.html ?? "")?.[1]?.replaceAll("&amp;", "&");
-      return link;
-    }, { message: "the e-mail carries the sign-in link" })
+    .poll(
+      async () => {
+        const [newest] = await mailbox.for(email);
+        link = /href="([^"]*magic-link\/verify[^"]*)"/.exec(newest?.html ?? "")?.[1]?.replaceAll("&amp;", "&");
+        return link;
+      },
+      { message: "the e-mail carries the sign-in link" },
+    )
     .toBeTruthy();
   return link!;
 }

@@ -15,7 +15,9 @@ function freePort(): Promise<number> {
     server.on("error", reject);
     server.listen(0, "127.0.0.1", () => {
       const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
+      server.close(() =>
+        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
+      );
     });
   });
 }
@@ -77,7 +79,10 @@ export default async function globalSetup() {
   };
   const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true });
   const app = spawn("npx", ["next", "start", "-p", String(appPort)], { env, detached: true });
-  for (const [name, child] of [["mail", mail], ["app", app]] as const) {
+  for (const [name, child] of [
+    ["mail", mail],
+    ["app", app],
+  ] as const) {
     child.stdout?.on("data", output(name));
     child.stderr?.on("data", (chunk: Buffer) => process.stderr.write(`[${name}] ${chunk}`));
   }

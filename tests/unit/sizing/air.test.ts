@@ -39,7 +39,7 @@ describe("ideal-gas compression", () => {
     // Source: Boyle's law between top-out (V₀, P_atm) and bottom (V_b): P_b = P_atm·V₀/V_b.
     const F = forkAirForceN({ ...leg, travelMm: 310, polytropicIndex: 1 });
     const Vb = 1250 * 110 + 25_000;
-    expect(F).toBeCloseTo((atmMpa * V0 / Vb - atmMpa) * Ad, 8);
+    expect(F).toBeCloseTo(((atmMpa * V0) / Vb - atmMpa) * Ad, 8);
   });
 
   it("adiabatic beats isothermal, and more oil (smaller level number) stiffens the end of the stroke", () => {
@@ -67,7 +67,9 @@ describe("air-spring fork pressure", () => {
     // Source: Boyle's law. A = 1000 mm², V = 200 000 mm³, W = 800 N at s = 60 mm:
     // P_s = 800/1000 + 0.101325 = 0.901325 MPa abs; P₀ = P_s·(200 000 − 60 000)/200 000 = 0.6309275 MPa;
     // gauge 0.5296025 MPa = 529.6025 kPa.
-    expect(airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 200_000, loadN: 800, sagMm: 60 })).toBeCloseTo(529.6025, 6);
+    expect(
+      airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 200_000, loadN: 800, sagMm: 60 }),
+    ).toBeCloseTo(529.6025, 6);
   });
 
   it("reports bar and psi from kPa", () => {
@@ -78,21 +80,37 @@ describe("air-spring fork pressure", () => {
   });
 
   it("refuses a sag that sweeps the whole chamber", () => {
-    expect(() => airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 50_000, loadN: 800, sagMm: 60 })).toThrow(SizingInputError);
+    expect(() =>
+      airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 50_000, loadN: 800, sagMm: 60 }),
+    ).toThrow(SizingInputError);
   });
 });
 
 describe("coil fork closed form without air", () => {
   // An enormous cap volume leaves the air force negligible: the fork must reduce to a linear spring
   // (Hooke's law, F = n_s·k·(p + s)), and the ideal rate to k = ΔW/(n_s·Δs) (lib/sizing/README.md, closed forms).
-  const fork = makeCoilFork(2, 300, { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 1e15, forkTravelMm: 300 });
+  const fork = makeCoilFork(2, 300, {
+    displacementDiameterMm: 48,
+    freeAreaMm2: 1250,
+    capVolumeMm3: 1e15,
+    forkTravelMm: 300,
+  });
   it("force is n_s·k·(p + s)", () => {
     for (const s of [0, 75, 150, 300]) expect(forkForce(fork, 4.5, 5, 110, s, 1.4)).toBeCloseTo(2 * 4.5 * (5 + s), 4);
   });
   it("the fork's fast path and the public forkAirForceN give the same air force", () => {
-    const f = makeCoilFork(2, 310, { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 25_000, forkTravelMm: 310 });
-    for (const s of [0, 100, 310]) for (const n of [1, 1.4])
-      expect(forkForce(f, 0, 0, 110, s, n)).toBeCloseTo(2 * forkAirForceN({ ...leg, travelMm: s, polytropicIndex: n }), 9);
+    const f = makeCoilFork(2, 310, {
+      displacementDiameterMm: 48,
+      freeAreaMm2: 1250,
+      capVolumeMm3: 25_000,
+      forkTravelMm: 310,
+    });
+    for (const s of [0, 100, 310])
+      for (const n of [1, 1.4])
+        expect(forkForce(f, 0, 0, 110, s, n)).toBeCloseTo(
+          2 * forkAirForceN({ ...leg, travelMm: s, polytropicIndex: n }),
+          9,
+        );
   });
   it("ideal rate is ΔW/(n_s·Δs) and preload W/(n_s·k) − s", () => {
     const { rateNmm, preloadMm } = idealForkSpring(fork, 110, 380, 650, 35, 60);

@@ -20,8 +20,16 @@ import { classInput } from "./fixtures";
 type Spec = (typeof sizingDefaults.GENERIC_BIKE_CLASSES)[number]["spec"];
 
 /** What a rider of massKg would measure on the setup the engine gives them, on a bike whose real loads are `truth`. */
-function measure(classId: string, spec: Spec, truth: CalibrationParameters, massKg: number, noise: [number, number, number, number]): CalibrationReport {
-  const input = classInput(classId, "medium", { rider: { massKg, gearIncluded: true, skill: "intermediate", style: "moderate" } });
+function measure(
+  classId: string,
+  spec: Spec,
+  truth: CalibrationParameters,
+  massKg: number,
+  noise: [number, number, number, number],
+): CalibrationReport {
+  const input = classInput(classId, "medium", {
+    rider: { massKg, gearIncluded: true, skill: "intermediate", style: "moderate" },
+  });
   input.bike = structuredClone(spec);
   const rec = recommend(input);
   const L = prepareLinkage(spec.rear.leverageCurve);
@@ -61,12 +69,24 @@ describe("fitting sprung masses and the rider's share from sag reports", () => {
         fc.double({ min: -0.1, max: 0.1, noNaN: true }),
         fc.double({ min: -0.1, max: 0.1, noNaN: true }),
         fc.double({ min: 0.55, max: 0.75, noNaN: true }),
-        fc.array(fc.tuple(fc.double({ min: 0.8, max: 1.25, noNaN: true }), fc.tuple(...Array.from({ length: 4 }, () => fc.double({ min: -1, max: 1, noNaN: true })))), { minLength: 6, maxLength: 10 }),
+        fc.array(
+          fc.tuple(
+            fc.double({ min: 0.8, max: 1.25, noNaN: true }),
+            fc.tuple(...Array.from({ length: 4 }, () => fc.double({ min: -1, max: 1, noNaN: true }))),
+          ),
+          { minLength: 6, maxLength: 10 },
+        ),
         (id, dRear, dFront, share, riders) => {
           const spec = specOf(id);
           const catalog = catalogParameters(spec);
-          const truth = { rearSprungKg: catalog.rearSprungKg * (1 + dRear), frontSprungKg: catalog.frontSprungKg * (1 + dFront), riderRearShare: share };
-          const reports = riders.map(([scale, noise]) => measure(id, spec, truth, spec.referenceRiderMassKg * scale, noise as [number, number, number, number]));
+          const truth = {
+            rearSprungKg: catalog.rearSprungKg * (1 + dRear),
+            frontSprungKg: catalog.frontSprungKg * (1 + dFront),
+            riderRearShare: share,
+          };
+          const reports = riders.map(([scale, noise]) =>
+            measure(id, spec, truth, spec.referenceRiderMassKg * scale, noise as [number, number, number, number]),
+          );
           const fit = fitCalibration(spec, reports);
           expect(fit.ok).toBe(true);
           if (!fit.ok) return;

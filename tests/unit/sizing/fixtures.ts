@@ -4,11 +4,7 @@ import { sizingDefaults, type SizingInput } from "../../../lib/sizing";
 
 export type RiderSize = "light" | "medium" | "heavy";
 
-export function classInput(
-  classId: string,
-  size: RiderSize,
-  extra: Partial<SizingInput> = {},
-): SizingInput {
+export function classInput(classId: string, size: RiderSize, extra: Partial<SizingInput> = {}): SizingInput {
   const c = sizingDefaults.GENERIC_BIKE_CLASSES.find((b) => b.id === classId);
   if (!c) throw new Error(`no class ${classId}`);
   return {
@@ -16,7 +12,10 @@ export function classInput(
     riding: { discipline: classId.startsWith("enduro") ? "enduro" : "motocross", terrain: [], jumpSize: "medium" },
     bike: structuredClone(c.spec),
     complaints: [],
-    stock: { forkRatesNmm: [...sizingDefaults.TYPICAL_FORK_RATES_NMM], shockRatesNmm: [...sizingDefaults.TYPICAL_SHOCK_RATES_NMM] },
+    stock: {
+      forkRatesNmm: [...sizingDefaults.TYPICAL_FORK_RATES_NMM],
+      shockRatesNmm: [...sizingDefaults.TYPICAL_SHOCK_RATES_NMM],
+    },
     ...extra,
   };
 }

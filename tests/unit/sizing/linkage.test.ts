@@ -20,13 +20,22 @@ describe("constant leverage ratio closed forms", () => {
   const LR = 2.5;
   it("shock travel is y/LR and wheel force k(p + y/LR)/LR", () => {
     expect(shockTravelAtMm(constant(LR), 100)).toBeCloseTo(40, 12);
-    expect(rearWheelForceN({ curve: constant(LR), rateNmm: 50, preloadMm: 10, wheelTravelMm: 100 })).toBeCloseTo((50 * (10 + 40)) / 2.5, 9);
+    expect(rearWheelForceN({ curve: constant(LR), rateNmm: 50, preloadMm: 10, wheelTravelMm: 100 })).toBeCloseTo(
+      (50 * (10 + 40)) / 2.5,
+      9,
+    );
   });
 
   it("the ideal spring reduces to k = LR²·ΔW/Δsag", () => {
     const Ws = 420;
     const Wr = 960;
-    const { rateNmm, preloadMm } = idealRearSpring({ curve: constant(LR), staticLoadN: Ws, raceLoadN: Wr, staticSagMm: 35, raceSagMm: 105 });
+    const { rateNmm, preloadMm } = idealRearSpring({
+      curve: constant(LR),
+      staticLoadN: Ws,
+      raceLoadN: Wr,
+      staticSagMm: 35,
+      raceSagMm: 105,
+    });
     expect(rateNmm).toBeCloseTo((LR * LR * (Wr - Ws)) / (105 - 35), 9);
     // and the preload puts the static sag where asked: W_s = k(p + y_s/LR)/LR.
     expect((rateNmm * (preloadMm + 35 / LR)) / LR).toBeCloseTo(Ws, 9);
@@ -96,8 +105,23 @@ describe("sag solver", () => {
       return [];
     };
     expect(bad([{ wheelTravelMm: 0, ratio: 3 }])).toEqual(["curve"]);
-    expect(bad([{ wheelTravelMm: 0, ratio: 3 }, { wheelTravelMm: 100, ratio: -1 }])).toEqual(["curve.1.ratio"]);
-    expect(bad([{ wheelTravelMm: 0, ratio: 3 }, { wheelTravelMm: 0, ratio: 2 }])).toEqual(["curve.1.wheelTravelMm"]);
-    expect(bad([{ wheelTravelMm: 5, ratio: 3 }, { wheelTravelMm: 100, ratio: 2 }])).toEqual(["curve.0.wheelTravelMm"]);
+    expect(
+      bad([
+        { wheelTravelMm: 0, ratio: 3 },
+        { wheelTravelMm: 100, ratio: -1 },
+      ]),
+    ).toEqual(["curve.1.ratio"]);
+    expect(
+      bad([
+        { wheelTravelMm: 0, ratio: 3 },
+        { wheelTravelMm: 0, ratio: 2 },
+      ]),
+    ).toEqual(["curve.1.wheelTravelMm"]);
+    expect(
+      bad([
+        { wheelTravelMm: 5, ratio: 3 },
+        { wheelTravelMm: 100, ratio: 2 },
+      ]),
+    ).toEqual(["curve.0.wheelTravelMm"]);
   });
 });

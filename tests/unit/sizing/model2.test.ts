@@ -55,7 +55,11 @@ describe("ride-frequency basis", () => {
     // From memory, typical shop spring charts: about 0.2–0.35 kgf/mm per 10 kg at the shock and
     // 0.02–0.03 at the fork; the window below allows 0.15–0.42 and 0.012–0.04.
     const at = (massKg: number) =>
-      recommend(classInput("mx-450-4t", "medium", { rider: { massKg, gearIncluded: false, skill: "intermediate", style: "moderate" } }));
+      recommend(
+        classInput("mx-450-4t", "medium", {
+          rider: { massKg, gearIncluded: false, skill: "intermediate", style: "moderate" },
+        }),
+      );
     const a = at(60);
     const b = at(100);
     const rear = (b.rear.idealRate.kgfMm - a.rear.idealRate.kgfMm) / 4;
@@ -81,10 +85,15 @@ describe("ride-frequency basis", () => {
     const expected = (2.5 * 2.5 * m * (2 * Math.PI * f) ** 2) / 1000; // N/m → N/mm
     expect(Math.abs(r.rear.idealRate.nMm / expected - 1)).toBeLessThan(1e-9);
     // The stock spring's frequency for the reference rider, same formula: k_s = LR²·m_ref·(2πf_ref)².
-    const ref = recommend({ ...input, rider: { massKg: input.bike.referenceRiderMassKg, gearIncluded: true, skill: "intermediate", style: "moderate" } });
+    const ref = recommend({
+      ...input,
+      rider: { massKg: input.bike.referenceRiderMassKg, gearIncluded: true, skill: "intermediate", style: "moderate" },
+    });
     const mRef = ref.resolved.loads.rearRaceN / STANDARD_GRAVITY;
     const fRef = r.rear.rateBasis!.rideFrequency!.referenceFrequencyHz;
-    expect(Math.abs((2.5 * 2.5 * mRef * (2 * Math.PI * fRef) ** 2) / 1000 / input.bike.rear.stockRateNmm - 1)).toBeLessThan(1e-9);
+    expect(
+      Math.abs((2.5 * 2.5 * mRef * (2 * Math.PI * fRef) ** 2) / 1000 / input.bike.rear.stockRateNmm - 1),
+    ).toBeLessThan(1e-9);
   });
 
   it("the ideal setup's frequency equals the target within 0.5 % before snapping, both ends", () => {
@@ -128,7 +137,9 @@ describe("ride-frequency basis", () => {
     const r = evaluateSetup(classInput("mx-450-4t", "medium"), { rear: { rateNmm: 30 } });
     const codes = r.warnings.map((x) => x.code);
     expect(codes).toContain("REAR_PRELOAD_AT_LIMIT");
-    for (const w of r.warnings.filter((x) => x.code.startsWith("REAR_PRELOAD_AT_LIMIT") || x.code === "REAR_STATIC_SAG_OUTSIDE_WINDOW")) {
+    for (const w of r.warnings.filter(
+      (x) => x.code.startsWith("REAR_PRELOAD_AT_LIMIT") || x.code === "REAR_STATIC_SAG_OUTSIDE_WINDOW",
+    )) {
       expect(w.message).toMatch(/soft/);
       expect(w.message).not.toMatch(/stiff/);
     }
@@ -153,9 +164,21 @@ describe("air forks: positive and negative chamber (Boyle's law)", () => {
 
   it("airForkPressureKpaGauge keeps its one-chamber answer, and solves two chambers when given", () => {
     // One chamber: (P₀ + P_atm)·V = (W/A + P_atm)·(V − A·s), unchanged.
-    const one = airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 400_000, loadN: 663.65008, sagMm: 60 });
-    expect(one).toBeCloseTo(((663.65008 / 1000 + 0.101325) * 340_000) / 400_000 * 1000 - ATMOSPHERE_KPA, 6);
-    const two = airForkPressureKpaGauge({ pistonAreaMm2: 1000, chamberVolumeMm3: 400_000, loadN: 663.65008, sagMm: 60, negativeChamberVolumeMm3: 40_000, equalizeAtMm: 10 });
+    const one = airForkPressureKpaGauge({
+      pistonAreaMm2: 1000,
+      chamberVolumeMm3: 400_000,
+      loadN: 663.65008,
+      sagMm: 60,
+    });
+    expect(one).toBeCloseTo((((663.65008 / 1000 + 0.101325) * 340_000) / 400_000) * 1000 - ATMOSPHERE_KPA, 6);
+    const two = airForkPressureKpaGauge({
+      pistonAreaMm2: 1000,
+      chamberVolumeMm3: 400_000,
+      loadN: 663.65008,
+      sagMm: 60,
+      negativeChamberVolumeMm3: 40_000,
+      equalizeAtMm: 10,
+    });
     expect(two).toBeCloseTo(1000 - ATMOSPHERE_KPA, 3); // the hand case above: 1 MPa abs
   });
 });
@@ -163,11 +186,21 @@ describe("air forks: positive and negative chamber (Boyle's law)", () => {
 describe("fork air volume includes the spring's steel", () => {
   it("steel volume π²·d²·D·N_t/4 for a coil worked by hand", () => {
     // d = 4.5 mm, D = 36 mm, N_t = 18: π²·20.25·36·18/4 = 9.8696044·3280.5 = 32 377.24 mm³.
-    expect(springSteelVolumeMm3({ wireDiameterMm: 4.5, meanCoilDiameterMm: 36, totalCoils: 18 })).toBeCloseTo(32377.237, 2);
+    expect(springSteelVolumeMm3({ wireDiameterMm: 4.5, meanCoilDiameterMm: 36, totalCoils: 18 })).toBeCloseTo(
+      32377.237,
+      2,
+    );
   });
 
   it("fitting the spring raises the air force at every travel", () => {
-    const leg = { displacementDiameterMm: 48, freeAreaMm2: 1250, capVolumeMm3: 25_000, oilLevelMm: 110, forkTravelMm: 310, polytropicIndex: 1.4 };
+    const leg = {
+      displacementDiameterMm: 48,
+      freeAreaMm2: 1250,
+      capVolumeMm3: 25_000,
+      oilLevelMm: 110,
+      forkTravelMm: 310,
+      polytropicIndex: 1.4,
+    };
     for (const travelMm of [50, 150, 300]) {
       const without = forkAirForceN({ ...leg, travelMm });
       const withSpring = forkAirForceN({ ...leg, travelMm, springVolumeMm3: 32_377 });
@@ -176,7 +209,10 @@ describe("fork air volume includes the spring's steel", () => {
     // No spring volume passed: today's answer, V₀ = A_free·h + V_cap + A_d·T (isothermal, by hand).
     const ad = (Math.PI / 4) * 48 * 48;
     const v0 = 1250 * 110 + 25_000 + ad * 310;
-    expect(forkAirForceN({ ...leg, polytropicIndex: 1, travelMm: 100 })).toBeCloseTo((0.101325 * v0 / (v0 - ad * 100) - 0.101325) * ad, 9);
+    expect(forkAirForceN({ ...leg, polytropicIndex: 1, travelMm: 100 })).toBeCloseTo(
+      ((0.101325 * v0) / (v0 - ad * 100) - 0.101325) * ad,
+      9,
+    );
   });
 });
 
@@ -209,7 +245,12 @@ describe("follow-up verdict, model 2", () => {
   const k = rec.rear.chosenRate.nMm;
 
   it("a measured static sag of 0 mm is too soft (the preload holds the bike topped out)", () => {
-    const v = sagVerdict({ input, recommendation: rec, end: "rear", measured: { staticSagMm: 0, raceSagMm: rec.rear.sagTargets.raceSagMm } });
+    const v = sagVerdict({
+      input,
+      recommendation: rec,
+      end: "rear",
+      measured: { staticSagMm: 0, raceSagMm: rec.rear.sagTargets.raceSagMm },
+    });
     expect(v.verdict).toBe("too-soft");
     expect(v.action).toBe("change-spring");
     expect(v.suggestedRateNmm!).toBeGreaterThan(k);
@@ -219,7 +260,12 @@ describe("follow-up verdict, model 2", () => {
     // A fork whose race sag needs more preload than the 12 mm the adjuster has: much deeper race sag.
     const fork = recommend(input);
     const deep = fork.front.sagTargets.raceSagMm + 12;
-    const v = sagVerdict({ input, recommendation: fork, end: "front", measured: { staticSagMm: fork.front.predicted.staticSagMm + 4, raceSagMm: deep } });
+    const v = sagVerdict({
+      input,
+      recommendation: fork,
+      end: "front",
+      measured: { staticSagMm: fork.front.predicted.staticSagMm + 4, raceSagMm: deep },
+    });
     expect(v.verdict).toBe("too-soft");
     expect(v.action).toBe("change-spring");
     expect(v.newPreloadMm!).toBeLessThanOrEqual(input.bike.fork.preloadMaxMm! + 1e-9);
@@ -229,11 +275,23 @@ describe("follow-up verdict, model 2", () => {
   });
 
   it("names an order when the nearest stocked rate is more than one shelf step away", () => {
-    const sparse = classInput("mx-450-4t", "medium", { stock: { forkRatesNmm: [4.9], shockRatesNmm: [52.956, 53.937, 54.917, 80] } });
+    const sparse = classInput("mx-450-4t", "medium", {
+      stock: { forkRatesNmm: [4.9], shockRatesNmm: [52.956, 53.937, 54.917, 80] },
+    });
     const r = recommend(sparse);
     const measured = {
-      staticSagMm: solveRearSagMm({ curve, rateNmm: r.rear.chosenRate.nMm, preloadMm: r.rear.preloadMm, loadN: r.resolved.loads.rearStaticN }),
-      raceSagMm: solveRearSagMm({ curve, rateNmm: r.rear.chosenRate.nMm, preloadMm: r.rear.preloadMm, loadN: r.resolved.loads.rearRaceN * 1.2 }),
+      staticSagMm: solveRearSagMm({
+        curve,
+        rateNmm: r.rear.chosenRate.nMm,
+        preloadMm: r.rear.preloadMm,
+        loadN: r.resolved.loads.rearStaticN,
+      }),
+      raceSagMm: solveRearSagMm({
+        curve,
+        rateNmm: r.rear.chosenRate.nMm,
+        preloadMm: r.rear.preloadMm,
+        loadN: r.resolved.loads.rearRaceN * 1.2,
+      }),
     };
     const v = sagVerdict({ input: sparse, recommendation: r, end: "rear", measured });
     expect(v.verdict).toBe("too-soft");

@@ -80,15 +80,20 @@ function allFinite(x: unknown): boolean {
 describe("properties of the ideal spring", () => {
   it("a heavier rider never gets a softer ideal spring (rear and front)", () => {
     fc.assert(
-      fc.property(validInput, fc.double({ min: 15, max: 220, noNaN: true }), fc.double({ min: 0.5, max: 30, noNaN: true }), (input, massKg, extraKg) => {
-        input.rider.massKg = massKg; // the whole valid range, not only the class's riders
-        const heavier = structuredClone(input);
-        heavier.rider.massKg += extraKg;
-        const a = recommend(input);
-        const b = recommend(heavier);
-        expect(b.rear.idealRate.nMm).toBeGreaterThanOrEqual(a.rear.idealRate.nMm);
-        expect(b.front.idealRate!.nMm).toBeGreaterThanOrEqual(a.front.idealRate!.nMm);
-      }),
+      fc.property(
+        validInput,
+        fc.double({ min: 15, max: 220, noNaN: true }),
+        fc.double({ min: 0.5, max: 30, noNaN: true }),
+        (input, massKg, extraKg) => {
+          input.rider.massKg = massKg; // the whole valid range, not only the class's riders
+          const heavier = structuredClone(input);
+          heavier.rider.massKg += extraKg;
+          const a = recommend(input);
+          const b = recommend(heavier);
+          expect(b.rear.idealRate.nMm).toBeGreaterThanOrEqual(a.rear.idealRate.nMm);
+          expect(b.front.idealRate!.nMm).toBeGreaterThanOrEqual(a.front.idealRate!.nMm);
+        },
+      ),
       RUNS,
     );
   });
@@ -125,7 +130,10 @@ describe("properties of the ideal spring", () => {
         const t = sizingDefaults.SAG_TARGETS_BY_DISCIPLINE[d];
         input.targets = { ...input.targets, rateBasis: "sag-window" };
         const deeper = structuredClone(input);
-        deeper.targets = { ...deeper.targets, sagByDiscipline: { [d]: { ...t, rearRace: t.rearRace + more, forkRace: t.forkRace + more } } };
+        deeper.targets = {
+          ...deeper.targets,
+          sagByDiscipline: { [d]: { ...t, rearRace: t.rearRace + more, forkRace: t.forkRace + more } },
+        };
         const a = recommend(input);
         const b = recommend(deeper);
         expect(b.rear.idealRate.nMm).toBeLessThanOrEqual(a.rear.idealRate.nMm);

@@ -46,7 +46,8 @@ describe("end to end: every generic class × light, medium, heavy rider", () => 
         expect(r.rear.preloadMm).toBeLessThanOrEqual(c.spec.rear.preloadMaxMm);
         expect(Math.abs(r.rear.predicted.raceSagMm - r.rear.sagTargets.raceSagMm)).toBeLessThan(0.1);
         const t = r.rear.sagTargets;
-        const outside = r.rear.predicted.staticSagMm < t.staticSagMinMm || r.rear.predicted.staticSagMm > t.staticSagMaxMm;
+        const outside =
+          r.rear.predicted.staticSagMm < t.staticSagMinMm || r.rear.predicted.staticSagMm > t.staticSagMaxMm;
         expect(r.warnings.some((w) => w.code === "REAR_STATIC_SAG_OUTSIDE_WINDOW")).toBe(outside);
         expect(r.rear.rateBasis?.used).toBe("ride-frequency");
         // Rear race sag about a third of travel, static 10–13.5 %: common practice (defaults.ts).
@@ -58,7 +59,9 @@ describe("end to end: every generic class × light, medium, heavy rider", () => 
         const oil = r.front.oilLevelMm!;
         expect(oil).toBeGreaterThanOrEqual(c.spec.fork.oilLevelMinMm);
         expect(oil).toBeLessThanOrEqual(c.spec.fork.oilLevelMaxMm);
-        expect(Math.abs((oil - c.spec.fork.stockOilLevelMm) / 5 - Math.round((oil - c.spec.fork.stockOilLevelMm) / 5))).toBeLessThan(1e-9);
+        expect(
+          Math.abs((oil - c.spec.fork.stockOilLevelMm) / 5 - Math.round((oil - c.spec.fork.stockOilLevelMm) / 5)),
+        ).toBeLessThan(1e-9);
         // Charts: at least 30 points, from top-out to full travel, force rising (springs only push harder).
         expect(r.rear.forceCurve.length).toBeGreaterThanOrEqual(30);
         expect(r.front.forceCurve.length).toBeGreaterThanOrEqual(30);
@@ -67,7 +70,10 @@ describe("end to end: every generic class × light, medium, heavy rider", () => 
         expect(r.front.oilLevelCurves.map((o) => o.oilLevelMm)).toContain(oil);
         expect(r.front.oilLevelCurves.length).toBeGreaterThanOrEqual(2);
         // Natural frequencies f = √(k/m)/2π from the reported wheel rate and sprung mass (Rao, Mechanical Vibrations).
-        expect(r.rear.naturalFrequencyHz).toBeCloseTo(Math.sqrt((r.rear.wheelRateAtSagNmm * 1000) / r.rear.sprungMassKg) / (2 * Math.PI), 9);
+        expect(r.rear.naturalFrequencyHz).toBeCloseTo(
+          Math.sqrt((r.rear.wheelRateAtSagNmm * 1000) / r.rear.sprungMassKg) / (2 * Math.PI),
+          9,
+        );
         expect(r.frequencyRatio).toBeCloseTo(r.front.naturalFrequencyHz / r.rear.naturalFrequencyHz, 12);
         expect(r.warnings.filter((w) => w.severity === "critical" || w.requiresAcknowledgement)).toEqual([]);
         expect(r.engineVersion).toBe(ENGINE_VERSION);
@@ -101,7 +107,12 @@ describe("loads", () => {
   });
 
   it("when no spring can meet both sag targets it sizes on race sag and says so", () => {
-    const r = recommend(classInput("mx-450-4t", "light", { rider: { massKg: 20, gearIncluded: true, skill: "beginner", style: "smooth" }, targets: { riderRearShare: 0.95, rateBasis: "sag-window" } }));
+    const r = recommend(
+      classInput("mx-450-4t", "light", {
+        rider: { massKg: 20, gearIncluded: true, skill: "beginner", style: "smooth" },
+        targets: { riderRearShare: 0.95, rateBasis: "sag-window" },
+      }),
+    );
     const w = r.warnings.find((x) => x.code === "FRONT_SAG_TARGETS_UNREACHABLE");
     expect(w?.field).toBe("front.sagTargets");
     expect(r.front.idealRate!.nMm).toBeGreaterThan(0);
@@ -117,13 +128,21 @@ describe("loads", () => {
 
 describe("stock selection and ordering", () => {
   it("with nothing on the shelf the ideal rate is to order (sag-window basis: both targets met)", () => {
-    const r = recommend(classInput("mx-450-4t", "medium", { stock: { forkRatesNmm: [], shockRatesNmm: [] }, targets: { rateBasis: "sag-window" } }));
+    const r = recommend(
+      classInput("mx-450-4t", "medium", {
+        stock: { forkRatesNmm: [], shockRatesNmm: [] },
+        targets: { rateBasis: "sag-window" },
+      }),
+    );
     expect(r.rear.source).toBe("order");
     expect(r.rear.chosenRate.nMm).toBeCloseTo(r.rear.idealRate.nMm, 9);
     expect(r.warnings.map((w) => w.code)).toContain("REAR_TO_ORDER");
     // The ideal spring meets both targets: race on target and static at the window's middle.
     expect(r.rear.predicted.raceSagMm).toBeCloseTo(r.rear.sagTargets.raceSagMm, 6);
-    expect(r.rear.predicted.staticSagMm).toBeCloseTo((r.rear.sagTargets.staticSagMinMm + r.rear.sagTargets.staticSagMaxMm) / 2, 6);
+    expect(r.rear.predicted.staticSagMm).toBeCloseTo(
+      (r.rear.sagTargets.staticSagMinMm + r.rear.sagTargets.staticSagMaxMm) / 2,
+      6,
+    );
   });
 
   it("when nothing stocked fits, the nearest is shown with a warning naming the rate to order", () => {
@@ -138,8 +157,12 @@ describe("stock selection and ordering", () => {
     // The oil level rule (lib/sizing/README.md) holds bottoming resistance at the stock bike's value for
     // its reference rider: that rider, on the stock spring, must land on the stock level.
     const c = sizingDefaults.GENERIC_BIKE_CLASSES[0]!;
-    const input = classInput(c.id, "medium", { rider: { massKg: c.spec.referenceRiderMassKg, gearIncluded: true, skill: "intermediate", style: "moderate" } });
-    const r = evaluateSetup(input, { front: { rateNmm: c.spec.fork.stockRateNmm, preloadMm: c.spec.fork.stockPreloadMm } });
+    const input = classInput(c.id, "medium", {
+      rider: { massKg: c.spec.referenceRiderMassKg, gearIncluded: true, skill: "intermediate", style: "moderate" },
+    });
+    const r = evaluateSetup(input, {
+      front: { rateNmm: c.spec.fork.stockRateNmm, preloadMm: c.spec.fork.stockPreloadMm },
+    });
     expect(r.front.oilLevelMm).toBe(c.spec.fork.stockOilLevelMm);
   });
 });
@@ -167,7 +190,8 @@ describe("air fork", () => {
     const { volumeMm3: Vn, equalizeAtMm: se, typical } = r.front.negativeChamber!;
     expect(typical).toBe(true);
     const p0 = p.kpaGauge / 1000 + 0.101325;
-    const F = p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
+    const F =
+      p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
     expect(F).toBeCloseTo(r.resolved.loads.frontRaceN, 6);
     expect(r.front.predicted.raceSagMm).toBeCloseTo(s, 3);
     expect(p.barGauge).toBeCloseTo(p.kpaGauge / 100, 12); // 1 bar = 100 kPa (definition)
@@ -187,7 +211,8 @@ describe("air fork", () => {
     const s = r.front.predicted.raceSagMm;
     const { volumeMm3: Vn, equalizeAtMm: se } = r.front.negativeChamber!;
     const p0 = 0.4 + 0.101325;
-    const F = p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
+    const F =
+      p0 * 400_000 * 900 * (1 / (400_000 - 900 * s) - (Vn + 900 * se) / ((400_000 - 900 * se) * (Vn + 900 * s)));
     expect(F).toBeCloseTo(r.resolved.loads.frontRaceN, 4);
     expect(s).toBeGreaterThan(r.front.sagTargets.raceSagMm); // less pressure than needed: deeper sag
     expect(r.warnings.find((w) => w.code === "OVERRIDE_NOT_APPLICABLE")?.field).toBe("overrides.front.rateNmm");
@@ -207,8 +232,14 @@ describe("tuner overrides (evaluateSetup)", () => {
     expect(r.rear.chosenRate.nMm).toBe(48);
     expect(r.rear.preloadMm).toBe(14);
     const curve = base.bike.rear.leverageCurve;
-    expect(r.rear.predicted.raceSagMm).toBeCloseTo(solveRearSagMm({ curve, rateNmm: 48, preloadMm: 14, loadN: r.resolved.loads.rearRaceN }), 9);
-    expect(r.rear.bottoming.forceN).toBeCloseTo(rearWheelForceN({ curve, rateNmm: 48, preloadMm: 14, wheelTravelMm: 310 }), 9);
+    expect(r.rear.predicted.raceSagMm).toBeCloseTo(
+      solveRearSagMm({ curve, rateNmm: 48, preloadMm: 14, loadN: r.resolved.loads.rearRaceN }),
+      9,
+    );
+    expect(r.rear.bottoming.forceN).toBeCloseTo(
+      rearWheelForceN({ curve, rateNmm: 48, preloadMm: 14, wheelTravelMm: 310 }),
+      9,
+    );
   });
   it("applies oil level, sag targets and clicker positions, and warns outside the limits", () => {
     const r = evaluateSetup(base, {
@@ -225,7 +256,9 @@ describe("tuner overrides (evaluateSetup)", () => {
   });
   it("refuses nonsense overrides with the override's path", () => {
     expect(issuesOf(() => evaluateSetup(base, { rear: { rateNmm: -3 } }))).toEqual(["overrides.rear.rateNmm"]);
-    expect(issuesOf(() => evaluateSetup(base, { rear: { raceSagMm: 20, staticSagMinMm: 30 } }))).toEqual(["overrides.rear"]);
+    expect(issuesOf(() => evaluateSetup(base, { rear: { raceSagMm: 20, staticSagMinMm: 30 } }))).toEqual([
+      "overrides.rear",
+    ]);
   });
   it("is deterministic: same input and overrides, same output", () => {
     expect(evaluateSetup(base, { front: { preloadMm: 6 } })).toEqual(evaluateSetup(base, { front: { preloadMm: 6 } }));
@@ -234,7 +267,10 @@ describe("tuner overrides (evaluateSetup)", () => {
 
 describe("clickers", () => {
   it("start from stock, move per rule with a reason each, and clamp to the adjuster", () => {
-    const input = classInput("mx-450-4t", "medium", { complaints: ["bottoming", "kicks"], riding: { discipline: "motocross", terrain: ["sand"], jumpSize: "large" } });
+    const input = classInput("mx-450-4t", "medium", {
+      complaints: ["bottoming", "kicks"],
+      riding: { discipline: "motocross", terrain: ["sand"], jumpSize: "large" },
+    });
     const r: Recommendation = recommend(input);
     const byId = Object.fromEntries(r.clickers.map((c) => [c.id, c]));
     // Defaults (common practice): bottoming −2 and sand −2 on fork compression from stock 12.
@@ -249,7 +285,14 @@ describe("clickers", () => {
   it("shop rules replace the defaults", () => {
     const input = classInput("mx-450-4t", "medium", {
       complaints: ["wallows"],
-      clickerRules: [{ trigger: { kind: "complaint", complaint: "wallows" }, clicker: "shockRebound", change: -3, reason: "Our rule" }],
+      clickerRules: [
+        {
+          trigger: { kind: "complaint", complaint: "wallows" },
+          clicker: "shockRebound",
+          change: -3,
+          reason: "Our rule",
+        },
+      ],
     });
     const r = recommend(input);
     const reb = r.clickers.find((c) => c.id === "shockRebound")!;
@@ -265,7 +308,11 @@ describe("refused input names each bad field", () => {
     input.rider!.massKg = -5;
     input.riding!.discipline = "rally";
     input.stock!.shockRatesNmm = [50, Number.NaN];
-    expect(issuesOf(() => recommend(input as unknown as SizingInput)).sort()).toEqual(["rider.massKg", "riding.discipline", "stock.shockRatesNmm.1"]);
+    expect(issuesOf(() => recommend(input as unknown as SizingInput)).sort()).toEqual([
+      "rider.massKg",
+      "riding.discipline",
+      "stock.shockRatesNmm.1",
+    ]);
   });
   it("a leverage curve that does not integrate to the shock stroke", () => {
     const input = classInput("mx-450-4t", "medium");
@@ -284,7 +331,11 @@ describe("refused input names each bad field", () => {
     expect(r.warnings.find((w) => w.code === "MEASURED_SAG_DIFFERS")?.field).toBe("measuredSag.rearRaceSagMm");
   });
   it("a rider outside the bike's range is a caution, not a silent answer", () => {
-    const r = recommend(classInput("youth-85", "medium", { rider: { massKg: 110, gearIncluded: false, skill: "novice", style: "smooth" } }));
+    const r = recommend(
+      classInput("youth-85", "medium", {
+        rider: { massKg: 110, gearIncluded: false, skill: "novice", style: "smooth" },
+      }),
+    );
     expect(r.warnings.find((w) => w.code === "RIDER_OUTSIDE_BIKE_RANGE")?.field).toBe("rider.massKg");
   });
 });

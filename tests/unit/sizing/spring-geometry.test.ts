@@ -12,7 +12,12 @@ describe("helical spring rate from geometry", () => {
   it("matches Shigley's worked problem", () => {
     // Source: Shigley, Mechanical Engineering Design, 10th ed., problem 10-3:
     // d = 2.5 mm, D = 28.5 mm, Na = 13, G = 81.0 GPa → k = 1.314 N/mm.
-    const k = springRateFromGeometry({ wireDiameterMm: 2.5, meanCoilDiameterMm: 28.5, activeCoils: 13, shearModulusMpa: 81_000 });
+    const k = springRateFromGeometry({
+      wireDiameterMm: 2.5,
+      meanCoilDiameterMm: 28.5,
+      activeCoils: 13,
+      shearModulusMpa: 81_000,
+    });
     expect(k).toBeCloseTo(1.314, 3);
   });
 
@@ -30,11 +35,21 @@ describe("helical spring rate from geometry", () => {
   });
 
   it("refuses impossible geometry naming the field", () => {
-    expect(() => springRateFromGeometry({ wireDiameterMm: -1, meanCoilDiameterMm: 28.5, activeCoils: 13, shearModulusMpa: 81_000 })).toThrow(
-      SizingInputError,
-    );
+    expect(() =>
+      springRateFromGeometry({
+        wireDiameterMm: -1,
+        meanCoilDiameterMm: 28.5,
+        activeCoils: 13,
+        shearModulusMpa: 81_000,
+      }),
+    ).toThrow(SizingInputError);
     try {
-      springRateFromGeometry({ wireDiameterMm: 30, meanCoilDiameterMm: 28.5, activeCoils: 13, shearModulusMpa: 81_000 });
+      springRateFromGeometry({
+        wireDiameterMm: 30,
+        meanCoilDiameterMm: 28.5,
+        activeCoils: 13,
+        shearModulusMpa: 81_000,
+      });
       expect.unreachable();
     } catch (e) {
       expect((e as SizingInputError).issues[0]?.path).toBe("meanCoilDiameterMm");

@@ -44,10 +44,15 @@ describe("unit factors", () => {
     // Source: mathjs unit conversion as the oracle.
     const mathUnit = { "N/mm": "N/mm", "kgf/mm": "kgf/mm", "lbf/in": "lbf/inch" } as const;
     fc.assert(
-      fc.property(fc.double({ min: 0.01, max: 1000, noNaN: true }), fc.constantFrom(...RATE_UNITS), fc.constantFrom(...RATE_UNITS), (v, a, b) => {
-        const oracle = math.unit(v, mathUnit[a]).toNumber(mathUnit[b]);
-        expect(convertRate(v, a, b)).toBeCloseTo(oracle, 9);
-      }),
+      fc.property(
+        fc.double({ min: 0.01, max: 1000, noNaN: true }),
+        fc.constantFrom(...RATE_UNITS),
+        fc.constantFrom(...RATE_UNITS),
+        (v, a, b) => {
+          const oracle = math.unit(v, mathUnit[a]).toNumber(mathUnit[b]);
+          expect(convertRate(v, a, b)).toBeCloseTo(oracle, 9);
+        },
+      ),
       { numRuns: 200 },
     );
   });

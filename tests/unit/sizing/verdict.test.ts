@@ -1,11 +1,5 @@
 import { describe, expect, it } from "vitest";
-import {
-  SizingInputError,
-  recommend,
-  sagVerdict,
-  solveRearSagMm,
-  STANDARD_GRAVITY,
-} from "../../../lib/sizing";
+import { SizingInputError, recommend, sagVerdict, solveRearSagMm, STANDARD_GRAVITY } from "../../../lib/sizing";
 import { forkForce } from "../../../lib/sizing/fork";
 import { coilForkOf } from "../../../lib/sizing/front";
 import { firstCrossing } from "../../../lib/sizing/solve";
@@ -77,12 +71,19 @@ describe("sag verdict, front", () => {
     const p = rec.front.preloadMm!;
     const h = rec.front.oilLevelMm!;
     const F = (s: number) => forkForce(fk, k, p, h, s, 1);
-    const heavierN = rec.resolved.loads.frontRaceN + 50 * (1 - rec.resolved.riderRearShare) * STANDARD_GRAVITY * Math.cos((27 * Math.PI) / 180);
+    const heavierN =
+      rec.resolved.loads.frontRaceN +
+      50 * (1 - rec.resolved.riderRearShare) * STANDARD_GRAVITY * Math.cos((27 * Math.PI) / 180);
     const measured = {
       staticSagMm: firstCrossing(F, rec.resolved.loads.frontStaticN, fk.travelMm, []).sagMm,
       raceSagMm: firstCrossing(F, heavierN, fk.travelMm, []).sagMm,
     };
-    const right = sagVerdict({ input, recommendation: rec, end: "front", measured: { staticSagMm: rec.front.predicted.staticSagMm, raceSagMm: rec.front.predicted.raceSagMm } });
+    const right = sagVerdict({
+      input,
+      recommendation: rec,
+      end: "front",
+      measured: { staticSagMm: rec.front.predicted.staticSagMm, raceSagMm: rec.front.predicted.raceSagMm },
+    });
     expect(right.verdict).toBe("right");
     const v = sagVerdict({ input, recommendation: rec, end: "front", measured });
     expect(v.verdict).toBe("too-soft");

@@ -21,7 +21,9 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
         <div className="flex flex-col gap-3">
           <h1 className="text-2xl font-bold">This invitation cannot be used</h1>
           <p>{error.message}</p>
-          <Link href="/sign-in" className="inline-flex min-h-11 items-center text-pine-700 underline">Go to sign-in</Link>
+          <Link href="/sign-in" className="inline-flex min-h-11 items-center text-pine-700 underline">
+            Go to sign-in
+          </Link>
         </div>
       );
     throw error;

@@ -4,10 +4,20 @@ import { StatusView } from "@/components/status/status-view";
 import { findRequestForViewer, loadRiderStatus, touchStatusToken } from "@/db/queries/status";
 
 // The token is the rider's key: keep the page out of search engines and the token out of Referer.
-export const metadata: Metadata = { title: "Your request", robots: { index: false, follow: false }, referrer: "no-referrer" };
+export const metadata: Metadata = {
+  title: "Your request",
+  robots: { index: false, follow: false },
+  referrer: "no-referrer",
+};
 export const dynamic = "force-dynamic";
 
-export default async function StatusPage({ params, searchParams }: { params: Promise<{ token: string }>; searchParams: Promise<{ sent?: string }> }) {
+export default async function StatusPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<{ sent?: string }>;
+}) {
   const { token } = await params;
   const requestId = await findRequestForViewer({ token });
   if (!requestId) notFound();

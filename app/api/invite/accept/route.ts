@@ -13,7 +13,12 @@ const limit = createLimiter("invite-accept", 10, 15 * 60);
 
 export const POST = route({ access: "public", limit, body: acceptInviteSchema }, async ({ request, body }) => {
   const account = await acceptInvite(body);
-  await recordAudit({ actorUserId: account.id, actorLabel: body.name, action: "staff.joined", detail: { email: account.email, role: account.role } });
+  await recordAudit({
+    actorUserId: account.id,
+    actorLabel: body.name,
+    action: "staff.joined",
+    detail: { email: account.email, role: account.role },
+  });
   const auth = await getAuth();
   const signedIn = await auth.api.signInEmail({
     body: { email: account.email, password: body.password },

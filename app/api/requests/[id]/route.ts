@@ -7,8 +7,11 @@ import { NotFoundError } from "@/lib/errors";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route({ access: STAFF_ROLES, params: idParams, notFound: "No such request." }, async ({ params }) => {
-  const detail = await getRequestDetail(params.id);
-  if (!detail) throw new NotFoundError("No such request.");
-  return json(detail);
-});
+export const GET = route(
+  { access: STAFF_ROLES, params: idParams, notFound: "No such request." },
+  async ({ params }) => {
+    const detail = await getRequestDetail(params.id);
+    if (!detail) throw new NotFoundError("No such request.");
+    return json(detail);
+  },
+);

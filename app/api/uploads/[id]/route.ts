@@ -31,7 +31,8 @@ export const GET = route(
     try {
       bytes = await readUpload(upload.storageKey);
     } catch (error) {
-      if ((error as { code?: string }).code === "ENOENT") throw new NotFoundError("The photo's file is missing from storage.");
+      if ((error as { code?: string }).code === "ENOENT")
+        throw new NotFoundError("The photo's file is missing from storage.");
       throw error;
     }
     return new Response(new Uint8Array(bytes), {

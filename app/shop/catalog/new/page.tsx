@@ -15,8 +15,8 @@ export default async function NewBikePage() {
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold">Add a bike</h1>
       <p className="rounded-lg bg-amber-soft p-3 text-sm text-stone-800">
-        The form starts from the typical values of the “{template.name}” class, not any maker&apos;s data: replace every figure
-        with your model&apos;s own (service manual or your measurements).
+        The form starts from the typical values of the “{template.name}” class, not any maker&apos;s data: replace every
+        figure with your model&apos;s own (service manual or your measurements).
       </p>
       <BikeForm initial={{ name: "", bikeClass: "", spec: structuredClone(template.spec) }} />
     </div>

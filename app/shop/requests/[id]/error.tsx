@@ -10,7 +10,9 @@ export default function RequestError({ reset }: { error: Error; reset: () => voi
       <p className="mt-1 text-red-800">Nothing saved is lost. Try again, or go back to the queue.</p>
       <div className="mt-4 flex gap-3">
         <Button onClick={reset}>Try again</Button>
-        <Link href="/shop" className="inline-flex min-h-11 items-center text-pine-700 underline">Back to the queue</Link>
+        <Link href="/shop" className="inline-flex min-h-11 items-center text-pine-700 underline">
+          Back to the queue
+        </Link>
       </div>
     </div>
   );

@@ -5,7 +5,9 @@ export default function RequestNotFound() {
     <div className="rounded-xl border border-stone-200 bg-white p-6">
       <h1 className="text-lg font-semibold">No such request</h1>
       <p className="mt-1 text-stone-700">The link may be mistyped, or the request was removed.</p>
-      <Link href="/shop" className="mt-4 inline-flex min-h-11 items-center text-pine-700 underline">Back to the queue</Link>
+      <Link href="/shop" className="mt-4 inline-flex min-h-11 items-center text-pine-700 underline">
+        Back to the queue
+      </Link>
     </div>
   );
 }

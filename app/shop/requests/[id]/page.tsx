@@ -20,8 +20,13 @@ import { isUuid } from "@/lib/validations/id";
 export const metadata: Metadata = { title: "Request" };
 export const dynamic = "force-dynamic";
 
-
-export default async function RequestPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ version?: string }> }) {
+export default async function RequestPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ version?: string }>;
+}) {
   const { id } = await params;
   const user = await requireRole(STAFF_ROLES, { page: `/shop/requests/${id}` });
   if (!isUuid(id)) notFound();
@@ -40,26 +45,40 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
 
   return (
     <div className="flex flex-col gap-6">
-      <Link href="/shop" className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">← Back to the queue</Link>
+      <Link href="/shop" className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">
+        ← Back to the queue
+      </Link>
       <header className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4">
         <div className="flex flex-wrap items-center gap-3">
-          <h1 className="text-2xl font-bold">Request {detail.number}: {detail.riderName}</h1>
+          <h1 className="text-2xl font-bold">
+            Request {detail.number}: {detail.riderName}
+          </h1>
           <StatusBadge status={detail.status} />
         </div>
         <p className="text-stone-700">
-          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill} · received {formatDay(detail.createdAt)}
+          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill}{" "}
+          · received {formatDay(detail.createdAt)}
         </p>
         {shown ? <CalibrationNote output={shown.output} /> : null}
         {detail.status === "declined" && detail.declineReason ? (
-          <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm"><span className="font-semibold">Declined:</span> {detail.declineReason}</p>
+          <p className="rounded-lg bg-stone-100 px-3 py-2 text-sm">
+            <span className="font-semibold">Declined:</span> {detail.declineReason}
+          </p>
         ) : null}
         {detail.status === "waiting_for_rider" ? (
-          <p className="rounded-lg bg-violet-50 px-3 py-2 text-sm text-violet-900">Waiting for the rider&apos;s answer; it will appear under Questions and answers.</p>
+          <p className="rounded-lg bg-violet-50 px-3 py-2 text-sm text-violet-900">
+            Waiting for the rider&apos;s answer; it will appear under Questions and answers.
+          </p>
         ) : null}
         <div className="flex flex-wrap items-end gap-4">
           <AssignForm requestId={id} current={detail.assignedTunerId} staff={staff} />
           {shown ? (
-            <a href={sheetLinkFor(id, shown).href} target="_blank" rel="noreferrer" className="inline-flex min-h-11 items-center text-pine-700 underline">
+            <a
+              href={sheetLinkFor(id, shown).href}
+              target="_blank"
+              rel="noreferrer"
+              className="inline-flex min-h-11 items-center text-pine-700 underline"
+            >
               {sheetLinkFor(id, shown).label}
             </a>
           ) : null}
@@ -68,8 +87,8 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
 
       {!shown ? (
         <p role="alert" className="rounded-xl border border-amber-300 bg-amber-50 p-4">
-          The engine made no recommendation for this request (for example a bike that is not in the catalog). Ask the rider for
-          what is missing, or decline with a reason.
+          The engine made no recommendation for this request (for example a bike that is not in the catalog). Ask the
+          rider for what is missing, or decline with a reason.
         </p>
       ) : editable ? (
         <RecommendationEditor
@@ -95,7 +114,9 @@ export default async function RequestPage({ params, searchParams }: { params: Pr
         />
       )}
 
-      {detail.versions.length > 0 ? <VersionPicker requestId={id} versions={detail.versions} shown={shown?.version ?? 0} /> : null}
+      {detail.versions.length > 0 ? (
+        <VersionPicker requestId={id} versions={detail.versions} shown={shown?.version ?? 0} />
+      ) : null}
       <WorkflowActions requestId={id} status={detail.status} />
       <div className="grid gap-6 lg:grid-cols-2">
         <AnswersPanel answers={detail.answers} bikeLabel={detail.bikeLabel} />

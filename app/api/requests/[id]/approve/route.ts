@@ -10,7 +10,12 @@ import { approveSchema } from "@/lib/validations/review";
 export const POST = route(
   { access: STAFF_ROLES, params: idParams, notFound: "No such request.", body: approveSchema },
   async ({ user, params, body }) => {
-    const { version, revised, mail } = await approveRecommendation(params.id, user, body.version, body.acknowledgedWarnings ?? []);
+    const { version, revised, mail } = await approveRecommendation(
+      params.id,
+      user,
+      body.version,
+      body.acknowledgedWarnings ?? [],
+    );
     return json({ version, revised, email: mail.status });
   },
 );

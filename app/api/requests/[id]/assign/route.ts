@@ -10,7 +10,8 @@ export const POST = route(
   { access: STAFF_ROLES, params: idParams, notFound: "No such request.", body: assignSchema },
   async ({ user, params, body: { tunerId } }) => {
     const tuner = tunerId ? await findStaffMember(tunerId) : null;
-    if (tunerId && !tuner) throw new ValidationError("Pick an active staff member.", { tunerId: "Not an active staff member" });
+    if (tunerId && !tuner)
+      throw new ValidationError("Pick an active staff member.", { tunerId: "Not an active staff member" });
     await assignRequest(params.id, tuner, user);
     return json({ assignedTunerId: tuner?.id ?? null, assignedTunerName: tuner?.name ?? null });
   },

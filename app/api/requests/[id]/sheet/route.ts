@@ -25,24 +25,27 @@ export const GET = route(
     const setupRequest = await findSheetRequest(id);
     if (!setupRequest) throw new NotFoundError("No such request.");
 
-  const version = await findSheetVersion(id, query.version);
-  if (!version) throw new NotFoundError(`This request has no version ${query.version}.`, { version: "No such version" });
-  const draft = version.state === "draft";
-  if (draft && !staff) throw new ForbiddenError(`Version ${query.version} is not approved yet.`);
-  if (draft && !query.preview)
-    throw new ConflictError(`Version ${query.version} is a draft: open it as a preview (preview=1).`, { preview: "Needed for a draft" });
+    const version = await findSheetVersion(id, query.version);
+    if (!version)
+      throw new NotFoundError(`This request has no version ${query.version}.`, { version: "No such version" });
+    const draft = version.state === "draft";
+    if (draft && !staff) throw new ForbiddenError(`Version ${query.version} is not approved yet.`);
+    if (draft && !query.preview)
+      throw new ConflictError(`Version ${query.version} is a draft: open it as a preview (preview=1).`, {
+        preview: "Needed for a draft",
+      });
 
-  const pdf = await renderSetupSheet(await buildSheetData(setupRequest, version, { draft }));
-  return new Response(new Uint8Array(pdf), {
-    status: 200,
-    headers: {
-      "content-type": "application/pdf",
-      "content-length": String(pdf.length),
-      "content-disposition": `inline; filename="${sheetFileName(setupRequest.number, version.version, draft)}"`,
-      // Opened with a private token or a session: never kept by a shared cache.
-      "cache-control": "private, no-store",
-      "x-content-type-options": "nosniff",
-    },
-  });
+    const pdf = await renderSetupSheet(await buildSheetData(setupRequest, version, { draft }));
+    return new Response(new Uint8Array(pdf), {
+      status: 200,
+      headers: {
+        "content-type": "application/pdf",
+        "content-length": String(pdf.length),
+        "content-disposition": `inline; filename="${sheetFileName(setupRequest.number, version.version, draft)}"`,
+        // Opened with a private token or a session: never kept by a shared cache.
+        "cache-control": "private, no-store",
+        "x-content-type-options": "nosniff",
+      },
+    });
   },
 );

@@ -9,8 +9,9 @@ import { calibrationActionSchema } from "@/lib/validations/calibration";
 
 export const dynamic = "force-dynamic";
 
-export const GET = route({ access: ["admin"], params: idParams, notFound: "No such bike model." }, async ({ params: { id } }) =>
-  json(await getCalibrationSummary(id)),
+export const GET = route(
+  { access: ["admin"], params: idParams, notFound: "No such bike model." },
+  async ({ params: { id } }) => json(await getCalibrationSummary(id)),
 );
 
 export const POST = route(
