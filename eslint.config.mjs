@@ -13,6 +13,8 @@ const SERVICES = [
   "@/lib/requests/sag-follow-up",
   "@/lib/auth/staff",
   "@/lib/notify",
+  "@/lib/notify-staff",
+  "@/lib/requests/rider-answer",
 ];
 
 const layer = (files, patterns, ignores = []) => ({ files, ignores, rules: { [RULE]: ["error", { patterns }] } });

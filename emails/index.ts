@@ -6,6 +6,7 @@ import * as requestReceived from "./request-received";
 import * as sheetReady from "./sheet-ready";
 import * as signInLink from "./sign-in-link";
 import * as staffInvite from "./staff-invite";
+import * as staffNotice from "./staff-notice";
 import * as tunerQuestion from "./tuner-question";
 
 export interface EmailTemplate<P> {
@@ -53,6 +54,12 @@ export const emailTemplates = {
     demoProps: sheetReady.demoProps,
     description: "Approved (or revised) setup sheet with its download link",
   } satisfies EmailTemplate<sheetReady.SheetReadyEmailProps>,
+  "staff-notice": {
+    Component: staffNotice.StaffNoticeEmail,
+    subject: staffNotice.subject,
+    demoProps: staffNotice.demoProps,
+    description: "Notice to the shop: new request, rider's answer, sag report or payment",
+  } satisfies EmailTemplate<staffNotice.StaffNoticeEmailProps>,
 } as const;
 
 export type EmailTemplateName = keyof typeof emailTemplates;

@@ -6,6 +6,17 @@ import { ShopNav, type NavItem } from "@/components/shop/shop-nav";
 import { Logo } from "@/components/ui/logo";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES, type Role } from "@/lib/auth/roles";
+import { countUnseenNotices } from "@/db/queries/notices";
+import { STAFF_NOTICE_KINDS } from "@/db/schema";
+import { STAFF_NOTICE_LABELS } from "@/lib/labels";
+
+/** "2 new requests, 1 new sag report" for the count's accessible name. */
+function noticeSummary(unseen: Record<string, number>): string {
+  const parts = STAFF_NOTICE_KINDS.filter((k) => unseen[k]).map(
+    (k) => `${unseen[k]} × ${STAFF_NOTICE_LABELS[k]!.toLowerCase()}`,
+  );
+  return parts.length ? `unseen: ${parts.join(", ")}` : "";
+}
 
 // Link only pages that exist; `roles` lists who sees the link (the pages guard themselves too).
 const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
@@ -21,7 +32,10 @@ const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
 
 export default async function ShopLayout({ children }: { children: ReactNode }) {
   const user = await requireRole(STAFF_ROLES, { page: "/shop" });
-  const items = SHOP_NAV.filter((item) => item.roles.includes(user.role)).map(({ href, label }) => ({ href, label }));
+  const unseen = await countUnseenNotices();
+  const items = SHOP_NAV.filter((item) => item.roles.includes(user.role)).map(({ href, label }) =>
+    href === "/shop" ? { href, label, count: unseen.total, countLabel: noticeSummary(unseen) } : { href, label },
+  );
   return (
     <div className="flex min-h-dvh flex-col">
       <header className="bg-pine-900 text-white">

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { BIKE_CLASS_LABELS } from "@/lib/labels";
 import { Suspense } from "react";
 import { QueueView } from "@/components/queue/queue-view";
 import { listBikeClassOptions, listStaffMembers } from "@/db/queries/review";
@@ -16,7 +17,12 @@ export default async function QueuePage() {
     <div className="flex flex-col gap-6">
       <h1 className="text-2xl font-bold">Setup requests</h1>
       <Suspense fallback={<Loading />}>
-        <QueueView options={{ bikeClasses, tuners: staff.map(({ id, name }) => ({ id, name })) }} />
+        <QueueView
+          options={{
+            bikeClasses: bikeClasses.map((b) => ({ value: b.value, label: BIKE_CLASS_LABELS[b.value] ?? b.label })),
+            tuners: staff.map(({ id, name }) => ({ id, name })),
+          }}
+        />
       </Suspense>
     </div>
   );

@@ -1,6 +1,7 @@
 "use client";
 
 // The catalog list: sortable columns (TanStack Table); search and the retired filter are server-side.
+import { bikeClassLabel } from "@/lib/labels";
 import Link from "next/link";
 import { useState } from "react";
 import {
@@ -41,7 +42,7 @@ const columns = [
       </span>
     ),
   }),
-  col.accessor("bikeClass", { header: "Class" }),
+  col.accessor("bikeClass", { header: "Class", cell: (c) => bikeClassLabel(c.getValue()) }),
   col.accessor("forkKind", {
     header: "Fork",
     cell: (c) => FORK_KIND_LABELS[c.getValue() as keyof typeof FORK_KIND_LABELS] ?? c.getValue(),

@@ -1,5 +1,5 @@
 // The queue's client-side data: filters as URL parameters, and the fetch of GET /api/requests.
-import type { RequestStatus } from "@/db/schema";
+import type { RequestStatus, StaffNoticeKind } from "@/db/schema";
 import { getJson } from "@/lib/api-client";
 
 export interface QueueFilters {
@@ -30,6 +30,8 @@ export interface QueueRow {
   skill: string;
   assignedTunerName: string | null;
   createdAt: string;
+  /** Unseen staff notices on this request: a new sag report, the rider's answer… */
+  notices: StaffNoticeKind[];
 }
 
 export interface QueuePage {

@@ -1,5 +1,6 @@
 "use client";
 
+import { DISCIPLINE_LABELS } from "@/lib/labels";
 import { useEffect, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { STATUS_LABELS } from "@/lib/requests/status";
@@ -75,7 +76,7 @@ export function QueueFiltersForm({
           <option value="">Any discipline</option>
           {DISCIPLINES.map((d) => (
             <option key={d} value={d}>
-              {d.charAt(0).toUpperCase() + d.slice(1).replace("-", " ")}
+              {DISCIPLINE_LABELS[d]}
             </option>
           ))}
         </select>

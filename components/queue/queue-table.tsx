@@ -2,6 +2,7 @@
 
 // The queue table (TanStack Table). Sorting and paging happen on the server: the table only maps
 // its sorting state to the API's `sort` parameter.
+import { STAFF_NOTICE_LABELS, disciplineLabel } from "@/lib/labels";
 import {
   createColumnHelper,
   flexRender,
@@ -17,13 +18,14 @@ import { formatDay } from "@/lib/format";
 const SORT_OF: Record<string, { asc: string; desc: string }> = {
   number: { asc: "number_asc", desc: "number" },
   riderName: { asc: "rider", desc: "rider_desc" },
-  status: { asc: "status", desc: "status" },
+  // Ascending is the workflow's order (submitted first), descending its reverse.
+  status: { asc: "status", desc: "status_desc" },
   createdAt: { asc: "oldest", desc: "newest" },
 };
 
 export function sortingFrom(sort: string): SortingState {
   for (const [id, s] of Object.entries(SORT_OF)) {
-    if (s.desc === sort) return [{ id, desc: id !== "status" }];
+    if (s.desc === sort) return [{ id, desc: true }];
     if (s.asc === sort) return [{ id, desc: false }];
   }
   return [{ id: "createdAt", desc: true }];
@@ -51,6 +53,18 @@ const columns = [
           {c.getValue()}
         </Link>
         <span className="text-xs text-stone-600">{c.row.original.riderEmail}</span>
+        {c.row.original.notices?.length ? (
+          <span className="mt-1 flex flex-wrap gap-1">
+            {c.row.original.notices.map((k) => (
+              <span
+                key={k}
+                className="rounded-full bg-amber-100 px-2 py-0.5 text-xs font-semibold text-amber-950 ring-1 ring-amber-400"
+              >
+                {STAFF_NOTICE_LABELS[k]}
+              </span>
+            ))}
+          </span>
+        ) : null}
       </div>
     ),
   }),
@@ -58,7 +72,7 @@ const columns = [
   col.accessor("discipline", {
     header: "Discipline",
     enableSorting: false,
-    cell: (c) => <span className="capitalize">{c.getValue().replace("-", " ")}</span>,
+    cell: (c) => disciplineLabel(c.getValue()),
   }),
   col.accessor("assignedTunerName", {
     header: "Tuner",

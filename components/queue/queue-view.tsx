@@ -82,7 +82,7 @@ export function QueueView({ options }: { options: FilterOptions }) {
             onChange={(e) => update({ pageSize: Number(e.target.value) })}
             className="min-h-11 rounded-lg border border-stone-300 bg-white px-2"
           >
-            {[25, 50, 100].map((n) => (
+            {[10, 25, 50, 100].map((n) => (
               <option key={n} value={n}>
                 {n}
               </option>

@@ -2,7 +2,8 @@
 // rider's sag reports with the engine's verdicts.
 import { EmailStatusItems } from "@/components/mail/email-status-list";
 import type { RequestDetail } from "@/db/queries/review";
-import { formatDateTime } from "@/lib/format";
+import { formatDateTime, formatNumber } from "@/lib/format";
+import { END_LABELS, SAG_VERDICT_LABELS, labelOf } from "@/lib/labels";
 
 const box = "rounded-xl border border-stone-200 bg-white p-4";
 
@@ -32,7 +33,7 @@ export function EmailsPanel({ emails }: { emails: RequestDetail["emails"] }) {
   return (
     <section aria-labelledby="emails-heading" className={box}>
       <h2 id="emails-heading" className="mb-2 text-lg font-semibold">
-        E-mails to the rider
+        E-mails about this request
       </h2>
       <EmailStatusItems emails={emails} />
     </section>
@@ -66,35 +67,21 @@ export function PhotosPanel({ photos }: { photos: RequestDetail["photos"] }) {
   );
 }
 
+type End = "front" | "rear";
+interface EndReading {
+  freeMm: number | null;
+  staticMm: number;
+  raceMm: number;
+}
 interface VerdictLike {
-  end?: string;
   verdict?: string;
   message?: string;
+  preloadChangeMm?: number | null;
 }
 
-/** Verdicts may be stored per end ({ front, rear }) or as one verdict; collect whatever is there. */
-function verdictsIn(value: unknown): VerdictLike[] {
-  if (!value || typeof value !== "object") return [];
-  const v = value as Record<string, unknown>;
-  if (typeof v.message === "string") return [v as VerdictLike];
-  return Object.values(v).flatMap(verdictsIn);
-}
+const mm = (v: number | null | undefined) => (typeof v === "number" ? `${formatNumber(v, 0)} mm` : "—");
 
-function measuredText(value: unknown, prefix = ""): string[] {
-  if (value === null || value === undefined) return [];
-  if (typeof value !== "object") return [`${prefix}: ${String(value)}`];
-  return Object.entries(value as Record<string, unknown>).flatMap(([k, v]) =>
-    measuredText(v, prefix ? `${prefix} ${k}` : k),
-  );
-}
-
-const VERDICT_WORDS: Record<string, string> = {
-  "too-soft": "Too soft",
-  right: "Right",
-  "too-stiff": "Too stiff",
-  recheck: "Measure again",
-};
-
+/** The rider's measured sag per end, in mm, beside the engine's verdict (lib/requests/sag-follow-up.ts). */
 export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReports"] }) {
   return (
     <section aria-labelledby="sag-heading" className={box}>
@@ -102,25 +89,61 @@ export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReport
         Sag reports from the rider
       </h2>
       {reports.length === 0 ? <p className="text-sm text-stone-600">No measured sag reported yet.</p> : null}
-      <ol className="flex flex-col gap-3 text-sm">
-        {reports.map((r) => (
-          <li key={r.id} className="rounded-lg border border-stone-200 p-2">
-            <p className="text-stone-600">{formatDateTime(r.createdAt)}</p>
-            <p>Measured: {measuredText(r.measured).join("; ")}</p>
-            <ul className="mt-1 flex flex-col gap-1">
-              {verdictsIn(r.verdict).map((v, i) => (
-                <li key={i}>
-                  <span className="font-semibold">
-                    {v.end ? `${v.end === "front" ? "Fork" : "Shock"}: ` : ""}
-                    {VERDICT_WORDS[v.verdict ?? ""] ?? v.verdict ?? ""}
-                  </span>{" "}
-                  {v.message}
-                </li>
-              ))}
-            </ul>
-          </li>
-        ))}
-      </ol>
+      {reports.length ? (
+        <div className="overflow-x-auto">
+          <table className="w-full min-w-[34rem] text-left text-sm">
+            <caption className="sr-only">Measured sag per report and end, with the verdict</caption>
+            <thead className="bg-stone-100 text-stone-700">
+              <tr>
+                <th scope="col" className="px-2 py-1">
+                  Reported
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  End
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Free
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Static
+                </th>
+                <th scope="col" className="px-2 py-1 text-right">
+                  Race
+                </th>
+                <th scope="col" className="px-2 py-1">
+                  Verdict
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {reports.flatMap((r) => {
+                const readings = ((r.measured as { mm?: Partial<Record<End, EndReading>> } | null)?.mm ??
+                  {}) as Partial<Record<End, EndReading>>;
+                const verdicts = (r.verdict ?? {}) as Partial<Record<End, VerdictLike>>;
+                return (["rear", "front"] as const)
+                  .filter((end) => readings[end])
+                  .map((end, i) => {
+                    const m = readings[end]!;
+                    const v = verdicts[end];
+                    return (
+                      <tr key={`${r.id}-${end}`} className="border-t border-stone-100 align-top">
+                        <td className="px-2 py-1 whitespace-nowrap">{i === 0 ? formatDateTime(r.createdAt) : ""}</td>
+                        <td className="px-2 py-1">{END_LABELS[end]}</td>
+                        <td className="px-2 py-1 text-right tabular-nums">{mm(m.freeMm)}</td>
+                        <td className="px-2 py-1 text-right tabular-nums">{mm(m.staticMm)}</td>
+                        <td className="px-2 py-1 text-right tabular-nums">{mm(m.raceMm)}</td>
+                        <td className="px-2 py-1">
+                          <span className="font-semibold">{labelOf(SAG_VERDICT_LABELS, v?.verdict)}</span>
+                          {v?.message ? <span className="block text-stone-700">{v.message}</span> : null}
+                        </td>
+                      </tr>
+                    );
+                  });
+              })}
+            </tbody>
+          </table>
+        </div>
+      ) : null}
     </section>
   );
 }

@@ -1,11 +1,26 @@
 // The rider's answers exactly as given, units included (the engine's SI input is elsewhere).
 import type { ReactNode } from "react";
+import {
+  COMPLAINT_LABELS,
+  JUMP_LABELS,
+  SKILL_LABELS,
+  STYLE_SHORT_LABELS,
+  TERRAIN_LABELS,
+  disciplineLabel,
+  labelOf,
+} from "@/lib/labels";
 import type { RequestAnswers } from "@/lib/validations/request";
 
 type Answers = Partial<{ [K in keyof RequestAnswers]: Partial<RequestAnswers[K]> }>;
 
-const words = (s: string | undefined) => (s ? s.replaceAll("-", " ") : undefined);
 const withUnit = (v: { value: number; unit: string } | undefined) => (v ? `${v.value} ${v.unit}` : undefined);
+
+const SAG_WORDS = {
+  rearStatic: "shock static",
+  rearRace: "shock race",
+  forkStatic: "fork static",
+  forkRace: "fork race",
+} as const;
 
 function Row({ label, children }: { label: string; children: ReactNode }) {
   if (children === undefined || children === null || children === "") return null;
@@ -23,7 +38,7 @@ export function AnswersPanel({ answers, bikeLabel }: { answers: unknown; bikeLab
   const sagText = sag
     ? (["rearStatic", "rearRace", "forkStatic", "forkRace"] as const)
         .filter((k) => sag[k] !== undefined)
-        .map((k) => `${k.replace(/([A-Z])/g, " $1").toLowerCase()} ${sag[k]} ${sag.unit}`)
+        .map((k) => `${SAG_WORDS[k]} ${sag[k]} ${sag.unit}`)
         .join(", ")
     : undefined;
   const nl = a.bike?.notListed;
@@ -42,10 +57,17 @@ export function AnswersPanel({ answers, bikeLabel }: { answers: unknown; bikeLab
             : undefined}
         </Row>
         <Row label="Height">{withUnit(a.rider?.height)}</Row>
-        <Row label="Skill, style">{[a.rider?.skill, a.rider?.style].filter(Boolean).join(", ")}</Row>
-        <Row label="Discipline">{words(a.riding?.discipline)}</Row>
-        <Row label="Terrain">{a.riding?.terrain?.join(", ")}</Row>
-        <Row label="Jumps">{a.riding?.jumpSize}</Row>
+        <Row label="Skill, style">
+          {[
+            a.rider?.skill && labelOf(SKILL_LABELS, a.rider.skill),
+            a.rider?.style && labelOf(STYLE_SHORT_LABELS, a.rider.style),
+          ]
+            .filter(Boolean)
+            .join(", ")}
+        </Row>
+        <Row label="Discipline">{a.riding?.discipline ? disciplineLabel(a.riding.discipline) : undefined}</Row>
+        <Row label="Terrain">{a.riding?.terrain?.map((t) => labelOf(TERRAIN_LABELS, t)).join(", ")}</Row>
+        <Row label="Jumps">{a.riding?.jumpSize ? labelOf(JUMP_LABELS, a.riding.jumpSize) : undefined}</Row>
         <Row label="Hours per month">{a.riding?.hoursPerMonth}</Row>
         <Row label="Bike">{`${bikeLabel}${a.bike?.year ? ` (${a.bike.year})` : ""}`}</Row>
         <Row label="Not in catalog">
@@ -56,7 +78,9 @@ export function AnswersPanel({ answers, bikeLabel }: { answers: unknown; bikeLab
         <Row label="Fork spring now">{withUnit(a.bike?.currentForkSpring)}</Row>
         <Row label="Shock spring now">{withUnit(a.bike?.currentShockSpring)}</Row>
         <Row label="Modifications">{a.bike?.modifications}</Row>
-        <Row label="Complaints">{a.feel?.complaints?.length ? a.feel.complaints.map(words).join(", ") : "none"}</Row>
+        <Row label="Complaints">
+          {a.feel?.complaints?.length ? a.feel.complaints.map((c) => labelOf(COMPLAINT_LABELS, c)).join(", ") : "none"}
+        </Row>
         <Row label="Rider's notes">
           {a.feel?.notes ? <span className="whitespace-pre-line">{a.feel.notes}</span> : undefined}
         </Row>

@@ -1,5 +1,13 @@
 // The request's audit trail as a timeline: who did what, when, with old and new values.
 import type { RequestStatus } from "@/db/schema";
+import {
+  AUDIT_ACTION_LABELS,
+  EMAIL_TEMPLATE_LABELS,
+  STAFF_NOTICE_LABELS,
+  humanize,
+  labelOf,
+  overrideFieldLabel,
+} from "@/lib/labels";
 import { STATUS_LABELS } from "@/lib/requests/status";
 import { formatDateTime } from "@/lib/format";
 
@@ -10,18 +18,6 @@ export interface AuditItem {
   detail: unknown;
   createdAt: Date;
 }
-
-const ACTION_WORDS: Record<string, string> = {
-  "request.submitted": "submitted the request",
-  "request.status_changed": "changed the status",
-  "request.assigned": "changed the assignment",
-  "request.question_asked": "asked the rider",
-  "request.declined": "declined the request",
-  "recommendation.saved": "saved the recommendation",
-  "recommendation.approved": "approved the recommendation",
-  "email.sent": "e-mail sent",
-  "email.failed": "e-mail FAILED",
-};
 
 const value = (v: unknown) =>
   v === null || v === undefined
@@ -42,10 +38,14 @@ function Detail({ action, detail }: { action: string; detail: Record<string, unk
   if (action === "request.question_asked") return <>“{String(detail.question)}”</>;
   if (action === "request.declined") return <>reason: “{String(detail.reason)}”</>;
   if (action === "recommendation.approved") return <>version {String(detail.version)}</>;
+  if (action === "sag.reported") return <>against version {String(detail.version)} (see Sag reports)</>;
+  if (action === "request.rider_answered") return <>(see Questions and answers)</>;
+  if (action === "request.notices_seen")
+    return <>{((detail.kinds as string[] | undefined) ?? []).map((k) => labelOf(STAFF_NOTICE_LABELS, k)).join(", ")}</>;
   if (action.startsWith("email."))
     return (
       <>
-        {String(detail.template)} to {String(detail.to)}
+        {labelOf(EMAIL_TEMPLATE_LABELS, detail.template)} to {String(detail.to)}
         {detail.error ? ` (${String(detail.error)})` : ""}
       </>
     );
@@ -59,7 +59,7 @@ function Detail({ action, detail }: { action: string; detail: Record<string, unk
           <ul className="mt-1 list-disc pl-5">
             {changes.map((c) => (
               <li key={c.field}>
-                <code>{c.field}</code>: {value(c.from)} → {value(c.to)}
+                {overrideFieldLabel(c.field)}: {value(c.from)} → {value(c.to)}
               </li>
             ))}
           </ul>
@@ -84,7 +84,7 @@ export function AuditTimeline({ events }: { events: AuditItem[] }) {
             <time dateTime={e.createdAt.toISOString()} className="text-stone-600">
               {formatDateTime(e.createdAt)}
             </time>{" "}
-            <span className="font-medium">{e.actorLabel}</span> {ACTION_WORDS[e.action] ?? e.action}{" "}
+            <span className="font-medium">{e.actorLabel}</span> {AUDIT_ACTION_LABELS[e.action] ?? humanize(e.action)}{" "}
             <Detail action={e.action} detail={(e.detail ?? {}) as Record<string, unknown>} />
           </li>
         ))}

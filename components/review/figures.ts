@@ -1,5 +1,6 @@
 // The figures a tuner compares: what the engine proposed against what this version says.
-import type { ClickerId, Recommendation } from "@/lib/sizing";
+import type { Recommendation } from "@/lib/sizing";
+import { CLICKER_LABELS } from "@/lib/labels";
 
 export interface Figure {
   key: string;
@@ -9,13 +10,7 @@ export interface Figure {
   value: (r: Recommendation) => number | null;
 }
 
-export const CLICKER_LABELS: Record<ClickerId, string> = {
-  forkCompression: "Fork compression",
-  forkRebound: "Fork rebound",
-  shockLowSpeedCompression: "Shock low-speed compression",
-  shockHighSpeedCompression: "Shock high-speed compression",
-  shockRebound: "Shock rebound",
-};
+export { CLICKER_LABELS } from "@/lib/labels";
 
 export const REAR_FIGURES: Figure[] = [
   { key: "rear.rate", label: "Shock spring rate", unit: "N/mm", digits: 1, value: (r) => r.rear.chosenRate.nMm },

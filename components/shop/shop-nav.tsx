@@ -7,6 +7,9 @@ import { cn } from "@/components/ui/cn";
 export interface NavItem {
   href: string;
   label: string;
+  /** Unseen notices behind this link (the queue's new requests, answers, sag reports, payments). */
+  count?: number;
+  countLabel?: string;
 }
 
 /** Workspace navigation; the layout passes only pages that exist and that the role may open. */
@@ -27,6 +30,15 @@ export function ShopNav({ items }: { items: NavItem[] }) {
             )}
           >
             {item.label}
+            {item.count ? (
+              <span
+                className="ml-1.5 rounded-full bg-amber-300 px-1.5 text-xs font-bold text-stone-950 tabular-nums"
+                title={item.countLabel}
+              >
+                {item.count}
+                <span className="sr-only"> {item.countLabel}</span>
+              </span>
+            ) : null}
           </Link>
         );
       })}

@@ -2,6 +2,7 @@
 
 // The clicker rules table: trigger (complaint, terrain or a large spring change) → clicker, change,
 // reason. Saved as a whole (the order is kept); "reset" restores the engine's default rules.
+import { CLICKER_LABELS, COMPLAINT_LABELS, RATE_TRIGGER_LABELS, TERRAIN_LABELS } from "@/lib/labels";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -129,21 +130,21 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
                           <optgroup label="Complaint">
                             {COMPLAINTS.map((c) => (
                               <option key={c} value={`complaint:${c}`}>
-                                {c}
+                                {COMPLAINT_LABELS[c]}
                               </option>
                             ))}
                           </optgroup>
                           <optgroup label="Terrain">
                             {TERRAINS.map((t) => (
                               <option key={t} value={`terrain:${t}`}>
-                                {t}
+                                {TERRAIN_LABELS[t]}
                               </option>
                             ))}
                           </optgroup>
                           <optgroup label="Spring change">
                             {RATE_TRIGGERS.map((t) => (
                               <option key={t} value={`rate:${t}`}>
-                                {t.replace("-", " spring ")}
+                                {RATE_TRIGGER_LABELS[t]}
                               </option>
                             ))}
                           </optgroup>
@@ -156,7 +157,7 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
                     <select aria-label={`Rule ${i + 1} clicker`} className={cell} {...register(`rules.${i}.clicker`)}>
                       {CLICKER_IDS.map((c) => (
                         <option key={c} value={c}>
-                          {c}
+                          {CLICKER_LABELS[c]}
                         </option>
                       ))}
                     </select>

@@ -2,6 +2,7 @@
 
 // One row of setup targets (discipline × skill): sag targets as % of travel with mm for a reference
 // bike, rider rear share, rate and bottoming factors; save, reset to the engine's defaults, preview.
+import { DISCIPLINE_LABELS, SKILL_LABELS } from "@/lib/labels";
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -84,8 +85,8 @@ export function TargetEditor({
       aria-labelledby="target-editor"
       className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4"
     >
-      <h2 id="target-editor" className="font-semibold capitalize">
-        {discipline}, {skill}
+      <h2 id="target-editor" className="font-semibold">
+        {DISCIPLINE_LABELS[discipline]}, {SKILL_LABELS[skill].toLowerCase()}
       </h2>
       <label className="flex max-w-md flex-col gap-1 text-sm font-medium">
         Reference bike (for mm and the preview)

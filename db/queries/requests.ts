@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, gte, isNull, like, lt, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, gte, isNull, like, lt, or, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { containsPattern } from "./like";
 import { REQUEST_STATUSES, setupRequests, user, type RequestStatus } from "@/db/schema";
@@ -35,6 +35,13 @@ export async function listRequestsForRiderEmail(email: string) {
     .orderBy(desc(setupRequests.createdAt));
 }
 
+// Status sorts by the workflow (REQUEST_STATUSES' order: submitted → in review → waiting for the
+// rider → approved → declined), not alphabetically.
+const statusRank = sql`array_position(array[${sql.join(
+  REQUEST_STATUSES.map((s) => sql`${s}`),
+  sql`, `,
+)}]::text[], ${setupRequests.status})`;
+
 const QUEUE_ORDER = {
   newest: [desc(setupRequests.createdAt)],
   oldest: [asc(setupRequests.createdAt)],
@@ -42,7 +49,8 @@ const QUEUE_ORDER = {
   number_asc: [asc(setupRequests.number)],
   rider: [asc(sql`lower(${setupRequests.riderName})`), desc(setupRequests.createdAt)],
   rider_desc: [desc(sql`lower(${setupRequests.riderName})`), desc(setupRequests.createdAt)],
-  status: [asc(setupRequests.status), desc(setupRequests.createdAt)],
+  status: [asc(statusRank), desc(setupRequests.createdAt)],
+  status_desc: [desc(statusRank), desc(setupRequests.createdAt)],
 } as const satisfies Record<QueueQuery["sort"], unknown[]>;
 
 const DAY_MS = 86_400_000;
@@ -62,7 +70,13 @@ function queueConditions(query: QueueQuery, callerId?: string): SQL | undefined 
   if (query.q) {
     // search_text is lower-cased and trigram-indexed; LIKE wildcards typed by the user are literal.
     const pattern = containsPattern(query.q.toLowerCase());
-    conditions.push(like(setupRequests.searchText, pattern));
+    // Every e-mail says "request 13": "13", "#13" or "request 13" finds that request by number too.
+    const number = /^(?:request\s*|no\.?\s*|#)?(\d{1,15})$/i.exec(query.q.trim())?.[1];
+    conditions.push(
+      number
+        ? or(eq(setupRequests.number, Number(number)), like(setupRequests.searchText, pattern))!
+        : like(setupRequests.searchText, pattern),
+    );
   }
   return conditions.length ? and(...conditions) : undefined;
 }

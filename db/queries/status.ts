@@ -1,7 +1,7 @@
 // The rider's side of a request: who may open it (status token or the signed-in rider's e-mail,
 // checked in the query), what the status page shows, and what the rider may send back.
 import { and, asc, desc, eq, inArray, isNotNull } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, type Tx } from "@/db/client";
 import {
   auditEvents,
   recommendationVersions,
@@ -114,7 +114,7 @@ export async function loadRiderStatus(requestId: string) {
 export type RiderStatus = NonNullable<Awaited<ReturnType<typeof loadRiderStatus>>>;
 
 /** The rider answers the tuner's question: message, back to review, audit, all at once. */
-export async function recordRiderAnswer(requestId: string, body: string) {
+export async function recordRiderAnswer(requestId: string, body: string, also?: (tx: Tx) => Promise<unknown>) {
   const db = await getDb();
   await db.transaction(async (tx) => {
     const moved = await tx
@@ -130,6 +130,8 @@ export async function recordRiderAnswer(requestId: string, body: string) {
       action: "request.rider_answered",
       detail: { from: "waiting_for_rider", to: "in_review", length: body.length },
     });
+    // The service tells the shop in this same transaction (lib/notify-staff.ts).
+    await also?.(tx);
   });
 }
 
@@ -162,6 +164,7 @@ export async function insertSagReport(
     versionId: string;
     version: number;
   },
+  also?: (tx: Tx) => Promise<unknown>,
 ) {
   const db = await getDb();
   return db.transaction(async (tx) => {
@@ -180,6 +183,7 @@ export async function insertSagReport(
       action: "sag.reported",
       detail: { sagReportId: row!.id, version: report.version },
     });
+    await also?.(tx);
     return row!;
   });
 }

@@ -71,6 +71,7 @@ export function sheetDate(date: Date): string {
   return `${date.getUTCDate()} ${MONTHS[date.getUTCMonth()]} ${date.getUTCFullYear()}`;
 }
 
+/** Capitalises a phrase; codes get their words from lib/labels.ts instead. */
 export function capitalise(text: string): string {
   return text ? text[0]!.toUpperCase() + text.slice(1).replace(/-/g, " ") : text;
 }

@@ -8,6 +8,7 @@ import { loadShopSizingContext } from "@/db/queries/sizing-context";
 import { ValidationError } from "@/lib/errors";
 import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
+import { notifyStaff } from "@/lib/notify-staff";
 import { buildSizingInput, toKg, toMm } from "@/lib/requests/sizing-input";
 import { newStatusToken } from "@/lib/requests/token";
 import { SizingInputError, recommend, type BikeSpecInput, type Recommendation } from "@/lib/sizing";
@@ -124,7 +125,10 @@ export async function submitSetupRequest(answers: RequestAnswers, photos: Incomi
         output,
         statusToken,
       },
-      (tx, created) => notifyRider(tx, created.id, { kind: "request-received" }, { statusToken }),
+      async (tx, created) => {
+        await notifyRider(tx, created.id, { kind: "request-received" }, { statusToken });
+        await notifyStaff(tx, { kind: "new-request", requestId: created.id });
+      },
     );
     kickOutbox();
     return { ...row, statusToken };

@@ -3,6 +3,8 @@
 // on target. Values are kept as given and in mm.
 import { findApprovedVersion, insertSagReport } from "@/db/queries/status";
 import { ConflictError, ValidationError } from "@/lib/errors";
+import { kickOutbox } from "@/lib/mail";
+import { notifyStaff } from "@/lib/notify-staff";
 import { toMm } from "@/lib/requests/sizing-input";
 import { SizingInputError, sagVerdict, type SagVerdict } from "@/lib/sizing";
 import type { SagReport } from "@/lib/validations/status";
@@ -50,12 +52,10 @@ export async function reportSag(requestId: string, report: SagReport) {
   const { token: _token, ...asGiven } = report;
   void _token;
   const measured = { asGiven, mm };
-  const row = await insertSagReport({
-    requestId,
-    versionId: approved.id,
-    version: approved.version,
-    measured,
-    verdict,
-  });
+  const row = await insertSagReport(
+    { requestId, versionId: approved.id, version: approved.version, measured, verdict },
+    (tx) => notifyStaff(tx, { kind: "sag-reported", requestId, verdict }),
+  );
+  kickOutbox();
   return { id: row.id, createdAt: row.createdAt, version: approved.version, measured, verdict };
 }

@@ -11,6 +11,7 @@ import {
   setAssignedTuner,
   supersedeApproved,
 } from "@/db/queries/review-steps";
+import { markNoticesSeen } from "@/db/queries/notices";
 import { inTransaction, type Tx } from "@/db/queries/transaction";
 import { getLatestVersion, hasEarlierApproval } from "@/db/queries/versions";
 import type { RequestStatus } from "@/db/schema";
@@ -18,6 +19,7 @@ import type { SessionUser } from "@/lib/auth/guard";
 import { ConflictError, NotFoundError } from "@/lib/errors";
 import { kickOutbox } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
+import { STATUS_LABELS } from "@/lib/requests/status";
 import { ALLOWED_FROM, conflictMessage, type WorkflowAction } from "@/lib/review/transitions";
 
 export type Actor = Pick<SessionUser, "id" | "name">;
@@ -56,12 +58,48 @@ export async function moveStatus(
   return current === to ? [] : [auditBy(actor, requestId, "request.status_changed", { from: current, to })];
 }
 
-/** A tuner opened a new request: it is now being reviewed. No-op for any other status. */
-export async function startReview(requestId: string, actor: Actor): Promise<void> {
-  await inTransaction(async (tx) => {
+/**
+ * "Start review" (or "Take", with `take`): a tuner's action, never a side effect of opening the
+ * page (a GET never writes). Moves a submitted request to in review, audited; `take` also assigns it
+ * to the actor. The request's "new request" notices are marked seen.
+ */
+export async function startReview(
+  requestId: string,
+  actor: Actor,
+  { take = false }: { take?: boolean } = {},
+): Promise<{ status: RequestStatus; assignedTunerId: string | null }> {
+  return inTransaction(async (tx) => {
     const req = await lockRequest(tx, requestId);
-    if (req.status !== "submitted") return;
-    await recordAudit(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor), tx);
+    if (req.status !== "submitted" && !take)
+      throw new ConflictError(`The review has already started (the request is “${STATUS_LABELS[req.status]}”).`);
+    if (take) assertCanStart("assign", req.status);
+    const events: AuditInsert[] = [];
+    if (req.status === "submitted") {
+      events.push(...(await moveStatus(tx, requestId, "submitted", ["submitted"], "in_review", actor)));
+      events.push(auditBy(actor, requestId, "request.review_started", {}));
+    }
+    let assignedTunerId = req.assignedTunerId;
+    if (take && req.assignedTunerId !== actor.id) {
+      await setAssignedTuner(tx, requestId, actor.id);
+      events.push(
+        auditBy(actor, requestId, "request.assigned", { from: req.assignedTunerId, to: actor.id, toName: actor.name }),
+      );
+      assignedTunerId = actor.id;
+    }
+    if (!events.length) throw new ConflictError("This request is already yours and in review.");
+    await recordAudit(events, tx);
+    await markNoticesSeen(tx, requestId, actor.id, ["new-request"]);
+    return { status: req.status === "submitted" ? "in_review" : req.status, assignedTunerId };
+  });
+}
+
+/** "Mark as seen": the request's unseen notices (answers, sag reports, payments) stop counting. */
+export async function markRequestSeen(requestId: string, actor: Actor): Promise<{ marked: string[] }> {
+  return inTransaction(async (tx) => {
+    await lockRequest(tx, requestId);
+    const marked = await markNoticesSeen(tx, requestId, actor.id);
+    if (marked.length) await recordAudit([auditBy(actor, requestId, "request.notices_seen", { kinds: marked })], tx);
+    return { marked };
   });
 }
 

@@ -3,7 +3,16 @@ import { REQUEST_STATUSES } from "@/lib/requests/status";
 import { text } from "./text";
 import { disciplineSchema } from "@/lib/sizing";
 
-export const QUEUE_SORTS = ["newest", "oldest", "number", "number_asc", "rider", "rider_desc", "status"] as const;
+export const QUEUE_SORTS = [
+  "newest",
+  "oldest",
+  "number",
+  "number_asc",
+  "rider",
+  "rider_desc",
+  "status",
+  "status_desc",
+] as const;
 export type QueueSort = (typeof QUEUE_SORTS)[number];
 
 const day = (field: string) => z.iso.date({ message: `${field} must be a date (YYYY-MM-DD)` }).optional();

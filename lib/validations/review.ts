@@ -39,3 +39,8 @@ export const approveSchema = z.object({
   /** Codes of the sanity warnings the tuner has checked; every one on the version must be here. */
   acknowledgedWarnings: z.array(z.string().max(80, "Not a warning code")).max(50, "At most 50 warnings").optional(),
 });
+
+/** "Start review" `{}` or "Take" `{ take: true }`. */
+export const startReviewSchema = z.object({
+  take: z.boolean({ error: "take is true or false" }).optional(),
+});

@@ -175,6 +175,36 @@ describe("GET /api/requests over 10,000 requests", () => {
     expect(byNumber.body.items.map((r) => r.id)).toEqual([0, 4, 8, 12, 16, 20, 24, 28, 32, 36].map((i) => rows[i]!.id));
   });
 
+  it("finds a request by its number, as every e-mail writes it ('request 796', '#796', '796')", async () => {
+    const number = (await list({ q: "rider777@bulk" })).body.items[0]!.number;
+    // The bare number also matches the text (e-mails like rider1796@…); the row itself must be there.
+    const bare = await list({ q: String(number), pageSize: 100 });
+    expect(bare.body.items.map((r) => r.id)).toContain(rows[777]!.id);
+    for (const q of [`request ${number}`, `Request ${number}`, `#${number}`])
+      expect((await list({ q })).body.items.map((r) => r.id)).toEqual([rows[777]!.id]);
+    // Not a number search: the digits stay a plain text match.
+    expect((await list({ q: `${number}x` })).body.total).toBe(0);
+  });
+
+  it("sorts status in the workflow's order (submitted → in review → waiting → approved → declined), both ways", async () => {
+    const from = "2021-03-10";
+    const to = "2021-03-12";
+    const lo = Date.parse(`${from}T00:00:00Z`);
+    const hi = Date.parse(`${to}T00:00:00Z`) + 24 * HOUR;
+    const set = rows.filter((r) => r.createdAt.getTime() >= lo && r.createdAt.getTime() < hi);
+    expect(new Set(set.map((r) => r.status)).size).toBe(5);
+    const rank = (r: Row) => STATUSES.indexOf(r.status);
+    const ascending = [...set].sort((a, b) => rank(a) - rank(b) || newestFirst(a, b));
+    const descending = [...set].sort((a, b) => rank(b) - rank(a) || newestFirst(a, b));
+    const asc = await list({ from, to, sort: "status", pageSize: 100 });
+    expect(asc.body.items.map((r) => r.id)).toEqual(ascending.map((r) => r.id));
+    const desc = await list({ from, to, sort: "status_desc", pageSize: 100 });
+    expect(desc.body.items.map((r) => r.id)).toEqual(descending.map((r) => r.id));
+    // Alphabetical order would put "approved" first: the workflow puts "submitted" first.
+    expect(asc.body.items[0]!.status).toBe("submitted");
+    expect(desc.body.items[0]!.status).toBe("declined");
+  });
+
   it("counts every request per status (18 demo requests plus the bulk rows)", async () => {
     expect((await list({ pageSize: 1 })).body.counts).toBeUndefined();
     const { body } = await list({ pageSize: 1, counts: 1 });

@@ -49,6 +49,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/requests/[id]/assign": staff,
   "POST /api/requests/[id]/decline": staff,
   "PATCH /api/requests/[id]/recommendation": staff,
+  "POST /api/requests/[id]/seen": staff,
+  "POST /api/requests/[id]/start": staff,
   "GET /api/requests/[id]/sheet": { anonymous: 401, riderA: "ok", riderB: 403, tuner: "ok", admin: "ok" },
   "GET /api/shop/catalog": staff,
   "POST /api/shop/catalog": staff,

@@ -1,8 +1,10 @@
 // GET /api/requests: the staff queue, `{ items: [{ id, status, … }], total }` (+ `counts` per status
 // with `counts=1`). Filters: status, discipline, bikeClass, tuner (user id | "me" | "unassigned"),
-// from/to (UTC days), q (rider name, e-mail, bike); page, pageSize, sort.
+// from/to (UTC days), q (rider name, e-mail, bike, or the request's number); page, pageSize, sort.
+// Each item carries `notices`: the kinds of its unseen staff notices (lib/notify-staff.ts).
 // POST /api/requests: a rider's new setup request (public), 201 `{ id, statusUrl }`.
 import { z } from "zod";
+import { listUnseenNoticeKinds } from "@/db/queries/notices";
 import { countRequestsByStatus, listQueue } from "@/db/queries/requests";
 import { HttpError } from "@/lib/api/respond";
 import { createLimiter } from "@/lib/api/rate-limit";
@@ -29,7 +31,10 @@ export const GET = route({ access: STAFF_ROLES, query: queueQuery }, async ({ us
     listQueue(query, user.id),
     query.counts ? countRequestsByStatus() : undefined,
   ]);
-  return json(counts ? { ...page, counts } : page);
+  // The marks in the queue: each row's unseen notices (a new request, an answer, a sag report…).
+  const unseen = await listUnseenNoticeKinds(page.items.map((i) => i.id));
+  const items = page.items.map((i) => ({ ...i, notices: unseen.get(i.id) ?? [] }));
+  return json(counts ? { ...page, items, counts } : { ...page, items });
 });
 
 // A rider sends one request, maybe a corrected second: 8 per 15 minutes per client stops floods

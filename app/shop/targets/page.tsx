@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { DISCIPLINE_LABELS, SKILL_LABELS } from "@/lib/labels";
 import Link from "next/link";
 import { ClickerRulesEditor } from "@/components/targets/clicker-rules-editor";
 import { TargetEditor } from "@/components/targets/target-editor";
@@ -67,13 +68,13 @@ export default async function TargetsPage({ searchParams }: { searchParams: Prom
                 const current = d === discipline && s === skill;
                 return (
                   <tr key={`${d}-${s}`} className={`border-t border-stone-100 ${current ? "bg-pine-50" : ""}`}>
-                    <th scope="row" className="px-2 py-1 font-normal capitalize">
+                    <th scope="row" className="px-2 py-1 font-normal">
                       <Link
                         href={`/shop/targets?d=${d}&s=${s}`}
                         aria-current={current ? "true" : undefined}
                         className="inline-flex min-h-11 items-center text-pine-700 underline"
                       >
-                        {d}, {s}
+                        {DISCIPLINE_LABELS[d]}, {SKILL_LABELS[s].toLowerCase()}
                       </Link>
                     </th>
                     <td className="px-2">{pct(v.sag.rearRace)}</td>

@@ -1,17 +1,13 @@
 // Starting clicker positions, counted out from fully closed, with the stock position and the reason
 // for any move from stock.
 import { Text, View } from "@react-pdf/renderer";
-import type { ClickerId, ClickerSetting } from "@/lib/sizing";
+import { CLICKER_LABELS } from "@/lib/labels";
+import type { ClickerSetting } from "@/lib/sizing";
 import { clickerCount } from "../format";
 import { s } from "../styles";
 
-export const CLICKER_NAMES: Record<ClickerId, string> = {
-  forkCompression: "Fork compression",
-  forkRebound: "Fork rebound",
-  shockLowSpeedCompression: "Shock compression, low speed",
-  shockHighSpeedCompression: "Shock compression, high speed",
-  shockRebound: "Shock rebound",
-};
+/** The sheet uses the shop's one vocabulary (lib/labels.ts). */
+export const CLICKER_NAMES = CLICKER_LABELS;
 
 const W = { name: "30%", start: "17%", stock: "15%", why: "38%" };
 

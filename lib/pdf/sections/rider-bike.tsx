@@ -1,6 +1,7 @@
 // Who the setup is for and on what: the rider's answers as given, and the mass the sizing used.
 import { Text, View } from "@react-pdf/renderer";
-import { capitalise, fixed } from "../format";
+import { disciplineLabel, skillLabel } from "@/lib/labels";
+import { fixed } from "../format";
 import type { SheetData } from "../sheet-data";
 import { s } from "../styles";
 import { KeyValue } from "./parts";
@@ -18,7 +19,7 @@ export function RiderAndBike({ data }: { data: SheetData }) {
         <KeyValue label="Name">{request.riderName}</KeyValue>
         <KeyValue label="Weight given">{given}</KeyValue>
         <KeyValue label="Sized for (with gear)">{fixed(rec.resolved.riderMassWithGearKg, 1)} kg</KeyValue>
-        <KeyValue label="Riding">{`${capitalise(request.discipline)}, ${request.skill.replace(/-/g, " ")}`}</KeyValue>
+        <KeyValue label="Riding">{`${disciplineLabel(request.discipline)}, ${skillLabel(request.skill).toLowerCase()}`}</KeyValue>
       </View>
       <View style={s.col}>
         <Text style={s.h2}>Bike</Text>

@@ -1,3 +1,4 @@
+import { disciplineLabel, skillLabel } from "@/lib/labels";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
@@ -8,10 +9,11 @@ import { CalibrationNote } from "@/components/review/calibration-note";
 import { RecommendationEditor } from "@/components/review/recommendation-editor";
 import { VersionPicker, sheetLinkFor } from "@/components/review/version-picker";
 import { VersionView } from "@/components/review/version-view";
+import { ReviewStart } from "@/components/review/review-start";
 import { AssignForm, WorkflowActions } from "@/components/review/workflow-actions";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { getRequestDetail, listStaffMembers } from "@/db/queries/review";
-import { startReview } from "@/lib/review/workflow";
+import { listUnseenNoticeKinds } from "@/db/queries/notices";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
@@ -30,13 +32,10 @@ export default async function RequestPage({
   const { id } = await params;
   const user = await requireRole(STAFF_ROLES, { page: `/shop/requests/${id}` });
   if (!isUuid(id)) notFound();
-  let detail = await getRequestDetail(id);
+  // Opening the page only reads: the review starts with the "Start review" / "Take" action.
+  const detail = await getRequestDetail(id);
   if (!detail) notFound();
-  // A tuner opening a new request starts its review (audited like any status change).
-  if (detail.status === "submitted") {
-    await startReview(id, user);
-    detail = (await getRequestDetail(id)) ?? notFound();
-  }
+  const unseen = (await listUnseenNoticeKinds([id])).get(id) ?? [];
   const staff = (await listStaffMembers()).map(({ id: sid, name }) => ({ id: sid, name }));
   const { version: asked } = await searchParams;
   const latest = detail.versions.at(-1);
@@ -56,8 +55,8 @@ export default async function RequestPage({
           <StatusBadge status={detail.status} />
         </div>
         <p className="text-stone-700">
-          {detail.bikeLabel} · <span className="capitalize">{detail.discipline.replace("-", " ")}</span>, {detail.skill}{" "}
-          · received {formatDay(detail.createdAt)}
+          {detail.bikeLabel} · {disciplineLabel(detail.discipline)}, {skillLabel(detail.skill).toLowerCase()} · received{" "}
+          {formatDay(detail.createdAt)}
         </p>
         {shown ? <CalibrationNote output={shown.output} /> : null}
         {detail.status === "declined" && detail.declineReason ? (
@@ -70,6 +69,12 @@ export default async function RequestPage({
             Waiting for the rider&apos;s answer; it will appear under Questions and answers.
           </p>
         ) : null}
+        <ReviewStart
+          requestId={id}
+          status={detail.status}
+          assignedToMe={detail.assignedTunerId === user.id}
+          unseen={unseen}
+        />
         <div className="flex flex-wrap items-end gap-4">
           <AssignForm requestId={id} current={detail.assignedTunerId} staff={staff} />
           {shown ? (

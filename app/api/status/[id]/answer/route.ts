@@ -1,8 +1,8 @@
 // POST /api/status/:id/answer `{ token?, body }`: the rider answers the tuner's question.
-import { recordRiderAnswer } from "@/db/queries/status";
 import { createLimiter } from "@/lib/api/rate-limit";
 import { requireRiderAccess } from "@/lib/api/rider-access";
 import { idParams, json, route } from "@/lib/api/route";
+import { answerShopQuestion } from "@/lib/requests/rider-answer";
 import { riderAnswerSchema } from "@/lib/validations/status";
 
 const limit = createLimiter("rider-answer", 20, 15 * 60);
@@ -12,7 +12,7 @@ export const POST = route(
   { access: "public", limit, params: idParams, notFound: "No such request.", body: riderAnswerSchema },
   async ({ request, params, body }) => {
     await requireRiderAccess(request, params.id, body.token);
-    await recordRiderAnswer(params.id, body.body);
+    await answerShopQuestion(params.id, body.body);
     return json({ status: "in_review" }, 201);
   },
 );

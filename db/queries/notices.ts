@@ -1,0 +1,79 @@
+// Staff notices (db/tables/notices.ts): who to tell about a request, the notices themselves, and
+// the unseen counts the workspace shows. Data access only; lib/notify-staff.ts decides.
+import { and, count, eq, inArray, isNull } from "drizzle-orm";
+import { getDb, type Executor } from "@/db/client";
+import { setupRequests, shopSettings, staffNotices, user, type StaffNoticeKind } from "@/db/schema";
+
+/** The request's number and rider, its assigned tuner (when active) and the shop's own address. */
+export async function findNoticeRecipient(tx: Executor, requestId: string) {
+  const [row] = await tx
+    .select({
+      number: setupRequests.number,
+      riderName: setupRequests.riderName,
+      bikeLabel: setupRequests.bikeLabel,
+      tunerEmail: user.email,
+      tunerName: user.name,
+      tunerBanned: user.banned,
+    })
+    .from(setupRequests)
+    .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
+    .where(eq(setupRequests.id, requestId));
+  if (!row) return null;
+  const [shop] = await tx.select({ email: shopSettings.email, name: shopSettings.name }).from(shopSettings).limit(1);
+  return { ...row, shopEmail: shop?.email ?? null, shopName: shop?.name ?? null };
+}
+
+export async function insertStaffNotice(tx: Executor, values: typeof staffNotices.$inferInsert) {
+  const [row] = await tx.insert(staffNotices).values(values).returning();
+  return row!;
+}
+
+/** Unseen notices per kind, for the navigation. */
+export async function countUnseenNotices(): Promise<Record<StaffNoticeKind, number> & { total: number }> {
+  const db = await getDb();
+  const rows = await db
+    .select({ kind: staffNotices.kind, n: count() })
+    .from(staffNotices)
+    .where(isNull(staffNotices.seenAt))
+    .groupBy(staffNotices.kind);
+  const out = { "new-request": 0, "rider-answered": 0, "sag-reported": 0, "payment-received": 0, total: 0 };
+  for (const r of rows) {
+    out[r.kind] = r.n;
+    out.total += r.n;
+  }
+  return out;
+}
+
+/** The kinds of unseen notice on each of `requestIds`, for the marks in the queue. */
+export async function listUnseenNoticeKinds(requestIds: string[]): Promise<Map<string, StaffNoticeKind[]>> {
+  const out = new Map<string, StaffNoticeKind[]>();
+  if (!requestIds.length) return out;
+  const db = await getDb();
+  const rows = await db
+    .selectDistinct({ requestId: staffNotices.requestId, kind: staffNotices.kind })
+    .from(staffNotices)
+    .where(and(isNull(staffNotices.seenAt), inArray(staffNotices.requestId, requestIds)));
+  for (const r of rows) out.set(r.requestId, [...(out.get(r.requestId) ?? []), r.kind]);
+  return out;
+}
+
+/** Marks the request's unseen notices (of `kinds`, or all) seen; returns the kinds that were marked. */
+export async function markNoticesSeen(
+  tx: Executor,
+  requestId: string,
+  userId: string,
+  kinds?: StaffNoticeKind[],
+): Promise<StaffNoticeKind[]> {
+  const rows = await tx
+    .update(staffNotices)
+    .set({ seenAt: new Date(), seenBy: userId })
+    .where(
+      and(
+        eq(staffNotices.requestId, requestId),
+        isNull(staffNotices.seenAt),
+        kinds ? inArray(staffNotices.kind, kinds) : undefined,
+      ),
+    )
+    .returning({ kind: staffNotices.kind });
+  return rows.map((r) => r.kind);
+}
