@@ -64,7 +64,7 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
 
   // The audit timeline shows the override with old and new values.
   const history = page.getByRole("region", { name: "History" });
-  await expect(history).toContainText(`front.oilLevelMm: engine's choice → ${engineOil + 10}`);
+  await expect(history).toContainText(`Fork oil level (mm): engine's choice → ${engineOil + 10}`);
 
   let sheetMail: { subject: string; text?: string; html?: string } | undefined;
   await expect
