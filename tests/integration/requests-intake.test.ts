@@ -111,8 +111,15 @@ describe("POST /api/requests, valid", () => {
     expect((await listAuditForRequest(body.id)).map((a) => a.action)).toEqual(["request.submitted"]);
     await drainOutbox();
     const audit = await listAuditForRequest(body.id);
-    expect(audit.map((a) => a.action)).toEqual(["request.submitted", "email.sent"]);
-    const mail = app.sent.at(-1)!;
+    // Two e-mails: the rider's confirmation and the shop's notice of a new request (lib/notify-staff.ts).
+    expect(audit.map((a) => a.action)).toEqual(["request.submitted", "email.sent", "email.sent"]);
+    expect(
+      audit
+        .map((a) => (a.detail as { template?: string }).template)
+        .slice(1)
+        .sort(),
+    ).toEqual(["request-received", "staff-notice"]);
+    const mail = app.sent.find((m) => m.to.includes("test.rider@example.test") && m.text.includes(body.statusUrl))!;
     expect(mail.to).toEqual(["test.rider@example.test"]);
     expect(mail.text).toContain(body.statusUrl);
   });
@@ -133,14 +140,17 @@ describe("POST /api/requests, valid", () => {
       const response = await postJson(answers({ rider: { ...answers().rider, email: "patient.rider@example.test" } }));
       expect(response.status).toBe(201);
       const { id } = (await response.json()) as { id: string };
-      const [row] = await listOutboundEmailsForRequest(id);
+      const riderMail = async () =>
+        (await listOutboundEmailsForRequest(id)).find((r) => r.template === "request-received");
       // Queued with the request in its transaction; the worker was kicked and is now waiting on the API.
-      expect(row).toMatchObject({ template: "request-received", toAddress: "patient.rider@example.test" });
+      expect(await riderMail()).toMatchObject({ toAddress: "patient.rider@example.test", status: "queued" });
+      // The first of the two e-mails (the rider's confirmation, the shop's notice) is held by the API;
+      // the worker sends one at a time, so the other waits behind it, still queued.
       await expect.poll(() => calls, { timeout: 10_000 }).toBe(1);
-      expect((await listOutboundEmailsForRequest(id))[0]?.status).toBe("queued");
+      expect((await riderMail())?.status).toBe("queued");
       release();
       await stopOutboxWorker();
-      expect((await listOutboundEmailsForRequest(id))[0]?.status).toBe("sent");
+      expect((await riderMail())?.status).toBe("sent");
     } finally {
       release();
       await stopOutboxWorker();

@@ -167,11 +167,12 @@ describe("setup sheet of seeded approved request r09", () => {
   it("lists every starting clicker position counted out from fully closed, beside stock", () => {
     expect(flat).toContain("count out");
     expect(flat).toContain("fully closed");
+    // The shop's one vocabulary (lib/labels.ts), the same words as on screen.
     const names = {
       forkCompression: "Fork compression",
       forkRebound: "Fork rebound",
-      shockLowSpeedCompression: "Shock compression, low speed",
-      shockHighSpeedCompression: "Shock compression, high speed",
+      shockLowSpeedCompression: "Shock low-speed compression",
+      shockHighSpeedCompression: "Shock high-speed compression",
       shockRebound: "Shock rebound",
     } as const;
     for (const c of rec.clickers) {

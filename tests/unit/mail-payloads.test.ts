@@ -20,6 +20,7 @@ import { emailTemplateNames } from "@/emails";
 import { appBaseUrl, mailBaseUrl } from "@/lib/env";
 import { configureOutbox, drainOutbox, queueTemplateEmail, resetOutboxPolicy } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
+import { notifyStaff } from "@/lib/notify-staff";
 import { renderSetupSheet } from "@/lib/pdf";
 import { demoSheetData } from "@/lib/pdf/demo-data";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
@@ -193,6 +194,18 @@ describe("rider e-mails through notifyRider", () => {
     expect(old.status).toBe(200);
     // The superseded sheet says so, so a rider holding the old file knows to use the new one.
     expect(pdfText(new Uint8Array(await old.arrayBuffer()))).toContain("A newer version of this sheet exists");
+  });
+});
+
+describe("notices to the shop through notifyStaff", () => {
+  it("staff-notice: to the assigned tuner, with the link that opens the request in the workspace", async () => {
+    listen();
+    // r09 is assigned to the tuner Teo Brambleton (db/seed-data.ts).
+    await notifyStaff(await getDb(), { kind: "rider-answered", requestId: r09 });
+    await drainOutbox({ settle: true });
+    const mail = lastPayload("staff-notice", "tuner@sagwise.test");
+    expect(mail.subject).toBe("The rider answered your question: request 9 (Dario Lindqvist)");
+    expect(linkIn(mail, `/shop/requests/${r09}`)).toBe(`${appBaseUrl()}/shop/requests/${r09}`);
   });
 });
 
