@@ -109,7 +109,7 @@ export const RATE_TRIGGER_LABELS: Record<string, string> = {
   "front-softer": "Softer fork spring",
 };
 
-export const ROLE_LABELS: Record<string, string> = { admin: "Owner", tuner: "Tuner", rider: "Rider" };
+export const ROLE_LABELS: Record<string, string> = { admin: "Admin", tuner: "Tuner", rider: "Rider" };
 
 export const VERSION_STATUS_LABELS: Record<string, string> = {
   draft: "Draft",

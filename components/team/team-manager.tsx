@@ -5,6 +5,8 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/lib/api-client";
+import { formatDay } from "@/lib/format";
+import { roleLabel } from "@/lib/labels";
 import { InviteForm, type InviteMessage } from "./invite-form";
 
 export interface Member {
@@ -32,6 +34,22 @@ export function TeamManager({
 }) {
   const router = useRouter();
   const [message, setMessage] = useState<InviteMessage | null>(null);
+
+  async function invite(i: OpenInvite, method: "POST" | "DELETE") {
+    const r = await callApi(`/api/shop/team/invites/${i.id}`, method);
+    setMessage(
+      r.ok
+        ? {
+            ok: true,
+            text:
+              method === "POST"
+                ? `Invitation sent again to ${i.email} with a new link (valid 7 days); the earlier link no longer works.`
+                : `Invitation to ${i.email} revoked: its link no longer works.`,
+          }
+        : { ok: false, text: r.error },
+    );
+    router.refresh();
+  }
 
   async function change(id: string, body: { role?: string; active?: boolean }) {
     const r = await callApi(`/api/shop/team/${id}`, "PATCH", body);
@@ -118,10 +136,29 @@ export function TeamManager({
           <h2 id="open-invites" className="mb-2 font-semibold">
             Open invitations
           </h2>
-          <ul className="text-sm">
+          <ul className="flex flex-col gap-2 text-sm">
             {invites.map((i) => (
-              <li key={i.id}>
-                {i.email} as {i.role}, until {i.expiresAt.slice(0, 10)}
+              <li
+                key={i.id}
+                className="flex flex-wrap items-center gap-2 rounded-lg border border-stone-200 bg-white p-2"
+              >
+                <span className="min-w-0 flex-1 break-all">
+                  {i.email} as {roleLabel(i.role).toLowerCase()}, link valid until {formatDay(i.expiresAt)}
+                </span>
+                <Button
+                  variant="secondary"
+                  onClick={() => invite(i, "POST")}
+                  aria-label={`Resend the invitation to ${i.email}`}
+                >
+                  Resend
+                </Button>
+                <Button
+                  variant="danger"
+                  onClick={() => invite(i, "DELETE")}
+                  aria-label={`Revoke the invitation to ${i.email}`}
+                >
+                  Revoke
+                </Button>
               </li>
             ))}
           </ul>

@@ -23,8 +23,28 @@ export async function listOpenInvites(now = new Date()) {
       createdAt: staffInvites.createdAt,
     })
     .from(staffInvites)
-    .where(and(isNull(staffInvites.acceptedAt), gt(staffInvites.expiresAt, now)))
+    .where(and(isNull(staffInvites.acceptedAt), isNull(staffInvites.revokedAt), gt(staffInvites.expiresAt, now)))
     .orderBy(desc(staffInvites.createdAt));
+}
+
+const openNow = (id: string) =>
+  and(eq(staffInvites.id, id), isNull(staffInvites.acceptedAt), isNull(staffInvites.revokedAt));
+
+/** A new token and expiry for an invitation not yet used or withdrawn; null when there is none. */
+export async function renewInvite(
+  tx: Executor,
+  id: string,
+  values: { tokenHash: string; expiresAt: Date },
+): Promise<StaffInviteRow | null> {
+  const [row] = await tx.update(staffInvites).set(values).where(openNow(id)).returning();
+  return row ?? null;
+}
+
+/** Withdraws an invitation not yet used; null when there is none to withdraw. */
+export async function revokeInvite(id: string, executor?: Executor): Promise<StaffInviteRow | null> {
+  const db = executor ?? (await getDb());
+  const [row] = await db.update(staffInvites).set({ revokedAt: new Date() }).where(openNow(id)).returning();
+  return row ?? null;
 }
 
 export async function findInviteByTokenHash(tokenHash: string): Promise<StaffInviteRow | null> {
@@ -39,13 +59,13 @@ export async function lockInvite(tx: Executor, id: string): Promise<StaffInviteR
   return row ?? null;
 }
 
-/** Marks the invitation used; false when someone used it first. */
+/** Marks the invitation used; false when someone used it first (or it was withdrawn meanwhile). */
 export async function markInviteAccepted(id: string, executor?: Executor): Promise<boolean> {
   const db = executor ?? (await getDb());
   const rows = await db
     .update(staffInvites)
     .set({ acceptedAt: new Date() })
-    .where(and(eq(staffInvites.id, id), isNull(staffInvites.acceptedAt)))
+    .where(openNow(id))
     .returning({ id: staffInvites.id });
   return rows.length > 0;
 }

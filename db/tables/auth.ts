@@ -85,6 +85,8 @@ export const staffInvites = pgTable(
     invitedById: text("invited_by_id").references(() => user.id, { onDelete: "set null" }),
     expiresAt: timestamp("expires_at", { withTimezone: true }).notNull(),
     acceptedAt: timestamp("accepted_at", { withTimezone: true }),
+    // Withdrawn by an admin before it was used: the link no longer works.
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [index("staff_invites_email_idx").on(t.email)],

@@ -1,7 +1,14 @@
 // Creating staff accounts outside the sign-up flow (open sign-up is off): the seed and the admin's
 // invitations. The password is hashed by better-auth's own hasher, so sign-in verifies it.
 import { createHash, randomBytes, randomUUID } from "node:crypto";
-import { findInviteByTokenHash, insertInvite, lockInvite, markInviteAccepted } from "@/db/queries/invites";
+import {
+  findInviteByTokenHash,
+  insertInvite,
+  lockInvite,
+  markInviteAccepted,
+  renewInvite,
+  revokeInvite,
+} from "@/db/queries/invites";
 import { getShopName } from "@/db/queries/settings";
 import { countActiveAdmins, findUserByEmail, getStaffMember, insertStaffUser, promoteToStaff } from "@/db/queries/team";
 import { inTransaction } from "@/db/queries/transaction";
@@ -79,11 +86,52 @@ export async function inviteStaff(
   return { id: invite.id, email, role: input.role, expiresAt: invite.expiresAt, mailStatus: mail.status };
 }
 
+/**
+ * Sends an open invitation again with a fresh link (the old link stops working: only the hash of
+ * the newest token is kept) and a fresh 7 days.
+ */
+export async function resendInvite(id: string, inviter: { id: string; name: string }) {
+  const token = randomBytes(32).toString("base64url");
+  const url = new URL(`/invite/${token}`, appBaseUrl()).toString();
+  const { invite, mail } = await inTransaction(async (tx) => {
+    const invite = await renewInvite(tx, id, {
+      tokenHash: hashInviteToken(token),
+      expiresAt: new Date(Date.now() + INVITE_DAYS * 24 * 3600 * 1000),
+    });
+    if (!invite) throw new NotFoundError("This invitation was used or withdrawn meanwhile.");
+    const role = invite.role === "admin" ? "admin" : "tuner";
+    const mail = await queueTemplateEmail(
+      tx,
+      "staff-invite",
+      { url, role, inviterName: inviter.name, shopName: await getShopName(tx) },
+      { to: invite.email },
+    );
+    return { invite, mail };
+  });
+  kickOutbox();
+  return {
+    id: invite.id,
+    email: invite.email,
+    role: invite.role,
+    expiresAt: invite.expiresAt,
+    mailStatus: mail.status,
+  };
+}
+
+/** Withdraws an open invitation: its link stops working at once. */
+export async function withdrawInvite(id: string) {
+  const invite = await revokeInvite(id);
+  if (!invite) throw new NotFoundError("This invitation was used or withdrawn meanwhile.");
+  return { id: invite.id, email: invite.email };
+}
+
 /** The open invitation behind a token, or a domain error saying why it cannot be used. */
 export async function openInvite(token: string) {
   const invite = await findInviteByTokenHash(hashInviteToken(token));
   if (!invite) throw new NotFoundError("This invitation link is not valid.");
   if (invite.acceptedAt) throw new ConflictError("This invitation has already been used. Sign in instead.");
+  if (invite.revokedAt)
+    throw new ConflictError("This invitation was withdrawn by the shop. Ask the shop admin for a new one.");
   if (invite.expiresAt <= new Date())
     throw new ConflictError("This invitation has expired. Ask the shop admin for a new one.");
   return invite;

@@ -5,7 +5,12 @@ import { text } from "./text";
 export const staffRoleSchema = z.enum(["tuner", "admin"], { message: "Choose tuner or admin" });
 
 export const inviteSchema = z.object({
-  email: text().trim().toLowerCase().email("Enter the person's e-mail address"),
+  email: text()
+    .trim()
+    .toLowerCase()
+    .min(1, "Enter the person's e-mail address")
+    .max(254, "An e-mail address has at most 254 characters")
+    .email("This is not an e-mail address: it needs a name, an @ and a domain, like sam@example.com"),
   role: staffRoleSchema,
 });
 

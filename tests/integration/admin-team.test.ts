@@ -5,6 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GET as listTeam, POST as invite } from "@/app/api/shop/team/route";
 import { PATCH as patchMember } from "@/app/api/shop/team/[id]/route";
 import { POST as accept } from "@/app/api/invite/accept/route";
+import { DELETE as revoke, POST as resend } from "@/app/api/shop/team/invites/[id]/route";
 import { GET as listCatalog } from "@/app/api/shop/catalog/route";
 import { findUserByEmail, listStaff } from "@/db/queries/team";
 import { getDb } from "@/db/client";
@@ -158,6 +159,58 @@ describe("invitations", () => {
     const db = await getDb();
     const row = (await db.select().from(staffInvites)).find((r) => r.email === email)!;
     expect(row.acceptedAt).toBeNull();
+  });
+
+  it("says what is wrong with 'not-an-email' in the shop's words", async () => {
+    const response = await noCtx(invite)(
+      jsonRequest("/api/shop/team", "POST", owner, { email: "not-an-email", role: "tuner" }),
+    );
+    expect(response.status).toBe(400);
+    const { fields } = (await response.json()) as { fields: Record<string, string> };
+    expect(fields.email).toBe(
+      "This is not an e-mail address: it needs a name, an @ and a domain, like sam@example.com",
+    );
+    const empty = await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email: " ", role: "tuner" }));
+    expect(((await empty.json()) as { fields: Record<string, string> }).fields.email).toBe(
+      "Enter the person's e-mail address",
+    );
+  });
+
+  it("resend: a fresh link goes out and the old one stops working; revoke: the link stops working, audited", async () => {
+    const email = "resend.me@example.test";
+    expect((await noCtx(invite)(jsonRequest("/api/shop/team", "POST", owner, { email, role: "tuner" }))).status).toBe(
+      201,
+    );
+    const first = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
+    const db = await getDb();
+    const id = (await db.select().from(staffInvites)).find((r) => r.email === email)!.id;
+
+    expect((await resend(jsonRequest(`/api/shop/team/invites/${id}`, "POST", tuner), idContext(id))).status).toBe(403);
+    const resent = await resend(jsonRequest(`/api/shop/team/invites/${id}`, "POST", owner), idContext(id));
+    expect(resent.status).toBe(200);
+    const second = decodeURIComponent(new URL((await inviteLink(email))!).pathname.split("/").pop()!);
+    expect(second).not.toBe(first);
+    const body = (token: string) => ({ token, name: "Resent Tuner", password: "a-long-password-1" });
+    // Only the newest link works.
+    expect((await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, body(first)))).status).toBe(404);
+
+    const revoked = await revoke(jsonRequest(`/api/shop/team/invites/${id}`, "DELETE", owner), idContext(id));
+    expect(revoked.status).toBe(200);
+    const refused = await noCtx(accept)(jsonRequest("/api/invite/accept", "POST", undefined, body(second)));
+    expect(refused.status).toBe(409);
+    expect(((await refused.json()) as { error: string }).error).toMatch(/withdrawn/);
+    expect(await findUserByEmail(email)).toBeNull();
+    const listed = (await (await noCtx(listTeam)(jsonRequest("/api/shop/team", "GET", owner))).json()) as {
+      invites: { email: string }[];
+    };
+    expect(listed.invites.map((i) => i.email)).not.toContain(email);
+    // Nothing left to resend or revoke.
+    expect((await resend(jsonRequest(`/api/shop/team/invites/${id}`, "POST", owner), idContext(id))).status).toBe(404);
+    expect((await revoke(jsonRequest(`/api/shop/team/invites/${id}`, "DELETE", owner), idContext(id))).status).toBe(
+      404,
+    );
+    const actions = (await db.select().from(auditEvents)).map((e) => e.action);
+    expect(actions).toEqual(expect.arrayContaining(["staff.invite_resent", "staff.invite_revoked"]));
   });
 
   it("an unknown token is a 404", async () => {

@@ -12,7 +12,7 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { POST as submit } from "@/app/api/requests/route";
 import { POST as addStock } from "@/app/api/shop/stock/route";
 import { getDb } from "@/db/client";
-import { springStock, user } from "@/db/schema";
+import { springStock, staffInvites, user } from "@/db/schema";
 import { stableUuid } from "@/db/seed-demo";
 import { getEnv } from "@/lib/env";
 import { setupTestApp } from "../helpers/app";
@@ -76,6 +76,8 @@ const EXPECTED: Record<string, Row> = {
   "GET /api/shop/team": adminOnly,
   "POST /api/shop/team": adminOnly,
   "PATCH /api/shop/team/[id]": adminOnly,
+  "POST /api/shop/team/invites/[id]": adminOnly,
+  "DELETE /api/shop/team/invites/[id]": adminOnly,
   "POST /api/status/[id]/answer": ridersOwn,
   "POST /api/status/[id]/sag": ridersOwn,
   "GET /api/uploads/[id]": { anonymous: 401, riderA: "ok", riderB: 404, tuner: "ok", admin: "ok" },
@@ -125,6 +127,15 @@ beforeAll(async () => {
   const [tuner2] = await db.select({ id: user.id }).from(user).where(eq(user.email, "tuner2@sagwise.test"));
   ids.stock = stock!.id;
   ids.member = tuner2!.id;
+  // An open invitation for the resend and revoke probes (only its hash would ever be e-mailed).
+  ids.invite = stableUuid("invite:role-matrix");
+  await db.insert(staffInvites).values({
+    id: ids.invite,
+    email: "invited.probe@example.test",
+    role: "tuner",
+    tokenHash: "0".repeat(64),
+    expiresAt: new Date(Date.now() + 86_400_000),
+  });
   // A photo of rider A's: submitted as a rider would, then found through the request's status.
   const form = new FormData();
   form.set(
@@ -178,11 +189,13 @@ function target(route: string, method: string): { url: string; params: Record<st
         ? ids.bike
         : route.startsWith("/api/shop/stock/")
           ? ids.stock
-          : route.startsWith("/api/shop/team/")
-            ? ids.member
-            : route.startsWith("/api/uploads/")
-              ? ids.upload
-              : undefined;
+          : route.startsWith("/api/shop/team/invites/")
+            ? ids.invite
+            : route.startsWith("/api/shop/team/")
+              ? ids.member
+              : route.startsWith("/api/uploads/")
+                ? ids.upload
+                : undefined;
   return { url: route.replace("[id]", id ?? "") + (PROBE_QUERY[`${method} ${route}`] ?? ""), params: id ? { id } : {} };
 }
 
