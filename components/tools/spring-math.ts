@@ -1,5 +1,8 @@
 // The workshop tools' arithmetic, on top of the engine's spring functions (lib/sizing). Pure.
 import {
+  coilStressVerdict,
+  type SpringSteel,
+  type StressVerdict,
   KGF_N,
   LBF_N,
   rateFromLoadTest,
@@ -17,6 +20,8 @@ export interface CoilReport {
   rate: ReturnType<typeof rateTriple>;
   wahlFactor: number;
   shearStressMpa: number;
+  /** Against the wire's allowable stress; null without a load to check. */
+  verdict: StressVerdict | null;
 }
 
 /** Rate, index, Wahl factor and corrected shear stress of a helical compression spring (Shigley ch. 10). */
@@ -27,6 +32,7 @@ export function coilReport(g: {
   endType: EndType;
   shearModulusMpa: number;
   loadN: number;
+  steel?: SpringSteel;
 }): CoilReport {
   const D = g.outerDiameterMm - g.wireDiameterMm; // mean diameter = OD − d
   const na = activeCoils(g.totalCoils, g.endType); // Shigley table 10-1
@@ -37,13 +43,22 @@ export function coilReport(g: {
     shearModulusMpa: g.shearModulusMpa,
   });
   const C = D / g.wireDiameterMm;
+  const tau = shearStressMpa({ forceN: g.loadN, wireDiameterMm: g.wireDiameterMm, meanCoilDiameterMm: D });
   return {
     meanDiameterMm: D,
     springIndex: C,
     activeCoils: na,
     rate: rateTriple(k),
     wahlFactor: wahlFactor(C),
-    shearStressMpa: shearStressMpa({ forceN: g.loadN, wireDiameterMm: g.wireDiameterMm, meanCoilDiameterMm: D }),
+    shearStressMpa: tau,
+    verdict:
+      g.loadN > 0
+        ? coilStressVerdict({
+            steel: g.steel ?? "chrome-silicon",
+            wireDiameterMm: g.wireDiameterMm,
+            shearStressMpa: tau,
+          })
+        : null,
   };
 }
 

@@ -58,6 +58,14 @@ export {
   springSteelVolumeMm3,
 } from "./spring-geometry";
 export {
+  SPRING_STEELS,
+  SPRING_STEEL_IDS,
+  coilStressVerdict,
+  minTensileStrengthMpa,
+  type SpringSteel,
+  type StressVerdict,
+} from "./spring-steel";
+export {
   convertRate,
   rateTriple,
   pressureTriple,

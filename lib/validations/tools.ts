@@ -1,6 +1,6 @@
 // Workshop tools: inputs of the spring calculators. Pure schemas; the tools compute in the browser.
 import { z } from "zod";
-import { rateUnitSchema } from "@/lib/sizing";
+import { SPRING_STEEL_IDS, rateUnitSchema, type SpringSteel } from "@/lib/sizing";
 
 /** Shigley, Mechanical Engineering Design, 10th ed., table 10-1: active coils per end type. */
 export const END_TYPES = {
@@ -32,7 +32,14 @@ export const coilGeometrySchema = z
     totalCoils: pos("Total coils", 60),
     endType: endTypeSchema,
     shearModulusMpa: pos("Shear modulus", 200_000),
-    loadN: z.number().min(0, "Load cannot be negative").max(100_000),
+    loadN: z
+      .number({ message: "Enter the load in N (0 for no stress check)" })
+      .min(0, "Load cannot be negative")
+      .max(100_000, "Load looks too large (at most 100 000 N)"),
+    /** The wire's steel, for the allowable stress (lib/sizing/spring-steel.ts). */
+    steel: z
+      .enum(SPRING_STEEL_IDS as [SpringSteel, ...SpringSteel[]], { message: "Choose the wire's steel" })
+      .default("chrome-silicon"),
   })
   .superRefine((g, ctx) => {
     if (g.outerDiameterMm - g.wireDiameterMm <= g.wireDiameterMm)

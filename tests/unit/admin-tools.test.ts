@@ -37,6 +37,21 @@ describe("spring check from wire and coils", () => {
     expect(r.wahlFactor).toBeCloseTo(1.184018, 5);
     // Shigley eqs. 10-1/10-4 by hand: τ = 1.184018·8·300·40 / (π·125) = 113 665.7 / 392.699 = 289.45 MPa.
     expect(r.shearStressMpa).toBeCloseTo(289.45, 1);
+    // Against chrome-silicon wire (the default): S_ut = 1974/5^0.108 = 1659.0 MPa, 50 % allowed (Shigley
+    // 10th ed. tables 10-4 and 10-6, from memory): 829.5 MPa, margin 829.5/289.45 − 1 = 1.866.
+    expect(r.verdict).toMatchObject({ pass: true, steel: "chrome-silicon" });
+    expect(r.verdict!.allowableShearMpa).toBeCloseTo(829.5, 0);
+    expect(r.verdict!.margin).toBeCloseTo(829.5 / 289.45 - 1, 2);
+  });
+
+  it("fails the same spring at 900 N (τ = 868.4 MPa, over 829.5), and gives no verdict without a load", () => {
+    const geometry = { wireDiameterMm: 5, outerDiameterMm: 45, totalCoils: 12, shearModulusMpa: 79_300 } as const;
+    const over = coilReport({ ...geometry, endType: "squared-ground", loadN: 900 });
+    // τ scales with the load: 289.45 · 3 = 868.4 MPa.
+    expect(over.shearStressMpa).toBeCloseTo(868.4, 0);
+    expect(over.verdict!.pass).toBe(false);
+    expect(over.verdict!.margin).toBeLessThan(0);
+    expect(coilReport({ ...geometry, endType: "squared-ground", loadN: 0 }).verdict).toBeNull();
   });
 
   it("refuses an outer diameter not above twice the wire, and too few coils, naming the field", () => {
