@@ -2,6 +2,7 @@
 // "the engine's choice". Rates may be typed in any rate unit and are converted to N/mm with the
 // engine's exact factors (convertRate).
 import { z } from "zod";
+import { outOfBikeRange } from "@/lib/review/override-bounds";
 import { compactOverrides } from "@/lib/review/overrides-diff";
 import {
   CLICKER_IDS,
@@ -10,6 +11,7 @@ import {
   type RateBasis,
   type RateUnit,
   type SetupOverrides,
+  type SizingInput,
 } from "@/lib/sizing";
 import { saveRecommendationSchema } from "@/lib/validations/review";
 
@@ -114,7 +116,7 @@ export function overridesFrom(v: EditorValues, airFork: boolean): { overrides: S
  * they make must pass the same schema the save endpoint uses (saveRecommendationSchema). Errors are
  * keyed by the engine's paths ("rear.rateNmm"), as the inputs and the server name them.
  */
-export function editorSchema(airFork: boolean) {
+export function editorSchema(airFork: boolean, input?: SizingInput) {
   return z
     .custom<EditorValues>((v) => typeof v === "object" && v !== null)
     .superRefine((values, ctx) => {
@@ -124,6 +126,10 @@ export function editorSchema(airFork: boolean) {
       if (!checked.success)
         for (const issue of checked.error.issues)
           ctx.addIssue({ code: "custom", path: [issue.path.join(".")], message: issue.message });
+      // The bike's own ranges (oil level, preload, clickers): refused, never clamped quietly.
+      if (input)
+        for (const [path, message] of Object.entries(outOfBikeRange(input, overrides)))
+          if (!errors[path]) ctx.addIssue({ code: "custom", path: [path], message });
     });
 }
 

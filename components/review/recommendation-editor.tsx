@@ -14,6 +14,7 @@ import { callApi, errorWithFields } from "@/lib/api-client";
 import { diffOverrides } from "@/lib/review/overrides-diff";
 import type { SetupOverrides, SizingInput } from "@/lib/sizing";
 import { editorSchema, flatErrors, overridesFrom, valuesFrom, type EditorValues } from "./editor-state";
+import { ApproveConfirm, type ApproveRider } from "./approve-confirm";
 import { ClickerInputs, FrontInputs, RearInputs } from "./figure-inputs";
 import { evaluateLive } from "./live-result";
 import { NotesInputs } from "./notes-inputs";
@@ -35,10 +36,13 @@ export function RecommendationEditor({
   requestId,
   input,
   latest,
+  rider,
 }: {
   requestId: string;
   input: SizingInput;
   latest: EditableVersion;
+  /** Who the approval e-mails, shown before approving. */
+  rider: ApproveRider;
 }) {
   const router = useRouter();
   const initial = useMemo(() => valuesFrom(latest.overrides, latest.notesForRider, latest.internalNotes), [latest]);
@@ -46,6 +50,7 @@ export function RecommendationEditor({
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const [busy, setBusy] = useState(false);
   const [acknowledged, setAcknowledged] = useState(false);
+  const [confirming, setConfirming] = useState(false);
 
   const engine = useMemo(() => evaluateLive(input, {}), [input]);
   const air = engine.ok && engine.rec.front.kind === "air";
@@ -54,7 +59,7 @@ export function RecommendationEditor({
   const form = useForm<EditorValues>({
     defaultValues: initial,
     mode: "onChange",
-    resolver: zodResolver(editorSchema(air) as never) as unknown as Resolver<EditorValues>,
+    resolver: zodResolver(editorSchema(air, input) as never) as unknown as Resolver<EditorValues>,
   });
   const values = { ...initial, ...useWatch({ control: form.control }) } as EditorValues;
   const schemaErrors = flatErrors(form.formState.errors);
@@ -87,6 +92,7 @@ export function RecommendationEditor({
       form.setValue(name as keyof EditorValues, value as never, { shouldDirty: true, shouldValidate: true });
     setServerErrors({});
     setMessage(null);
+    setConfirming(false);
   };
 
   async function save(): Promise<number | null> {
@@ -112,6 +118,7 @@ export function RecommendationEditor({
   async function run(action: "save" | "approve") {
     setBusy(true);
     setMessage(null);
+    setConfirming(false);
     try {
       let version: number | null = latest.version;
       if (dirty) version = await save();
@@ -215,8 +222,8 @@ export function RecommendationEditor({
               {frozen ? `Save as version ${latest.version + 1} (draft)` : "Save draft"}
             </Button>
             <Button
-              onClick={() => void form.handleSubmit(() => run("approve"))()}
-              disabled={busy || invalid || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}
+              onClick={() => void form.handleSubmit(() => setConfirming(true))()}
+              disabled={busy || invalid || confirming || (frozen && !dirty) || (critical.length > 0 && !acknowledged)}
             >
               {dirty ? "Save and approve" : "Approve"} — e-mail the rider
             </Button>
@@ -232,6 +239,18 @@ export function RecommendationEditor({
               Undo unsaved changes
             </Button>
           </div>
+          {confirming ? (
+            <ApproveConfirm
+              rider={rider}
+              version={frozen ? latest.version + 1 : latest.version}
+              revised={frozen || latest.version > 1}
+              rec={r}
+              notesForRider={values.notesForRider}
+              busy={busy}
+              onConfirm={() => void run("approve")}
+              onCancel={() => setConfirming(false)}
+            />
+          ) : null}
         </form>
         <div className="flex flex-col gap-4">
           <ResultsTable engine={engine.rec} current={r} caption="Consequences, recomputed as you type" />

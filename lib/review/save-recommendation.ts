@@ -6,6 +6,7 @@ import { insertVersion, updateDraftVersion } from "@/db/queries/review-steps";
 import { inTransaction } from "@/db/queries/transaction";
 import { getLatestVersion } from "@/db/queries/versions";
 import { ConflictError, ValidationError } from "@/lib/errors";
+import { outOfBikeRange } from "@/lib/review/override-bounds";
 import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
 import { ALLOWED_FROM } from "@/lib/review/transitions";
 import { SizingInputError, evaluateSetup, type SetupOverrides, type SizingInput } from "@/lib/sizing";
@@ -32,6 +33,12 @@ export async function saveRecommendationDraft(requestId: string, body: SaveRecom
     if (latest.version !== body.basedOnVersion)
       throw new ConflictError(
         `Version ${latest.version} was saved meanwhile (you edited version ${body.basedOnVersion}). Reload to see it; your edits are still on screen.`,
+      );
+    const outside = outOfBikeRange(latest.input, overrides);
+    if (Object.keys(outside).length)
+      throw new ValidationError(
+        "Some figures are outside this bike's ranges.",
+        Object.fromEntries(Object.entries(outside).map(([path, message]) => [`overrides.${path}`, message])),
       );
     const output = recompute(latest.input, overrides);
     const changes = diffOverrides(latest.overrides, overrides);

@@ -14,20 +14,27 @@ import { rateBasisSchema } from "./vocab";
 import { DEFAULT_GEAR_MASS_KG, FREQUENCY_RATIO_WINDOW } from "./defaults";
 
 /** Sag targets as fractions of the end's travel, so one table serves every bike size. */
+// Fractions of travel, entered and read by people as percentages: the messages say "%".
+const fractionOfTravel = (minPct: number, maxPct: number) =>
+  z
+    .number({ message: "Enter a percentage of travel" })
+    .min(minPct / 100, `At least ${minPct} % of travel`)
+    .max(maxPct / 100, `At most ${maxPct} % of travel`);
+
 export const sagTargetFractionsSchema = z
   .object({
-    rearRace: z.number().min(0.05).max(0.6),
-    rearStaticMin: z.number().min(0).max(0.5),
-    rearStaticMax: z.number().min(0).max(0.5),
-    forkRace: z.number().min(0.05).max(0.6),
-    forkStaticMin: z.number().min(0).max(0.5),
-    forkStaticMax: z.number().min(0).max(0.5),
+    rearRace: fractionOfTravel(5, 60),
+    rearStaticMin: fractionOfTravel(0, 50),
+    rearStaticMax: fractionOfTravel(0, 50),
+    forkRace: fractionOfTravel(5, 60),
+    forkStaticMin: fractionOfTravel(0, 50),
+    forkStaticMax: fractionOfTravel(0, 50),
   })
   .superRefine((t, ctx) => {
     const bad = (k: string, m: string) => ctx.addIssue({ code: "custom", path: [k], message: m });
-    if (t.rearStaticMax < t.rearStaticMin) bad("rearStaticMax", "Must be at least rearStaticMin");
+    if (t.rearStaticMax < t.rearStaticMin) bad("rearStaticMax", "Must be at least the lowest static sag");
     if (t.rearRace <= t.rearStaticMax) bad("rearRace", "Race sag must exceed the static sag window");
-    if (t.forkStaticMax < t.forkStaticMin) bad("forkStaticMax", "Must be at least forkStaticMin");
+    if (t.forkStaticMax < t.forkStaticMin) bad("forkStaticMax", "Must be at least the lowest static sag");
     if (t.forkRace <= t.forkStaticMax) bad("forkRace", "Race sag must exceed the static sag window");
   });
 export type SagTargetFractions = z.output<typeof sagTargetFractionsSchema>;

@@ -55,6 +55,11 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
   await expect(bottoming).toHaveText(/changed \(-\d+\)/);
 
   await page.getByRole("button", { name: /Save and approve/ }).click();
+  // Approving asks first, showing what the rider will be e-mailed.
+  const confirm = page.getByRole("alertdialog", { name: /Approve version 1 and e-mail the rider/ });
+  await expect(confirm).toContainText(rider.email);
+  await expect(confirm).toContainText("is ready");
+  await confirm.getByRole("button", { name: `Approve and e-mail ${rider.name}` }).click();
   await expect(page.getByRole("status").filter({ hasText: "approved" }).first()).toContainText(
     "Version 1 approved. The rider is being e-mailed the sheet link (see E-mails below).",
     { timeout: 20_000 },

@@ -4,6 +4,8 @@ import { describe, expect, it } from "vitest";
 import { editorSchema, flatErrors, overridesFrom, valuesFrom } from "@/components/review/editor-state";
 import { compactOverrides, diffOverrides } from "@/lib/review/overrides-diff";
 import { canStart, conflictMessage } from "@/lib/review/transitions";
+import { demoSizingInput } from "@/lib/pdf/demo-data";
+import { sagTargetFractionsSchema } from "@/lib/sizing";
 
 describe("editorSchema (the form's resolver schema)", () => {
   const empty = valuesFrom({}, null, null);
@@ -33,6 +35,67 @@ describe("editorSchema (the form's resolver schema)", () => {
       clickers: { forkRebound: { type: "custom", message: "0 to 100" } },
     };
     expect(flatErrors(nested)).toEqual({ "rear.rateNmm": "Too soft", "clickers.forkRebound": "0 to 100" });
+  });
+});
+
+describe("the bike's own ranges and the shop's words (no zod default reaches a person)", () => {
+  const empty = valuesFrom({}, null, null);
+  // The 450 four-stroke class: oil level 80–150 mm, clickers 0–22 (fork) and 0–3 turns (shock
+  // high-speed), typical values of lib/sizing/bike-classes.ts.
+  const input = demoSizingInput();
+  const issues = (values: typeof empty) => {
+    const parsed = editorSchema(false, input).safeParse(values);
+    return parsed.success ? {} : Object.fromEntries(parsed.error.issues.map((i) => [i.path.join("."), i.message]));
+  };
+  const fork = input.bike.fork;
+
+  it("refuses an oil level outside the fork's range, naming the range, at 200 mm and at 20 mm", () => {
+    expect(fork.oilLevelMinMm).toBeLessThan(fork.oilLevelMaxMm);
+    for (const oil of [200, 20])
+      expect(issues({ ...empty, frontOilLevel: String(oil) })["front.oilLevelMm"]).toBe(
+        `This fork takes an oil level of ${fork.oilLevelMinMm}–${fork.oilLevelMaxMm} mm (from the top, its catalog range; stock ${fork.stockOilLevelMm} mm). ${oil} mm is outside it: check the fork's service manual.`,
+      );
+    expect(issues({ ...empty, frontOilLevel: String(fork.oilLevelMinMm) })).toEqual({});
+  });
+
+  it("refuses clicker 30 of 22 instead of quietly making it 22, and half clicks", () => {
+    const max = input.bike.clickers.forkCompression.max;
+    expect(issues({ ...empty, clickers: { forkCompression: String(max + 8) } })["clickers.forkCompression"]).toBe(
+      `Fork compression goes from 0 to ${max} clicks on this bike; ${max + 8} is outside it.`,
+    );
+    expect(issues({ ...empty, clickers: { forkCompression: "10.5" } })["clickers.forkCompression"]).toMatch(
+      /whole clicks/,
+    );
+    expect(issues({ ...empty, clickers: { forkCompression: String(max) } })).toEqual({});
+  });
+
+  it("says every schema limit in words: no 'Too small', 'Too big' or 'expected'", () => {
+    const all = Object.values({
+      ...issues({ ...empty, rearRate: "0.5" }),
+      ...issues({ ...empty, rearPreload: "-50" }),
+      ...issues({ ...empty, frontRaceSag: "900" }),
+      ...issues({ ...empty, clickers: { shockRebound: "-1" } }),
+    });
+    expect(all).toContain("At least 1 N/mm");
+    expect(all).toContain("At most 400 mm");
+    for (const message of all) expect(message).not.toMatch(/Too small|Too big|expected|Invalid input/);
+  });
+
+  it("says the setup targets' limits in percent of travel, as they are entered", () => {
+    const base = {
+      rearRace: 0.33,
+      rearStaticMin: 0.08,
+      rearStaticMax: 0.12,
+      forkRace: 0.3,
+      forkStaticMin: 0.06,
+      forkStaticMax: 0.1,
+    };
+    const parsed = sagTargetFractionsSchema.safeParse({ ...base, rearRace: 0.7, forkStaticMin: 0.12 });
+    expect(parsed.success).toBe(false);
+    expect(Object.fromEntries(parsed.error!.issues.map((i) => [i.path.join("."), i.message]))).toEqual({
+      rearRace: "At most 60 % of travel",
+      forkStaticMax: "Must be at least the lowest static sag",
+    });
   });
 });
 

@@ -100,6 +100,7 @@ export default async function RequestPage({
           key={shown.version}
           requestId={id}
           input={shown.input}
+          rider={{ name: detail.riderName, email: detail.riderEmail, requestNumber: detail.number }}
           latest={{
             version: shown.version,
             state: shown.state,
