@@ -77,36 +77,38 @@ export function CsvImport() {
             {report.saved.length} row(s) saved, {report.refused.length} refused.
           </p>
           {report.refused.length ? (
-            <table className="text-left">
-              <thead>
-                <tr>
-                  <th scope="col" className="pr-3">
-                    Row
-                  </th>
-                  <th scope="col" className="pr-3">
-                    Slug
-                  </th>
-                  <th scope="col">What was wrong</th>
-                </tr>
-              </thead>
-              <tbody>
-                {report.refused.map((r) => (
-                  <tr key={r.row} className="align-top">
-                    <td className="pr-3 tabular-nums">{r.row}</td>
-                    <td className="pr-3">{r.slug ?? "—"}</td>
-                    <td>
-                      <ul>
-                        {Object.entries(r.fields).map(([f, m]) => (
-                          <li key={f}>
-                            <code>{f}</code>: {m}
-                          </li>
-                        ))}
-                      </ul>
-                    </td>
+            <div className="max-w-full overflow-x-auto">
+              <table className="text-left">
+                <thead>
+                  <tr>
+                    <th scope="col" className="pr-3">
+                      Row
+                    </th>
+                    <th scope="col" className="pr-3">
+                      Slug
+                    </th>
+                    <th scope="col">What was wrong</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
+                </thead>
+                <tbody>
+                  {report.refused.map((r) => (
+                    <tr key={r.row} className="align-top">
+                      <td className="pr-3 tabular-nums">{r.row}</td>
+                      <td className="pr-3">{r.slug ?? "—"}</td>
+                      <td>
+                        <ul>
+                          {Object.entries(r.fields).map(([f, m]) => (
+                            <li key={f}>
+                              <code>{f}</code>: {m}
+                            </li>
+                          ))}
+                        </ul>
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
           ) : null}
         </div>
       ) : null}

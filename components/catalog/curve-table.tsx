@@ -32,63 +32,65 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
       <legend className="text-sm font-semibold text-stone-800">
         Leverage-ratio curve (wheel travel per shock travel)
       </legend>
-      <table className="text-sm">
-        <thead>
-          <tr className="text-left text-stone-600">
-            <th scope="col" className="pr-2 font-medium">
-              Point
-            </th>
-            <th scope="col" className="pr-2 font-medium">
-              Wheel travel (mm)
-            </th>
-            <th scope="col" className="pr-2 font-medium">
-              Ratio
-            </th>
-            <th scope="col">
-              <span className="sr-only">Remove</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {fields.map((f, i) => (
-            <tr key={f.id}>
-              <td className="pr-2 tabular-nums">{i + 1}</td>
-              <td className="pr-2 py-1">
-                <Field
-                  id={`curve-${i}-y`}
-                  label={`Point ${i + 1} wheel travel (mm)`}
-                  className="[&>label]:sr-only"
-                  inputMode="decimal"
-                  size={6}
-                  error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)}
-                  {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)}
-                />
-              </td>
-              <td className="pr-2 py-1">
-                <Field
-                  id={`curve-${i}-r`}
-                  label={`Point ${i + 1} leverage ratio`}
-                  className="[&>label]:sr-only"
-                  inputMode="decimal"
-                  size={6}
-                  error={errorAt(errors, `${LIST}.${i}.ratio`)}
-                  {...register(`${LIST}.${i}.ratio`, pointOptions)}
-                />
-              </td>
-              <td>
-                <Button
-                  variant="ghost"
-                  aria-label={`Remove point ${i + 1}`}
-                  disabled={fields.length <= 2}
-                  onClick={() => remove(i)}
-                >
-                  Remove
-                </Button>
-              </td>
+      <div className="max-w-full overflow-x-auto">
+        <table className="text-sm">
+          <thead>
+            <tr className="text-left text-stone-600">
+              <th scope="col" className="pr-2 font-medium">
+                Point
+              </th>
+              <th scope="col" className="pr-2 font-medium">
+                Wheel travel (mm)
+              </th>
+              <th scope="col" className="pr-2 font-medium">
+                Ratio
+              </th>
+              <th scope="col">
+                <span className="sr-only">Remove</span>
+              </th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {fields.map((f, i) => (
+              <tr key={f.id}>
+                <td className="pr-2 tabular-nums">{i + 1}</td>
+                <td className="pr-2 py-1">
+                  <Field
+                    id={`curve-${i}-y`}
+                    label={`Point ${i + 1} wheel travel (mm)`}
+                    className="[&>label]:sr-only"
+                    inputMode="decimal"
+                    size={6}
+                    error={errorAt(errors, `${LIST}.${i}.wheelTravelMm`)}
+                    {...register(`${LIST}.${i}.wheelTravelMm`, pointOptions)}
+                  />
+                </td>
+                <td className="pr-2 py-1">
+                  <Field
+                    id={`curve-${i}-r`}
+                    label={`Point ${i + 1} leverage ratio`}
+                    className="[&>label]:sr-only"
+                    inputMode="decimal"
+                    size={6}
+                    error={errorAt(errors, `${LIST}.${i}.ratio`)}
+                    {...register(`${LIST}.${i}.ratio`, pointOptions)}
+                  />
+                </td>
+                <td>
+                  <Button
+                    variant="ghost"
+                    aria-label={`Remove point ${i + 1}`}
+                    disabled={fields.length <= 2}
+                    onClick={() => remove(i)}
+                  >
+                    Remove
+                  </Button>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       {listError ? <p className="text-sm font-medium text-red-700">{listError}</p> : null}
       <Button
         variant="secondary"

@@ -2,6 +2,7 @@
 
 import { DISCIPLINE_LABELS } from "@/lib/labels";
 import { useEffect, useState } from "react";
+import { DayInput } from "@/components/forms/day-input";
 import { Button } from "@/components/ui/button";
 import { STATUS_LABELS } from "@/lib/requests/status";
 import { DISCIPLINES } from "@/lib/sizing/vocab";
@@ -56,7 +57,7 @@ export function QueueFiltersForm({
       onSubmit={(e) => e.preventDefault()}
     >
       <label className={`${labelClass} sm:col-span-2`}>
-        Search rider, e-mail or bike
+        Search rider, e-mail, bike or number
         <input type="search" value={q} onChange={(e) => setQ(e.target.value)} className={selectClass} maxLength={100} />
       </label>
       <label className={labelClass}>
@@ -105,20 +106,13 @@ export function QueueFiltersForm({
           ))}
         </select>
       </label>
-      <label className={labelClass}>
-        Received from
-        <input type="date" value={filters.from} onChange={pick("from")} className={selectClass} />
-      </label>
-      <label className={labelClass}>
-        Received to
-        <input
-          type="date"
-          value={filters.to}
-          onChange={pick("to")}
-          className={selectClass}
-          min={filters.from || undefined}
-        />
-      </label>
+      <DayInput
+        label="Received from"
+        value={filters.from}
+        onChange={(from) => onChange({ from })}
+        className={selectClass}
+      />
+      <DayInput label="Received to" value={filters.to} onChange={(to) => onChange({ to })} className={selectClass} />
       {active ? (
         <div className="flex items-end">
           <Button

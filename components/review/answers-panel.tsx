@@ -25,9 +25,9 @@ const SAG_WORDS = {
 function Row({ label, children }: { label: string; children: ReactNode }) {
   if (children === undefined || children === null || children === "") return null;
   return (
-    <div className="grid grid-cols-[10rem_1fr] gap-2 border-t border-stone-100 py-1.5 first:border-t-0">
+    <div className="grid grid-cols-[minmax(0,8rem)_minmax(0,1fr)] gap-2 border-t border-stone-100 py-1.5 first:border-t-0 sm:grid-cols-[10rem_minmax(0,1fr)]">
       <dt className="text-stone-600">{label}</dt>
-      <dd className="text-stone-900">{children}</dd>
+      <dd className="wrap-anywhere text-stone-900">{children}</dd>
     </div>
   );
 }

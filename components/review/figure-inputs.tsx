@@ -77,7 +77,7 @@ function RateInput(props: {
           <>Rider&apos;s spring now: {threeUnits(props.currentNmm)}</>
         )}
       </p>
-      <div className="grid grid-cols-[1fr_auto] items-start gap-2">
+      <div className="grid grid-cols-[minmax(0,1fr)_auto] items-start gap-2">
         <NumberInput
           id={props.id}
           label={props.label}

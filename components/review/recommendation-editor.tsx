@@ -166,7 +166,7 @@ export function RecommendationEditor({
         {r.front.predicted.staticSagMm.toFixed(1)} mm.
         {!live.ok ? " (Showing the last valid figures: fix the marked field.)" : ""}
       </p>
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <form
           className="flex flex-col gap-6"
           aria-label="Adjust the recommendation"
@@ -258,7 +258,7 @@ export function RecommendationEditor({
           <SafetyNote />
         </div>
       </div>
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <ForceChart title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
         <ForceChart title="Fork: force against fork travel" spec={forkForceChart(r)} />
       </div>

@@ -20,7 +20,7 @@ export function VersionView(props: {
       <h2 id="version-heading" className="text-xl font-semibold">
         Version {props.version} ({props.state}, read-only)
       </h2>
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <ResultsTable engine={engine} current={r} caption={`Version ${props.version} against the engine's proposal`} />
         <div className="flex flex-col gap-4">
           <WarningsList warnings={r.warnings} />
@@ -41,7 +41,7 @@ export function VersionView(props: {
           </details>
         </div>
       </div>
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <ForceChart title="Shock: wheel force against rear wheel travel" spec={rearForceChart(r)} />
         <ForceChart title="Fork: force against fork travel" spec={forkForceChart(r)} />
       </div>

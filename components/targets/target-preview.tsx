@@ -69,35 +69,37 @@ export function TargetPreview({
         </p>
       ) : null}
       {result ? (
-        <table className="max-w-xl text-left text-sm tabular-nums">
-          <caption className="text-left text-stone-600">
-            {bike.name}, moderate style, medium jumps, no complaints
-          </caption>
-          <thead>
-            <tr>
-              <th scope="col" className="pr-4">
-                Figure
-              </th>
-              <th scope="col" className="pr-4">
-                Saved row
-              </th>
-              <th scope="col">This edit</th>
-            </tr>
-          </thead>
-          <tbody>
-            {ROWS.map(([k, label, d]) => (
-              <tr key={k}>
-                <th scope="row" className="pr-4 font-normal">
-                  {label}
+        <div className="max-w-full overflow-x-auto">
+          <table className="max-w-xl text-left text-sm tabular-nums">
+            <caption className="text-left text-stone-600">
+              {bike.name}, moderate style, medium jumps, no complaints
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col" className="pr-4">
+                  Figure
                 </th>
-                <td className="pr-4">{fmt(result.before[k], d)}</td>
-                <td className={result.before[k] !== result.after[k] ? "font-semibold" : ""}>
-                  {fmt(result.after[k], d)}
-                </td>
+                <th scope="col" className="pr-4">
+                  Saved row
+                </th>
+                <th scope="col">This edit</th>
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {ROWS.map(([k, label, d]) => (
+                <tr key={k}>
+                  <th scope="row" className="pr-4 font-normal">
+                    {label}
+                  </th>
+                  <td className="pr-4">{fmt(result.before[k], d)}</td>
+                  <td className={result.before[k] !== result.after[k] ? "font-semibold" : ""}>
+                    {fmt(result.after[k], d)}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       ) : null}
       {result?.after.warnings.length ? (
         <ul className="list-disc pl-5 text-sm text-amber-900">

@@ -20,7 +20,7 @@ test("search → adjust with live recompute → approve → rider e-mailed the s
   await signInWithPassword(page, "tuner@sagwise.test", "/shop");
 
   // Search narrows the queue (server-side) to the one rider.
-  await page.getByLabel("Search rider, e-mail or bike").fill(name.toLowerCase());
+  await page.getByLabel("Search rider, e-mail, bike or number").fill(name.toLowerCase());
   await expect(page).toHaveURL(new RegExp(`q=${name.toLowerCase()}`));
   await expect(page.getByText(/^1–1 of 1 requests/)).toHaveCount(1, { timeout: 15_000 });
   await page.getByRole("link", { name: rider.name, exact: true }).click();

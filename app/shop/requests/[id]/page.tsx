@@ -124,7 +124,7 @@ export default async function RequestPage({
         <VersionPicker requestId={id} versions={detail.versions} shown={shown?.version ?? 0} />
       ) : null}
       <WorkflowActions requestId={id} status={detail.status} />
-      <div className="grid gap-6 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <AnswersPanel answers={detail.answers} bikeLabel={detail.bikeLabel} />
         <div className="flex flex-col gap-6">
           <PhotosPanel photos={detail.photos} />

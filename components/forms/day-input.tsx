@@ -1,0 +1,62 @@
+"use client";
+
+// A date typed as people type it ("25.11.2026", "11/25/2026", "25 Nov 2026", "25112026"). It is
+// read on each change and passed on as an ISO day only once it is a real date; what it was read as
+// shows under the field, and text that is no date is named there instead of being sent.
+import { useId, useState } from "react";
+import { formatDay } from "@/lib/format";
+import { parseTypedDay } from "@/lib/validations/typed-day";
+
+export function DayInput({
+  label,
+  value,
+  onChange,
+  className,
+}: {
+  label: string;
+  /** The ISO day in use, or "". */
+  value: string;
+  onChange: (isoDay: string) => void;
+  className?: string;
+}) {
+  const id = useId();
+  const [text, setText] = useState(value ? formatDay(value) : "");
+  const [shownValue, setShownValue] = useState(value);
+  // The value changed from outside (clear filters, back button): show it.
+  if (value !== shownValue) {
+    setShownValue(value);
+    if (value !== parseTypedDay(text)) setText(value ? formatDay(value) : "");
+  }
+  const parsed = parseTypedDay(text);
+  const wrong = text.trim() !== "" && parsed === null;
+  return (
+    <label className="flex flex-col gap-1 text-sm font-medium text-stone-800" htmlFor={id}>
+      {label}
+      <input
+        id={id}
+        type="text"
+        inputMode="text"
+        autoComplete="off"
+        placeholder="e.g. 25 Nov 2026"
+        value={text}
+        aria-invalid={wrong}
+        aria-describedby={`${id}-note`}
+        className={className}
+        onChange={(e) => {
+          const next = e.target.value;
+          setText(next);
+          const day = parseTypedDay(next);
+          if (next.trim() === "") onChange("");
+          else if (day) onChange(day);
+        }}
+      />
+      <span id={`${id}-note`} className={wrong ? "text-red-700" : "font-normal text-stone-600"}>
+        {wrong
+          ? "Not a date: type it like 25.11.2026, 2026-11-25 or 25 Nov 2026"
+          : parsed
+            ? `Read as ${formatDay(parsed)}`
+            : "Any usual way of writing a date"}
+      </span>
+    </label>
+  );
+}
