@@ -197,9 +197,10 @@ describe("opening a request never changes it; starting the review is an action",
     const again = await call(start as Handler, r01, "POST", {}, tuner);
     expect(again.status).toBe(409);
     expect(String(again.body.error)).toMatch(/already started/);
-    // Starting marks the "new request" notice seen (the seed made none for r01: nothing to clear).
-    const unseen = await db.select().from(staffNotices).where(eq(staffNotices.requestId, r01));
-    expect(unseen.every((n) => n.seenAt !== null)).toBe(true);
+    // Starting marks the request's "new request" notice (the demo seed makes one) seen.
+    const notices = await db.select().from(staffNotices).where(eq(staffNotices.requestId, r01));
+    expect(notices.map((n) => n.kind)).toEqual(["new-request"]);
+    expect(notices.every((n) => n.seenAt !== null)).toBe(true);
   });
 
   it("'Take' assigns it to the caller, audited; it answers 409 when it is already theirs", async () => {
