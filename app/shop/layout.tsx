@@ -8,7 +8,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES, type Role } from "@/lib/auth/roles";
 import { countUnseenNotices } from "@/db/queries/notices";
 import { STAFF_NOTICE_KINDS } from "@/db/schema";
-import { STAFF_NOTICE_LABELS } from "@/lib/labels";
+import { STAFF_NOTICE_LABELS, roleLabel } from "@/lib/labels";
 
 /** "2 new requests, 1 new sag report" for the count's accessible name. */
 function noticeSummary(unseen: Record<string, number>): string {
@@ -46,7 +46,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
           <ShopNav items={items} />
           <div className="ml-auto flex items-center gap-2 text-sm">
             <span>
-              {user.name} <span className="text-pine-100">({user.role})</span>
+              {user.name} <span className="text-pine-100">({roleLabel(user.role)})</span>
             </span>
             <SignOutButton />
           </div>

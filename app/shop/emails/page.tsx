@@ -37,9 +37,6 @@ export default async function EmailPreviewsPage() {
             <h2 id={`email-${p.name}`} className="text-lg font-semibold">
               {p.description}
             </h2>
-            <p className="text-sm text-stone-600">
-              Template <code>{p.name}</code>
-            </p>
             <p className="mt-2">
               <span className="font-medium">Subject:</span> {p.subject}
             </p>
