@@ -30,8 +30,8 @@ export function DayInput({
   const parsed = parseTypedDay(text);
   const wrong = text.trim() !== "" && parsed === null;
   return (
-    <label className="flex flex-col gap-1 text-sm font-medium text-stone-800" htmlFor={id}>
-      {label}
+    <div className="flex flex-col gap-1 text-sm font-medium text-stone-800">
+      <label htmlFor={id}>{label}</label>
       <input
         id={id}
         type="text"
@@ -57,6 +57,6 @@ export function DayInput({
             ? `Read as ${formatDay(parsed)}`
             : "Any usual way of writing a date"}
       </span>
-    </label>
+    </div>
   );
 }
