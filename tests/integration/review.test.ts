@@ -263,10 +263,19 @@ describe("ask, decline, assign", () => {
 
   it("a sanity warning holds approval until the tuner acknowledges it (lib/sizing/README.md, sanity limits)", async () => {
     const id = stableUuid("request:r04"); // 450 class, in review
-    // k·p/LR(0) = 60·25/3.05 ≈ 492 N holds the ≈ 408 N static rear load: static sag 0 on a coil end.
-    const saved = await call(saveRecommendation, id, "PATCH", {
+    // A preload past the shock's own range (2–20 mm on the 450 class) is refused, naming the range.
+    const outside = await call(saveRecommendation, id, "PATCH", {
       basedOnVersion: 1,
       overrides: { rear: { rateNmm: 60, preloadMm: 25 } },
+    });
+    expect(outside.status).toBe(400);
+    expect(outside.body.fields?.["overrides.rear.preloadMm"]).toBe(
+      "This shock's preload goes from 2 to 20 mm; 25 mm cannot be set.",
+    );
+    // k·p/LR(0) = 70·20/3.05 ≈ 459 N holds the ≈ 408 N static rear load: static sag 0 on a coil end.
+    const saved = await call(saveRecommendation, id, "PATCH", {
+      basedOnVersion: 1,
+      overrides: { rear: { rateNmm: 70, preloadMm: 20 } },
     });
     expect(saved.status).toBe(200);
     const out = saved.body.output as Recommendation;
