@@ -73,7 +73,13 @@ describe("applyServerErrors", () => {
     });
     expect(unplaced).toEqual([]);
     expect(calls).toEqual([
-      ["email", { type: "server", message: "Enter the person's e-mail address" }],
+      [
+        "email",
+        {
+          type: "server",
+          message: "This is not an e-mail address: it needs a name, an @ and a domain, like sam@example.com",
+        },
+      ],
       ["role", { type: "server", message: "Choose tuner or admin" }],
     ]);
   });
