@@ -94,7 +94,11 @@ export const bikeStepSchema = z
   });
 
 const sagValue = typedNumber(
-  z.number({ message: "Enter the sag as a number" }).min(0, "Sag cannot be negative").max(400, "Sag looks too large").optional(),
+  z
+    .number({ message: "Enter the sag as a number" })
+    .min(0, "Sag cannot be negative")
+    .max(400, "Sag looks too large")
+    .optional(),
 );
 
 export const feelStepSchema = z.object({
