@@ -9,14 +9,15 @@ import { ErrorText, MeasureField, UnitToggle, errorAt } from "@/components/reque
 import { Button } from "@/components/ui/button";
 import type { SagVerdict } from "@/lib/sizing";
 import { friendlyError } from "@/lib/validations/messages";
+import { SAG_TERMS, endSagLabel } from "@/lib/validations/sag-terms";
 import { sagReportSchema } from "@/lib/validations/status";
 import { VerdictCard } from "./verdict-card";
 import { callApi } from "@/lib/api-client";
 
 const READINGS = [
-  ["static", "Static sag"],
-  ["race", "Race sag"],
-  ["free", "Free sag (optional)"],
+  ["static", `(${SAG_TERMS.static.formula})`],
+  ["race", `(${SAG_TERMS.race.formula})`],
+  ["free", "(optional)"],
 ] as const;
 
 export function SagForm({ requestId, token, metric }: { requestId: string; token?: string; metric: boolean }) {
@@ -68,7 +69,7 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
             <MeasureField
               key={key}
               id={`${end}-${key}`}
-              label={`${end === "rear" ? "Rear" : "Front"} ${text.toLowerCase()}`}
+              label={`${endSagLabel(end, key)} ${text}`}
               register={register(`${end}.${key}`)}
               error={e(`${end}.${key}`)}
               unit={null}

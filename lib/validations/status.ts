@@ -4,6 +4,7 @@ import { z } from "zod";
 import { text } from "./text";
 import { lengthUnitSchema } from "./request";
 import { typedNumber } from "./number";
+import { SAG_TERMS } from "./sag-terms";
 
 /** A status token from the rider's link, or nothing when the rider is signed in by e-mail. */
 export const statusTokenSchema = text().min(20).max(200).optional();
@@ -46,7 +47,7 @@ const endSchema = (end: "front" | "rear") =>
         ctx.addIssue({
           code: "custom",
           path: ["race"],
-          message: "Race sag (with you aboard) must be larger than static sag",
+          message: `Race sag (${SAG_TERMS.race.meaning}) must be larger than static sag (${SAG_TERMS.static.meaning})`,
         });
     });
 

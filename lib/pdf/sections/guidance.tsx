@@ -3,14 +3,14 @@
 import { Link, Text, View } from "@react-pdf/renderer";
 import { s } from "../styles";
 import { Bullets } from "./parts";
+import { FREE_SAG_NOTE, READING_STEPS, SAG_FROM_READINGS, SAG_TERMS } from "@/lib/validations/sag-terms";
 
 export const SAG_STEPS = [
-  "Free sag (rear): put the bike on a stand so the rear wheel hangs free. Measure straight up from the rear axle centre to a fixed mark on the rear fender or side panel. Write it down as A.",
-  "Static sag: take the bike off the stand and let it settle on its wheels under its own weight, no rider. Measure the same two points again: B. Static sag = A − B.",
-  "Race sag: sit on the bike in full gear in your riding position, feet on the pegs, with a helper holding the bike upright. A second helper measures again: C. Race sag = A − C.",
-  "Friction makes the bike settle at slightly different heights: for each reading, push the bike down a little and let it rise, then lift it a little and let it settle, and use the average of the two.",
-  "Fork: measure the same three states along the fork, the exposed length of the inner tube from the dust seal to the axle bracket; a cable tie around the tube against the seal makes it easy to read.",
-  "Set race sag first with the shock preload collar, re-measure, then check static sag. Static sag below the window means the spring is too soft; above it, too stiff. Report your figures and we will confirm.",
+  `Pick two fixed marks and always measure between the same two: at the rear, the axle centre and a mark on the rear fender or side panel straight above it; at the fork, the dust seal and the axle bracket (a cable tie around the inner tube against the seal makes it easy to read).`,
+  ...READING_STEPS,
+  `${SAG_FROM_READINGS} Write each reading in the boxes below, for the rear and the fork.`,
+  FREE_SAG_NOTE,
+  `Set ${SAG_TERMS.race.name.toLowerCase()} first with the shock preload collar, measure again, then check ${SAG_TERMS.static.name.toLowerCase()}. ${SAG_TERMS.static.name} below the window means the spring is too soft; above it, too stiff. Report your figures and we will confirm.`,
 ];
 
 export const CAUTIONS = [
