@@ -60,7 +60,7 @@ export function demoSheetData(
       updatedAt: approvedAt,
     },
     recommendation: recommend(demoSizingInput(options)),
-    reportUrl: "http://localhost:3000/status/demo-token-demo-token-demo-token-0000",
+    reportUrl: options.draft ? null : "http://localhost:3000/status/demo-token-demo-token-demo-token-0000",
     draft: options.draft ?? false,
   };
 }

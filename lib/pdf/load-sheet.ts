@@ -56,7 +56,8 @@ export async function buildSheetData(
       updatedAt: version.updatedAt,
     },
     recommendation,
-    reportUrl: await ensureSheetReportUrl(request.id),
+    // A draft preview carries no live link: the link is minted only for a sheet the rider may use.
+    reportUrl: options.draft ? null : await ensureSheetReportUrl(request.id),
     draft: options.draft,
   };
 }

@@ -42,8 +42,8 @@ export interface SheetData {
   request: SheetRequest;
   version: SheetVersion;
   recommendation: Recommendation;
-  /** The rider's private link for reporting measured sag. */
-  reportUrl: string;
+  /** The rider's private link for reporting measured sag; none on a draft preview (not approved, no live link). */
+  reportUrl: string | null;
   /** Watermark every page: a preview of a version that is not approved. */
   draft: boolean;
 }

@@ -202,6 +202,8 @@ describe("setup sheet of seeded approved request r09", () => {
     const token = /\/status\/([A-Za-z0-9_-]{40,})/.exec(text)?.[1];
     expect(token).toBeTruthy();
     expect(await findRequestIdByStatusToken(token!)).toBe(r09);
+    // Printed as a working link on an approved sheet (a PDF link annotation, ISO 32000-1 §12.6.4.7).
+    expect(Buffer.from(pdf).toString("latin1")).toMatch(/\/URI\s*\(/);
   });
 
   it("is reproducible: the same version renders to the same text and bytes", async () => {
@@ -274,6 +276,12 @@ describe("who may open a sheet", () => {
     const text = pdfText(await pdfOf(preview));
     expect(text).toContain("DRAFT PREVIEW: not approved, do not set up the bike from this sheet");
     expect(text).toContain("draft, not approved yet");
+    // A draft carries no live link: the sentence says it comes with approval, and no link is printed.
+    expect(text.replace(/\s+/g, " ")).toContain("the rider's private link appears here once the sheet is approved");
+    expect(text).not.toMatch(/\/status\//);
+    expect(
+      Buffer.from(await pdfOf(await getSheet(r04, { version: "1", preview: "1" }, staffCookie))).toString("latin1"),
+    ).not.toMatch(/\/URI\s*\(/);
   });
 
   it("answers 404 for an unknown version or request, 400 naming the field for a bad version", async () => {

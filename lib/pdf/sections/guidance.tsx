@@ -47,7 +47,7 @@ export function NotesAndReport({
   approved,
 }: {
   notes: string | null;
-  reportUrl: string;
+  reportUrl: string | null;
   approved: boolean;
 }) {
   return (
@@ -56,13 +56,15 @@ export function NotesAndReport({
       <Text>{notes?.trim() ? notes.trim() : "No extra notes for this setup."}</Text>
       <Text style={s.h2}>Report your sag</Text>
       <Text>
-        {approved
+        {approved && reportUrl
           ? "Once the springs are fitted and set, send us your measured free, static and race sag through your private link. It is for you only: do not share it."
           : "Preview only: the rider's private link appears here once the sheet is approved."}
       </Text>
-      <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
-        {reportUrl}
-      </Link>
+      {approved && reportUrl ? (
+        <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
+          {reportUrl}
+        </Link>
+      ) : null}
     </View>
   );
 }
