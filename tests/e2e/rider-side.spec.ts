@@ -2,7 +2,8 @@
 // and reading labels, the signed-in rider, the unknown link, the earlier reports, the favicon.
 import AxeBuilder from "@axe-core/playwright";
 import type { Page } from "@playwright/test";
-import { expect, test, uniqueStamp } from "./support/fixtures";
+import { tinyPng } from "../fixtures/images";
+import { expect, signInLinkFor, test, uniqueStamp } from "./support/fixtures";
 import { answersLike } from "./support/requests";
 
 test.use({ viewport: { width: 390, height: 844 } });
@@ -50,5 +51,92 @@ test.describe("numbers with a decimal comma", () => {
     await form.getByRole("button", { name: "Check my sag" }).click();
     await expect(form.getByRole("status")).toHaveText(/Shock: Spring is (right|too soft|too stiff)/);
     await expectAccessible(page, "status page after a sag report");
+  });
+});
+
+test.describe("the rider's pages", () => {
+  test("a new sag report is listed under 'Your earlier reports' at once, with its readings", async ({
+    page,
+    submitRequest,
+    staffApi,
+  }) => {
+    const { id, statusUrl } = await submitRequest(
+      answersLike("r09", { name: "Listed Sagreport", email: `listed.${uniqueStamp()}@example.test` }),
+    );
+    const tuner = await staffApi("tuner@sagwise.test");
+    expect((await tuner.post(`/api/requests/${id}/approve`, { data: {} })).ok()).toBe(true);
+    await page.goto(statusUrl);
+    await expect(page.getByRole("heading", { name: "Your earlier reports" })).toHaveCount(0);
+    const form = page.getByRole("form", { name: "Report measured sag" });
+    await form.getByRole("group", { name: "Sag unit" }).getByText("mm").click();
+    await form.getByLabel("Rear static sag").fill("34");
+    await form.getByLabel("Rear race sag").fill("105");
+    await form.getByRole("button", { name: "Check my sag" }).click();
+    const earlier = page.getByRole("region", { name: "Your earlier reports" });
+    await expect(earlier.getByRole("listitem")).toHaveCount(1);
+    await expect(earlier).toContainText("Rear: static sag 34 mm, race sag 105 mm");
+    await expect(earlier).toContainText(/Shock: (Spring is|Measure again)/);
+    // The same after a reload: it was stored, not only shown.
+    await page.reload();
+    await expect(page.getByRole("region", { name: "Your earlier reports" }).getByRole("listitem")).toHaveCount(1);
+  });
+
+  test("an unknown status link answers 404 with the friendly page", async ({ page }) => {
+    const response = await page.goto("/status/not-a-real-token-not-a-real-token-000");
+    expect(response?.status()).toBe(404);
+    await expect(page.getByRole("heading", { level: 1 })).toHaveText("This link does not open a request");
+    await expectAccessible(page, "unknown status link");
+  });
+
+  test("a rider signed in by e-mail link sees who they are and can sign out", async ({ page, mailbox }) => {
+    const email = "hana.whitlock@example.test";
+    await page.goto("/sign-in");
+    const signIn = page.getByRole("form", { name: "Rider sign-in" });
+    await signIn.getByLabel(/E-mail/).fill(email);
+    await signIn.getByRole("button", { name: /sign-in link/ }).click();
+    await expect(page.getByRole("status")).toContainText(email);
+    await page.goto(await signInLinkFor(mailbox, email));
+    await expect(page).toHaveURL("/my-requests");
+    const nav = page.getByRole("navigation", { name: "Main" });
+    await expect(nav).toContainText(`Signed in as ${email}`);
+    await expect(nav.getByRole("link", { name: "Sign in" })).toHaveCount(0);
+    const width = await page.evaluate(() => document.documentElement.scrollWidth);
+    expect(width).toBeLessThanOrEqual(390);
+    await expectAccessible(page, "my requests, signed in");
+    await nav.getByRole("button", { name: "Sign out" }).click();
+    await expect(page).toHaveURL("/");
+    await expect(page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Sign in" })).toHaveCount(1);
+    await page.goto("/my-requests");
+    await expect(page).toHaveURL(/\/sign-in/);
+  });
+
+  test("the draft banner asks for photos again only when some were picked; the icon is served", async ({ page }) => {
+    await page.goto("/request");
+    await page.evaluate(() => window.localStorage.clear());
+    await page.reload();
+    await page.getByLabel("Your name").fill("Banner Rider");
+    await page.reload();
+    const banner = page.getByRole("status").filter({ hasText: "We kept your answers from last time" });
+    await expect(banner).toHaveCount(1);
+    await expect(banner).not.toContainText("photo");
+
+    // A photo picked on the bike step, then a reload: the file is gone and the banner says so.
+    await page.evaluate(() => {
+      const draft = JSON.parse(window.localStorage.getItem("sagwise.request-draft.v1")!);
+      window.localStorage.setItem("sagwise.request-draft.v1", JSON.stringify({ ...draft, step: 2, reached: 2 }));
+    });
+    await page.reload();
+    await page
+      .getByLabel(/^Photos of the bike/)
+      .setInputFiles({ name: "bike.png", mimeType: "image/png", buffer: Buffer.from(tinyPng()) });
+    await expect(page.getByRole("button", { name: "Remove bike.png" })).toHaveCount(1);
+    await page.reload();
+    await expect(banner).toContainText("(the photo has to be added again)");
+
+    const icon = await page.locator('link[rel="icon"]').first().getAttribute("href");
+    expect(icon).toBeTruthy();
+    const served = await page.request.get(icon!);
+    expect(served.status()).toBe(200);
+    expect(served.headers()["content-type"]).toContain("image/svg+xml");
   });
 });
