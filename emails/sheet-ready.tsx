@@ -43,11 +43,12 @@ export function SheetReadyEmail(props: SheetReadyEmailProps) {
       }
       heading={props.revised ? "Your setup sheet was revised" : "Your setup sheet is ready"}
       action={{ label: `Download the setup sheet (version ${props.version})`, url: props.sheetUrl }}
+      secondary={{ label: "Report your sag", url: props.statusUrl }}
       after={
         <>
           <Text style={s.paragraph}>
-            After fitting the springs, measure your sag and report it on your request page so we can confirm the choice:{" "}
-            {props.statusUrl}
+            After fitting the springs, measure your static and race sag as the sheet shows (readings A, B and C) and
+            report them on your request page, so we can confirm the choice.
           </Text>
           <Text style={s.small}>
             Springs and gas-charged shocks store energy. Work to the manufacturer&apos;s service manual and local rules,

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { getShopName } from "@/db/queries/settings";
 import { emailTemplateNames, emailTemplates } from "@/emails";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
@@ -11,11 +12,13 @@ export const dynamic = "force-dynamic";
 // the html part in a sandboxed frame (no scripts, no navigation) and the plain-text part below it.
 export default async function EmailPreviewsPage() {
   await requireRole(STAFF_ROLES, { page: "/shop/emails" });
+  // The shop's own name from its settings, as the real e-mails carry it; the rest is demo data.
+  const shopName = await getShopName();
   const previews = await Promise.all(
     emailTemplateNames.map(async (name) => ({
       name,
       description: emailTemplates[name].description,
-      ...(await renderTemplate(name, emailTemplates[name].demoProps as never)),
+      ...(await renderTemplate(name, { ...emailTemplates[name].demoProps, shopName } as never)),
     })),
   );
   return (
@@ -23,8 +26,8 @@ export default async function EmailPreviewsPage() {
       <div>
         <h1 className="text-2xl font-bold">E-mails</h1>
         <p className="mt-1 max-w-prose text-stone-700">
-          What riders and staff receive, shown with invented demo data. Each e-mail has an html part and a plain-text
-          part for mail apps that show no html.
+          What riders and staff receive, with your shop&apos;s name and invented demo data for the rest. Each e-mail has
+          an html part and a plain-text part for mail apps that show no html.
         </p>
       </div>
       <ul className="flex flex-col gap-8">
