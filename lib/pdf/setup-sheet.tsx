@@ -3,6 +3,7 @@
 import { Document, Page, Text, View } from "@react-pdf/renderer";
 import { forceChartGeometry } from "@/lib/charts/force-curve";
 import { forkForceChart, rearForceChart } from "@/lib/charts/recommendation-charts";
+import { SizingBasis } from "./sections/basis";
 import { ForceChart } from "./sections/chart";
 import { Clickers } from "./sections/clickers";
 import { Cautions, NotesAndReport, SagSteps } from "./sections/guidance";
@@ -73,6 +74,7 @@ export function SetupSheet({ data }: { data: SheetData }) {
             currentNmm={rec.input.currentSprings?.shockRateNmm}
           />
         </View>
+        <SizingBasis rec={rec} />
         <Clickers clickers={rec.clickers} />
         <Footer data={data} />
       </Page>

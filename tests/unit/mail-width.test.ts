@@ -13,7 +13,9 @@ const BASE = "https://setup.example-suspension-workshop.test";
 
 // The demo props with every link and name at a long, realistic length.
 function longProps(name: string): Record<string, unknown> {
-  const demo = { ...(emailTemplates[name as keyof typeof emailTemplates].demoProps as Record<string, unknown>) };
+  const demo = {
+    ...(emailTemplates[name as keyof typeof emailTemplates].demoProps as unknown as Record<string, unknown>),
+  };
   for (const key of Object.keys(demo)) {
     if (key === "statusUrl") demo[key] = `${BASE}/status/${TOKEN}`;
     if (key === "sheetUrl")

@@ -3,7 +3,9 @@
 import { Link, Text, View } from "@react-pdf/renderer";
 import { s } from "../styles";
 import { Bullets } from "./parts";
-import { FREE_SAG_NOTE, READING_STEPS, SAG_FROM_READINGS, SAG_TERMS } from "@/lib/validations/sag-terms";
+import { FREE_SAG_NOTE, READINGS, READING_STEPS, SAG_FROM_READINGS, SAG_TERMS } from "@/lib/validations/sag-terms";
+import { COLORS } from "../styles";
+import { QrCode } from "./qr-code";
 
 export const SAG_STEPS = [
   `Pick two fixed marks and always measure between the same two: at the rear, the axle centre and a mark on the rear fender or side panel straight above it; at the fork, the dust seal and the axle bracket (a cable tie around the inner tube against the seal makes it easy to read).`,
@@ -28,6 +30,42 @@ export function SagSteps() {
         Measure in millimetres on level ground, with two helpers. Each step uses the same two marks.
       </Text>
       <Bullets items={SAG_STEPS} numbered />
+      <ReadingBoxes />
+    </View>
+  );
+}
+
+const BOX = { borderWidth: 1, borderColor: COLORS.ink, height: 20, marginHorizontal: 2 } as const;
+
+/** Empty boxes to write the three readings (and the two sags worked out from them) per end. */
+export function ReadingBoxes() {
+  const columns = [
+    `${READINGS.A.label}: ${READINGS.A.name}`,
+    `${READINGS.B.label}: ${READINGS.B.name}`,
+    `${READINGS.C.label}: ${READINGS.C.name}`,
+    `${SAG_TERMS.static.name} ${SAG_TERMS.static.formula}`,
+    `${SAG_TERMS.race.name} ${SAG_TERMS.race.formula}`,
+  ];
+  const width = "17%";
+  return (
+    <View style={{ marginTop: 6 }} wrap={false}>
+      <Text style={s.h3}>Your readings (mm)</Text>
+      <View style={{ flexDirection: "row", marginBottom: 2 }}>
+        <Text style={{ width: "15%" }} />
+        {columns.map((c) => (
+          <Text key={c} style={[s.small, { width, paddingHorizontal: 2 }]}>
+            {c}
+          </Text>
+        ))}
+      </View>
+      {["Rear (shock)", "Fork"].map((end) => (
+        <View key={end} style={{ flexDirection: "row", alignItems: "center", marginBottom: 3 }}>
+          <Text style={{ width: "15%", fontWeight: 600 }}>{end}</Text>
+          {columns.map((c) => (
+            <View key={c} style={[BOX, { width }]} />
+          ))}
+        </View>
+      ))}
     </View>
   );
 }
@@ -61,9 +99,15 @@ export function NotesAndReport({
           : "Preview only: the rider's private link appears here once the sheet is approved."}
       </Text>
       {approved && reportUrl ? (
-        <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
-          {reportUrl}
-        </Link>
+        <View style={{ flexDirection: "row", alignItems: "center", gap: 10, marginTop: 4 }}>
+          <QrCode text={reportUrl} width={84} />
+          <View style={{ flex: 1 }}>
+            <Text style={s.small}>Scan the code with your phone&apos;s camera, or open:</Text>
+            <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
+              {reportUrl}
+            </Link>
+          </View>
+        </View>
       ) : null}
     </View>
   );

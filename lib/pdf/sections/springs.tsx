@@ -19,7 +19,10 @@ function RateTable({
 }) {
   const rec = rateParts(rateNmm, end);
   const stock = stockNmm === null ? null : rateParts(stockNmm, end);
-  const now = currentNmm === undefined ? null : rateParts(currentNmm, end);
+  // The springs the rider told us are fitted now get their own column only where they differ from
+  // the catalog's stock rate (by more than rounding: 0.5 %); otherwise the stock column says so.
+  const same = currentNmm !== undefined && stockNmm !== null && Math.abs(currentNmm - stockNmm) <= 0.005 * stockNmm;
+  const now = currentNmm === undefined || same ? null : rateParts(currentNmm, end);
   const rows: [keyof typeof rec, string][] = [
     ["nMm", "N/mm"],
     ["kgfMm", "kgf/mm"],
@@ -30,7 +33,7 @@ function RateTable({
     <View style={{ marginBottom: 4 }}>
       <View style={s.tableHead}>
         <Text style={{ width: w }}>Recommended</Text>
-        <Text style={{ width: w }}>Stock (for comparison)</Text>
+        <Text style={{ width: w }}>{same ? "Stock, fitted now (as you told us)" : "Stock (the catalog's)"}</Text>
         {now ? <Text style={{ width: w }}>Fitted now (as you told us)</Text> : null}
       </View>
       {rows.map(([key]) => (
@@ -42,16 +45,6 @@ function RateTable({
       ))}
     </View>
   );
-}
-
-const BASIS_WORDS = {
-  "ride-frequency": "Rate chosen to ride like the stock spring does for the rider it was made for, scaled to you",
-  "sag-window": "Rate chosen to meet both the race sag and the static sag targets",
-} as const;
-
-/** Which rate basis sized this end (lib/sizing/README.md, "Model 2"); sheets from engine 1.x have none. */
-function BasisLine({ basis }: { basis: RearResult["rateBasis"] | null | undefined }) {
-  return basis ? <Text style={s.small}>{BASIS_WORDS[basis.used]}.</Text> : null;
 }
 
 type SagState = RearResult["predicted"]["raceState"];
@@ -99,7 +92,6 @@ export function ForkCard({
             currentNmm={currentNmm}
             end="fork"
           />
-          <BasisLine basis={front.rateBasis} />
           <KeyValue label="Preload">{length(front.preloadMm ?? 0, 1, imperial)}</KeyValue>
           <KeyValue label="Oil level">{`${length(front.oilLevelMm ?? front.stockOilLevelMm, 0, imperial)} (stock ${fixed(front.stockOilLevelMm, 0)} mm)`}</KeyValue>
           <Text style={s.small}>
@@ -143,7 +135,6 @@ export function ShockCard({
       <Text style={s.h3}>Shock (rear)</Text>
       <Text style={s.muted}>Spring rate</Text>
       <RateTable rateNmm={rear.chosenRate.nMm} stockNmm={rear.stockRate.nMm} currentNmm={currentNmm} end="shock" />
-      <BasisLine basis={rear.rateBasis} />
       <KeyValue label="Preload">{length(rear.preloadMm, 1, imperial)}</KeyValue>
       <KeyValue label="Collar">{`${turns(rear.preloadCollarTurns)} from where the collar just touches the spring (${fixed(collarPitchMm, 1)} mm per turn)`}</KeyValue>
       <SagLines result={rear} imperial={imperial} />
