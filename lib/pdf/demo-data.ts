@@ -50,6 +50,7 @@ export function demoSheetData(
       skill: "advanced",
       riderWeight: { value: 84, unit: "kg" },
       gearIncluded: false,
+      forkOil: { type: null, volumeMlPerLeg: null },
     },
     version: {
       number: 1,

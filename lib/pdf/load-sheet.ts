@@ -46,6 +46,7 @@ export async function buildSheetData(
       skill: request.skill,
       riderWeight: answers.success ? answers.data.rider.weight : null,
       gearIncluded: answers.success ? answers.data.rider.gearIncluded : null,
+      forkOil: { type: request.forkOilType, volumeMlPerLeg: request.forkOilVolumeMl },
     },
     version: {
       number: version.version,

@@ -66,7 +66,12 @@ export function SetupSheet({ data }: { data: SheetData }) {
         <Cautions />
         <Text style={s.h2}>Springs, preload and sag</Text>
         <View style={s.row}>
-          <ForkCard front={rec.front} imperial={imperial} currentNmm={rec.input.currentSprings?.forkRateNmm} />
+          <ForkCard
+            front={rec.front}
+            imperial={imperial}
+            currentNmm={rec.input.currentSprings?.forkRateNmm}
+            forkOil={data.request.forkOil}
+          />
           <ShockCard
             rear={rec.rear}
             collarPitchMm={rec.input.bike.rear.collarPitchMm}

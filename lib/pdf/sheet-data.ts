@@ -25,6 +25,8 @@ export interface SheetRequest {
   /** The weight as the rider typed it (value and unit), and whether gear was included. */
   riderWeight: { value: number; unit: "kg" | "lb" } | null;
   gearIncluded: boolean | null;
+  /** From the catalog model, where the shop filled them in. */
+  forkOil: { type: string | null; volumeMlPerLeg: number | null };
 }
 
 export interface SheetVersion {

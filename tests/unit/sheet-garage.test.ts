@@ -71,6 +71,13 @@ describe("the approved sheet", () => {
     expect(words.match(/Fitted now \(as/g)).toHaveLength(1);
   });
 
+  it("prints the fork oil type and volume per leg where the catalog has them, and nothing where not", async () => {
+    const data = demoSheetData();
+    expect(pdfText(await renderSetupSheet(data))).not.toContain("Fork oil");
+    data.request.forkOil = { type: "5W fork oil", volumeMlPerLeg: 385.5 };
+    expect(squash(pdfText(await renderSetupSheet(data)))).toContain("Fork oil 5W fork oil, 385.5 ml in each leg");
+  });
+
   it("a draft preview prints no link and no QR code", async () => {
     const pdf = await renderSetupSheet(demoSheetData({ draft: true }));
     expect(pdfText(pdf)).not.toMatch(/\/status\//);

@@ -68,15 +68,28 @@ function SagLines({ result, imperial }: { result: FrontResult | RearResult; impe
   );
 }
 
+/** "5W fork oil, 380 ml in each leg": what the catalog has of the two, or nothing. */
+export function forkOilText(oil: { type: string | null; volumeMlPerLeg: number | null } | undefined, legs: number) {
+  if (!oil || (!oil.type && oil.volumeMlPerLeg === null)) return null;
+  const volume =
+    oil.volumeMlPerLeg === null
+      ? null
+      : `${fixed(oil.volumeMlPerLeg, oil.volumeMlPerLeg % 1 ? 1 : 0)} ml ${legs === 1 ? "in the oil leg" : "in each leg"}`;
+  return [oil.type, volume].filter(Boolean).join(", ");
+}
+
 export function ForkCard({
   front,
   imperial,
   currentNmm,
+  forkOil,
 }: {
   front: FrontResult;
   imperial: boolean;
   currentNmm?: number;
+  forkOil?: { type: string | null; volumeMlPerLeg: number | null };
 }) {
+  const oil = forkOilText(forkOil, front.kind !== "air" && front.sprungLegs === 1 ? 1 : 2);
   const coil = front.kind !== "air" && front.chosenRate;
   return (
     <View style={[s.card, s.col]} wrap={false}>
@@ -97,6 +110,7 @@ export function ForkCard({
           <Text style={s.small}>
             Oil level: measured down from the top of the outer tube, fork fully compressed, spring out.
           </Text>
+          {oil ? <KeyValue label="Fork oil">{oil}</KeyValue> : null}
         </>
       ) : (
         <>
@@ -112,6 +126,7 @@ export function ForkCard({
             Set the pressure, then fine-tune it by measuring sag: air forks vary from one to the next.
           </Text>
           <KeyValue label="Oil level">{`as stock, ${length(front.stockOilLevelMm, 0, imperial)}`}</KeyValue>
+          {oil ? <KeyValue label="Fork oil">{oil}</KeyValue> : null}
         </>
       )}
       <SagLines result={front} imperial={imperial} />
