@@ -4,13 +4,18 @@
 import { Button, Heading, Text } from "@react-email/components";
 import type { ReactNode } from "react";
 import { EmailLayout, emailStyles as s } from "./email-layout";
+import { fillWording, type EmailWording } from "./wording";
 
 export interface RiderEmailProps {
   shopName: string;
   riderName: string;
   preview: string;
   heading: string;
-  children: ReactNode;
+  /** The template's own opening paragraph; the shop's wording replaces it when set. */
+  intro: string;
+  requestNumber?: number;
+  wording?: EmailWording | null;
+  children?: ReactNode;
   action: { label: string; url: string };
   /** Shown under the button's address. */
   after?: ReactNode;
@@ -26,17 +31,26 @@ export function RiderEmail({
   riderName,
   preview,
   heading,
+  intro,
+  requestNumber,
+  wording,
   children,
   action,
   after,
   secondary,
 }: RiderEmailProps) {
+  const values = {
+    rider: riderName,
+    request: requestNumber === undefined ? "" : String(requestNumber),
+    shop: shopName,
+  };
   return (
     <EmailLayout shopName={shopName} preview={preview} reason={RIDER_EMAIL_REASON}>
       <Heading as="h1" style={s.heading}>
-        {heading}
+        {wording?.heading?.trim() ? fillWording(wording.heading.trim(), values) : heading}
       </Heading>
       <Text style={s.paragraph}>Hello {riderName},</Text>
+      <Text style={s.paragraph}>{wording?.intro?.trim() ? fillWording(wording.intro.trim(), values) : intro}</Text>
       {children}
       <Text style={s.paragraph}>
         <Button href={action.url} style={s.button}>

@@ -3,7 +3,7 @@
 import AxeBuilder from "@axe-core/playwright";
 import type { Page } from "@playwright/test";
 import { tinyPng } from "../fixtures/images";
-import { expect, signInLinkFor, test, uniqueStamp } from "./support/fixtures";
+import { expect, signInLinkFor, signInWithPassword, test, uniqueStamp } from "./support/fixtures";
 import { answersLike } from "./support/requests";
 
 test.use({ viewport: { width: 390, height: 844 } });
@@ -138,5 +138,29 @@ test.describe("the rider's pages", () => {
     const served = await page.request.get(icon!);
     expect(served.status()).toBe(200);
     expect(served.headers()["content-type"]).toContain("image/svg+xml");
+  });
+});
+
+test.describe("the shop's wording of the rider e-mails", () => {
+  test.use({ viewport: { width: 1280, height: 900 } });
+  test("the owner previews a wording, is told what is wrong with a bad one, and saves", async ({ page }) => {
+    await signInWithPassword(page, "owner@sagwise.test", "/shop/emails");
+    await page.getByRole("link", { name: "Write the rider e-mails in your shop's words" }).click();
+    await expect(page).toHaveURL("/shop/emails/wording");
+    const form = page.getByRole("form", { name: "Request declined, with the reason" });
+    await form.getByLabel("Opening paragraph").fill("Sorry {name}, request {request} is not one for us:");
+    await form.getByRole("button", { name: "Preview" }).click();
+    await expect(form.getByText("Only {rider}, {request} and {shop} can be filled in")).toHaveCount(1);
+    await form.getByLabel("Opening paragraph").fill("Sorry {rider}, request {request} is not one for us:");
+    await form.getByRole("button", { name: "Preview" }).click();
+    const frame = form.frameLocator("iframe");
+    await expect(frame.getByText("Sorry Alex Demo, request 1042 is not one for us:")).toHaveCount(1);
+    await form.getByRole("button", { name: "Save" }).click();
+    await expect(form.getByRole("status")).toHaveText("Saved: the next e-mails of this kind use this wording.");
+    await page.reload();
+    await expect(
+      page.getByRole("form", { name: "Request declined, with the reason" }).getByLabel("Opening paragraph"),
+    ).toHaveValue("Sorry {rider}, request {request} is not one for us:");
+    await expectAccessible(page, "e-mail wording");
   });
 });

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { getShopName } from "@/db/queries/settings";
 import { emailTemplateNames, emailTemplates } from "@/emails";
+import Link from "next/link";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { renderTemplate } from "@/lib/mail";
@@ -11,7 +12,7 @@ export const dynamic = "force-dynamic";
 // Every e-mail Sagwise sends, rendered with demo data exactly as the mail is built for sending:
 // the html part in a sandboxed frame (no scripts, no navigation) and the plain-text part below it.
 export default async function EmailPreviewsPage() {
-  await requireRole(STAFF_ROLES, { page: "/shop/emails" });
+  const user = await requireRole(STAFF_ROLES, { page: "/shop/emails" });
   // The shop's own name from its settings, as the real e-mails carry it; the rest is demo data.
   const shopName = await getShopName();
   const previews = await Promise.all(
@@ -30,6 +31,14 @@ export default async function EmailPreviewsPage() {
           an html part and a plain-text part for mail apps that show no html.
         </p>
       </div>
+      {user.role === "admin" ? (
+        <Link
+          href="/shop/emails/wording"
+          className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline"
+        >
+          Write the rider e-mails in your shop&apos;s words
+        </Link>
+      ) : null}
       <ul className="flex flex-col gap-8">
         {previews.map((p) => (
           <li
