@@ -126,7 +126,7 @@ test.describe("a rider's setup request", () => {
       "350 four-stroke enduro, 2019 (not in the shop's list)",
       "12.8 in",
       "245 lb",
-      "rear static 1.4 in, rear race 4.3 in",
+      "rear static sag 1.4 in, rear race sag 4.3 in",
       "1 photo: bike.png",
     ]) {
       await expect(review.getByText(text, { exact: false }).first(), text).toBeVisible();
