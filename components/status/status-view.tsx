@@ -8,6 +8,7 @@ import { sheetPath } from "@/lib/requests/token";
 import { AnswerForm } from "./answer-form";
 import { AnswersList } from "./answers-list";
 import { SafetyCaution } from "./safety-caution";
+import { RideFeedbackForm } from "./ride-feedback-form";
 import { SagFollowUp } from "./sag-follow-up";
 import { formatDay } from "@/lib/format";
 
@@ -105,6 +106,19 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
           <SafetyCaution />
           <SagGuide />
           <SagFollowUp requestId={request.id} token={token} metric={metric} reports={reports} />
+        </section>
+      ) : null}
+
+      {request.status === "approved" ? (
+        <section className={box} aria-labelledby="ride-heading">
+          <h2 id="ride-heading" className="text-lg font-semibold">
+            After the first rides: how does it ride now?
+          </h2>
+          <p className="text-stone-700">
+            Tick what you feel at each end, or tell us in your words. We suggest the next clicker step from the setup
+            you run now, and your tuner sends a revised sheet.
+          </p>
+          <RideFeedbackForm requestId={request.id} token={token} />
         </section>
       ) : null}
 

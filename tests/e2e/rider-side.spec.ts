@@ -168,3 +168,36 @@ test.describe("the shop's wording of the rider e-mails", () => {
     await expectAccessible(page, "e-mail wording");
   });
 });
+
+test.describe("after the first rides", () => {
+  test("the rider says how it rides; the tuner sends the revised sheet in one step", async ({
+    page,
+    submitRequest,
+    staffApi,
+    newVisitor,
+  }) => {
+    const { id, statusUrl } = await submitRequest(
+      answersLike("r09", { name: "Ride Feedback", email: `ride.${uniqueStamp()}@example.test` }),
+    );
+    const tuner = await staffApi("tuner@sagwise.test");
+    expect((await tuner.post(`/api/requests/${id}/approve`, { data: {} })).ok()).toBe(true);
+    await page.goto(statusUrl);
+    const form = page.getByRole("form", { name: "How the bike rides now" });
+    await form.getByRole("button", { name: "Tell the shop" }).click();
+    await expect(form.getByText("Tick what you feel at either end, or tell us in your words")).toHaveCount(1);
+    await form.getByRole("checkbox", { name: "Front: Bottoms out" }).check();
+    await form.getByLabel("In your words (optional)").fill("Still bottoms on the big double.");
+    await form.getByRole("button", { name: "Tell the shop" }).click();
+    await expect(form.getByRole("status")).toContainText("Fork compression:");
+    await expect(form.getByRole("status")).toContainText("Bottoming: firm fork compression 2 clicks");
+    await expectAccessible(page, "status page with ride feedback");
+
+    const staff = await newVisitor();
+    const shop = await staff.newPage();
+    await signInWithPassword(shop, "tuner@sagwise.test", `/shop/requests/${id}`);
+    const panel = shop.getByRole("region", { name: "After the first rides" });
+    await expect(panel).toContainText("Front: Bottoms out");
+    await panel.getByRole("button", { name: "Send the revised sheet with these changes" }).click();
+    await expect(panel).toContainText("Answered with version 2.");
+  });
+});
