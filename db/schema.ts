@@ -4,3 +4,5 @@ export * from "./tables/shop";
 export * from "./tables/requests";
 export * from "./tables/calibration";
 export * from "./tables/notices";
+export * from "./tables/email-wording";
+export * from "./tables/ride-feedback";

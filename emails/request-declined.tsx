@@ -2,6 +2,7 @@
 import { Text } from "@react-email/components";
 import { Quote, RiderEmail } from "./components/rider-email";
 import { emailStyles as s } from "./components/email-layout";
+import type { EmailWording } from "./components/wording";
 
 export interface RequestDeclinedEmailProps {
   shopName: string;
@@ -9,6 +10,7 @@ export interface RequestDeclinedEmailProps {
   requestNumber: number;
   reason: string;
   statusUrl: string;
+  wording?: EmailWording | null;
 }
 
 export const subject = ({ requestNumber }: RequestDeclinedEmailProps) => `About your setup request ${requestNumber}`;
@@ -28,9 +30,11 @@ export function RequestDeclinedEmail(props: RequestDeclinedEmailProps) {
       riderName={props.riderName}
       preview="We cannot take this request as it stands. The reason is inside."
       heading="We cannot take this request"
+      intro={`We looked at your request ${props.requestNumber} and cannot set it up as asked:`}
+      requestNumber={props.requestNumber}
+      wording={props.wording}
       action={{ label: "See your request", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>We looked at your request {props.requestNumber} and cannot set it up as asked:</Text>
       <Quote>{props.reason}</Quote>
       <Text style={s.paragraph}>Reply to this e-mail or call the shop if you want to talk it through.</Text>
     </RiderEmail>

@@ -2,6 +2,7 @@
 import { Text } from "@react-email/components";
 import { RiderEmail } from "./components/rider-email";
 import { emailStyles as s } from "./components/email-layout";
+import type { EmailWording } from "./components/wording";
 
 export interface RequestReceivedEmailProps {
   shopName: string;
@@ -9,6 +10,7 @@ export interface RequestReceivedEmailProps {
   requestNumber: number;
   bikeLabel: string;
   statusUrl: string;
+  wording?: EmailWording | null;
 }
 
 export const subject = ({ shopName, requestNumber }: RequestReceivedEmailProps) =>
@@ -29,12 +31,11 @@ export function RequestReceivedEmail(props: RequestReceivedEmailProps) {
       riderName={props.riderName}
       preview={`Request ${props.requestNumber} is in. Follow it with your private link.`}
       heading="Your setup request is in"
+      intro={`We have your request ${props.requestNumber} for the ${props.bikeLabel}. A tuner will check the proposed springs and settings against your answers, and may ask you a question first.`}
+      requestNumber={props.requestNumber}
+      wording={props.wording}
       action={{ label: "Follow your request", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>
-        We have your request {props.requestNumber} for the {props.bikeLabel}. A tuner will check the proposed springs
-        and settings against your answers, and may ask you a question first.
-      </Text>
       <Text style={s.paragraph}>
         The link below shows where your request stands. When the setup sheet is approved you can download it there, and
         later report the sag you measure.

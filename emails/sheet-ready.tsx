@@ -2,6 +2,7 @@
 import { Text } from "@react-email/components";
 import { RiderEmail } from "./components/rider-email";
 import { emailStyles as s } from "./components/email-layout";
+import type { EmailWording } from "./components/wording";
 
 export interface SheetReadyEmailProps {
   shopName: string;
@@ -13,6 +14,7 @@ export interface SheetReadyEmailProps {
   revised: boolean;
   sheetUrl: string;
   statusUrl: string;
+  wording?: EmailWording | null;
 }
 
 export const subject = ({ requestNumber, revised, version }: SheetReadyEmailProps) =>
@@ -42,12 +44,20 @@ export function SheetReadyEmail(props: SheetReadyEmailProps) {
           : "Springs, preload, sag targets and clicker starting points for your bike."
       }
       heading={props.revised ? "Your setup sheet was revised" : "Your setup sheet is ready"}
+      intro={
+        props.revised
+          ? `${props.tunerName} revised the setup for request ${props.requestNumber}. Version ${props.version} replaces the earlier sheet; the earlier versions stay on your request page.`
+          : `${props.tunerName} approved the setup for request ${props.requestNumber}. The sheet lists the spring rates, preload, sag targets, oil level and starting clicker positions, with how to measure sag step by step.`
+      }
+      requestNumber={props.requestNumber}
+      wording={props.wording}
       action={{ label: `Download the setup sheet (version ${props.version})`, url: props.sheetUrl }}
+      secondary={{ label: "Report your sag", url: props.statusUrl }}
       after={
         <>
           <Text style={s.paragraph}>
-            After fitting the springs, measure your sag and report it on your request page so we can confirm the choice:{" "}
-            {props.statusUrl}
+            After fitting the springs, measure your static and race sag as the sheet shows (readings A, B and C) and
+            report them on your request page, so we can confirm the choice.
           </Text>
           <Text style={s.small}>
             Springs and gas-charged shocks store energy. Work to the manufacturer&apos;s service manual and local rules,
@@ -55,13 +65,7 @@ export function SheetReadyEmail(props: SheetReadyEmailProps) {
           </Text>
         </>
       }
-    >
-      <Text style={s.paragraph}>
-        {props.revised
-          ? `${props.tunerName} revised the setup for request ${props.requestNumber}. Version ${props.version} replaces the earlier sheet; the earlier versions stay on your request page.`
-          : `${props.tunerName} approved the setup for request ${props.requestNumber}. The sheet lists the spring rates, preload, sag targets, oil level and starting clicker positions, with how to measure sag step by step.`}
-      </Text>
-    </RiderEmail>
+    />
   );
 }
 

@@ -2,6 +2,7 @@
 import { Text } from "@react-email/components";
 import { Quote, RiderEmail } from "./components/rider-email";
 import { emailStyles as s } from "./components/email-layout";
+import type { EmailWording } from "./components/wording";
 
 export interface TunerQuestionEmailProps {
   shopName: string;
@@ -10,6 +11,7 @@ export interface TunerQuestionEmailProps {
   tunerName: string;
   question: string;
   statusUrl: string;
+  wording?: EmailWording | null;
 }
 
 export const subject = ({ requestNumber }: TunerQuestionEmailProps) =>
@@ -31,11 +33,11 @@ export function TunerQuestionEmail(props: TunerQuestionEmailProps) {
       riderName={props.riderName}
       preview={`${props.tunerName} needs one more detail before sizing your springs.`}
       heading="The shop has a question"
+      intro={`${props.tunerName} is working on your request ${props.requestNumber} and asks:`}
+      requestNumber={props.requestNumber}
+      wording={props.wording}
       action={{ label: "Answer the question", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>
-        {props.tunerName} is working on your request {props.requestNumber} and asks:
-      </Text>
       <Quote>{props.question}</Quote>
       <Text style={s.paragraph}>Answer on your request page; the work continues as soon as you do.</Text>
     </RiderEmail>

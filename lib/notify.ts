@@ -5,6 +5,7 @@
 // never undoes the business step that caused it.
 import { eq } from "drizzle-orm";
 import type { Executor } from "@/db/client";
+import { findEmailWording } from "@/db/queries/email-wording";
 import { getShopName } from "@/db/queries/settings";
 import { createStatusLink } from "@/db/queries/status-links";
 import { setupRequests } from "@/db/schema";
@@ -47,6 +48,8 @@ export async function notifyRider(
   const base = appBaseUrl();
   const statusUrl = `${base}${statusPath(token)}`;
   const common = {
+    // The shop's own heading and opening paragraph for this e-mail, when the owner wrote some.
+    wording: await findEmailWording(notice.kind, tx),
     shopName: await getShopName(tx),
     riderName: request.riderName,
     requestNumber: request.number,

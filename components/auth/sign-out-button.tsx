@@ -4,7 +4,8 @@ import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
 import { authClient } from "@/lib/auth/client";
 
-export function SignOutButton() {
+/** Signs out and goes to `next` (staff: the sign-in page; riders: the landing page). */
+export function SignOutButton({ next = "/sign-in" }: { next?: string }) {
   const router = useRouter();
   return (
     <Button
@@ -12,7 +13,7 @@ export function SignOutButton() {
       className="text-white hover:bg-pine-800"
       onClick={async () => {
         await authClient.signOut();
-        router.replace("/sign-in");
+        router.replace(next);
         router.refresh();
       }}
     >

@@ -45,7 +45,17 @@ const DEPS: Record<string, Path<BikeModelInput>[]> = {
   "spec.rear.wheelTravelMm": ["spec.rear.shockStrokeMm"],
   yearFrom: ["yearTo"],
 };
-const SERVER_FIELDS = ["name", "slug", "bikeClass", "yearFrom", "yearTo", "notes", "spec"];
+const SERVER_FIELDS = [
+  "name",
+  "slug",
+  "bikeClass",
+  "yearFrom",
+  "yearTo",
+  "notes",
+  "forkOilType",
+  "forkOilVolumeMl",
+  "spec",
+];
 
 const section = "flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4";
 
@@ -196,6 +206,22 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
             ))}
           </select>
         </label>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Field
+            id="forkOilType"
+            label="Fork oil type (optional)"
+            hint="As your shop names it; printed on the rider's sheet"
+            error={errors.forkOilType?.message}
+            {...register("forkOilType", { setValueAs: (v: unknown) => (String(v ?? "").trim() === "" ? null : v) })}
+          />
+          <Field
+            id="forkOilVolumeMl"
+            label="Fork oil volume per leg, ml (optional)"
+            inputMode="decimal"
+            error={errors.forkOilVolumeMl?.message}
+            {...register("forkOilVolumeMl", { setValueAs: toNumber(null) })}
+          />
+        </div>
         <div className="grid gap-4 sm:grid-cols-3">
           {FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}
         </div>

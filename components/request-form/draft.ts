@@ -9,6 +9,8 @@ export interface Draft {
   /** The furthest step reached: the indicator lets the rider go back to any step up to it. */
   reached: number;
   values: Partial<Record<StepKey, Record<string, unknown>>>;
+  /** How many photos were picked: the files themselves cannot be kept, only the fact that there were some. */
+  photoCount?: number;
   savedAt: string;
 }
 

@@ -1,16 +1,17 @@
 "use client";
 
 import { feelStepSchema } from "@/lib/validations/request";
+import { SAG_TERMS, endSagLabel } from "@/lib/validations/sag-terms";
 import { ChoiceGroup, MeasureField, TextAreaField, UnitToggle, errorAt } from "./fields";
 import { COMPLAINT_LABELS } from "./labels";
 import { StepActions } from "./step-actions";
 import { useStepForm, type StepProps } from "./use-step-form";
 
 const SAG_FIELDS = [
-  ["rearStatic", "Rear static sag (bike on its own weight)"],
-  ["rearRace", "Rear race sag (you aboard in gear)"],
-  ["forkStatic", "Fork static sag"],
-  ["forkRace", "Fork race sag"],
+  ["rearStatic", `${endSagLabel("rear", "static")} (${SAG_TERMS.static.meaning})`],
+  ["rearRace", `${endSagLabel("rear", "race")} (${SAG_TERMS.race.meaning})`],
+  ["forkStatic", `${endSagLabel("front", "static")} (fork)`],
+  ["forkRace", `${endSagLabel("front", "race")} (fork)`],
 ] as const;
 
 export function FeelStep(props: StepProps) {

@@ -36,6 +36,9 @@ export function RequestForm({ metric }: { metric: boolean }) {
   const router = useRouter();
   const [draft, setDraft] = useState<Draft | null>(null);
   const [restored, setRestored] = useState(false);
+  // Photos picked before the reload: the draft keeps only their number, so the rider is asked to add
+  // them again only when there were some.
+  const [lostPhotos, setLostPhotos] = useState(0);
   const [photos, setPhotos] = useState<File[]>([]);
   const [submitting, setSubmitting] = useState(false);
   const [problem, setProblem] = useState<ServerProblem | null>(null);
@@ -50,6 +53,7 @@ export function RequestForm({ metric }: { metric: boolean }) {
     // eslint-disable-next-line react-hooks/set-state-in-effect
     setDraft(found ?? emptyDraft());
     setRestored(Boolean(found && Object.keys(found.values).length));
+    setLostPhotos(found?.photoCount ?? 0);
   }, []);
 
   // Moving between steps puts the focus on the new step's heading (not on first load).
@@ -88,6 +92,11 @@ export function RequestForm({ metric }: { metric: boolean }) {
       ) as Record<StepKey, (values: Record<string, unknown>) => void>,
     [update],
   );
+
+  const choosePhotos = (files: File[]) => {
+    setPhotos(files);
+    update((d) => ({ ...d, photoCount: files.length }));
+  };
 
   if (!draft) {
     return (
@@ -135,7 +144,13 @@ export function RequestForm({ metric }: { metric: boolean }) {
             role="status"
             className="flex flex-wrap items-center justify-between gap-2 rounded-lg bg-pine-50 p-3 text-pine-900"
           >
-            <span>We kept your answers from last time{photos.length ? "" : " (photos have to be added again)"}.</span>
+            <span>
+              We kept your answers from last time
+              {lostPhotos > 0 && photos.length === 0
+                ? ` (the ${lostPhotos === 1 ? "photo has" : `${lostPhotos} photos have`} to be added again)`
+                : ""}
+              .
+            </span>
             <Button
               variant="ghost"
               onClick={() => {
@@ -144,6 +159,7 @@ export function RequestForm({ metric }: { metric: boolean }) {
                 setGeneration((g) => g + 1);
                 setRestored(false);
                 setPhotos([]);
+                setLostPhotos(0);
               }}
             >
               Start over
@@ -161,7 +177,7 @@ export function RequestForm({ metric }: { metric: boolean }) {
             key={`bike-${generation}`}
             {...common("bike")}
             photos={photos}
-            onPhotos={setPhotos}
+            onPhotos={choosePhotos}
             photoError={photoError}
           />
         ) : null}

@@ -1,4 +1,7 @@
-// How to measure sag, with pictures drawn in SVG: the same reference points read three times.
+// How to measure sag, with pictures drawn in SVG: the same reference points read three times, in
+// the one set of words and reading labels the sheet and the e-mails use (lib/validations/sag-terms.ts).
+import { FREE_SAG_NOTE, READINGS, SAG_TERMS } from "@/lib/validations/sag-terms";
+
 const ink = "#1c1917";
 const pine = "#185a4b";
 const amber = "#b45309";
@@ -59,7 +62,7 @@ function RearEnd({ drop, rider, stand }: { drop: number; rider?: boolean; stand?
         strokeDasharray="6 3"
       />
       <text x="78" y={(fenderY + axleY) / 2 + 4} fontSize="13" fill={amber} fontWeight="700">
-        {stand ? "L1" : rider ? "L3" : "L2"}
+        {stand ? READINGS.A.label : rider ? READINGS.C.label : READINGS.B.label}
       </text>
     </>
   );
@@ -77,30 +80,23 @@ export function SagGuide() {
         easier.
       </p>
       <div className="grid gap-3 md:grid-cols-3">
-        <Figure
-          title="1. Fully extended (L1)"
-          caption="Bike on a stand, wheel off the ground. Measure between the two points."
-        >
+        <Figure title={`Reading A, ${READINGS.A.name}`} caption={READINGS.A.how}>
           <RearEnd drop={0} stand />
         </Figure>
         <Figure
-          title="2. Static sag = L1 − L2"
-          caption="Bike on its wheels, on its own weight. Bounce it gently, let it settle, measure L2."
+          title={`Reading B, ${READINGS.B.name}: ${SAG_TERMS.static.name.toLowerCase()} = ${SAG_TERMS.static.formula}`}
+          caption={READINGS.B.how}
         >
           <RearEnd drop={10} />
         </Figure>
         <Figure
-          title="3. Race sag = L1 − L3"
-          caption="You aboard in full gear, standing on the pegs in your riding position. Measure L3."
+          title={`Reading C, ${READINGS.C.name}: ${SAG_TERMS.race.name.toLowerCase()} = ${SAG_TERMS.race.formula}`}
+          caption={READINGS.C.how}
         >
           <RearEnd drop={30} rider />
         </Figure>
       </div>
-      <p className="text-sm text-stone-700">
-        Free sag (optional): with the bike on its own weight, lift the end a little and let it settle by itself, without
-        bouncing; measure as for static sag. The gap between the two readings tells the tuner about friction in seals
-        and linkage.
-      </p>
+      <p className="text-sm text-stone-700">{FREE_SAG_NOTE}</p>
     </section>
   );
 }

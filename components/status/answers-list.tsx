@@ -60,7 +60,7 @@ export function AnswersList({ answers, bikeLabel, edit }: AnswersListProps) {
         .filter((k) => sag[k] !== undefined && sag[k] !== "")
         .map(
           (k) =>
-            `${{ rearStatic: "rear static", rearRace: "rear race", forkStatic: "fork static", forkRace: "fork race" }[k]} ${sag[k]} ${sag.unit}`,
+            `${{ rearStatic: "rear static sag", rearRace: "rear race sag", forkStatic: "front static sag", forkRace: "front race sag" }[k]} ${sag[k]} ${sag.unit}`,
         )
         .join(", ") || null
     : null;

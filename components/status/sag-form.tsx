@@ -2,25 +2,36 @@
 
 // The sag follow-up: three readings per end in mm or inches; the engine's verdict comes back at once.
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, type FieldValues } from "react-hook-form";
 import { ErrorText, MeasureField, UnitToggle, errorAt } from "@/components/request-form/fields";
 import { Button } from "@/components/ui/button";
 import type { SagVerdict } from "@/lib/sizing";
 import { friendlyError } from "@/lib/validations/messages";
+import { SAG_TERMS, endSagLabel } from "@/lib/validations/sag-terms";
 import { sagReportSchema } from "@/lib/validations/status";
 import { VerdictCard } from "./verdict-card";
 import { callApi } from "@/lib/api-client";
+import type { SagReportRow } from "./sag-follow-up";
 
 const READINGS = [
-  ["static", "Static sag"],
-  ["race", "Race sag"],
-  ["free", "Free sag (optional)"],
+  ["static", `(${SAG_TERMS.static.formula})`],
+  ["race", `(${SAG_TERMS.race.formula})`],
+  ["free", "(optional)"],
 ] as const;
 
-export function SagForm({ requestId, token, metric }: { requestId: string; token?: string; metric: boolean }) {
-  const router = useRouter();
+export function SagForm({
+  requestId,
+  token,
+  metric,
+  onReported,
+}: {
+  requestId: string;
+  token?: string;
+  metric: boolean;
+  /** The report as stored, for the list of earlier reports. */
+  onReported: (report: SagReportRow) => void;
+}) {
   const [result, setResult] = useState<Partial<Record<"front" | "rear", SagVerdict>> | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const form = useForm<FieldValues>({
@@ -37,7 +48,7 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
   const onSubmit = form.handleSubmit(async () => {
     setProblem(null);
     const raw = form.getValues();
-    const sent = await callApi<{ verdict?: typeof result }>(
+    const sent = await callApi<SagReportRow>(
       `/api/status/${requestId}/sag`,
       "POST",
       { ...raw, token },
@@ -47,8 +58,8 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
       },
     );
     if (sent.ok) {
-      setResult(sent.data?.verdict ?? {});
-      router.refresh();
+      setResult(sent.data.verdict ?? {});
+      onReported(sent.data);
       return;
     }
     for (const [field, message] of Object.entries(sent.fields)) setError(field, { message });
@@ -68,7 +79,7 @@ export function SagForm({ requestId, token, metric }: { requestId: string; token
             <MeasureField
               key={key}
               id={`${end}-${key}`}
-              label={`${end === "rear" ? "Rear" : "Front"} ${text.toLowerCase()}`}
+              label={`${endSagLabel(end, key)} ${text}`}
               register={register(`${end}.${key}`)}
               error={e(`${end}.${key}`)}
               unit={null}

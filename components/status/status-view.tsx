@@ -8,8 +8,8 @@ import { sheetPath } from "@/lib/requests/token";
 import { AnswerForm } from "./answer-form";
 import { AnswersList } from "./answers-list";
 import { SafetyCaution } from "./safety-caution";
-import { SagForm } from "./sag-form";
-import { VerdictCard } from "./verdict-card";
+import { RideFeedbackForm } from "./ride-feedback-form";
+import { SagFollowUp } from "./sag-follow-up";
 import { formatDay } from "@/lib/format";
 
 const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4";
@@ -105,23 +105,20 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
           </p>
           <SafetyCaution />
           <SagGuide />
-          <SagForm requestId={request.id} token={token} metric={metric} />
-          {reports.length ? (
-            <div className="flex flex-col gap-2">
-              <h3 className="font-semibold">Your earlier reports</h3>
-              {reports.map((r) => {
-                const verdict = r.verdict;
-                return (
-                  <div key={r.id} className="flex flex-col gap-2">
-                    <p className="text-sm text-stone-600">Reported {formatDay(r.createdAt)}</p>
-                    {(["rear", "front"] as const).map((end) =>
-                      verdict[end] ? <VerdictCard key={end} verdict={verdict[end]} /> : null,
-                    )}
-                  </div>
-                );
-              })}
-            </div>
-          ) : null}
+          <SagFollowUp requestId={request.id} token={token} metric={metric} reports={reports} />
+        </section>
+      ) : null}
+
+      {request.status === "approved" ? (
+        <section className={box} aria-labelledby="ride-heading">
+          <h2 id="ride-heading" className="text-lg font-semibold">
+            After the first rides: how does it ride now?
+          </h2>
+          <p className="text-stone-700">
+            Tick what you feel at each end, or tell us in your words. We suggest the next clicker step from the setup
+            you run now, and your tuner sends a revised sheet.
+          </p>
+          <RideFeedbackForm requestId={request.id} token={token} />
         </section>
       ) : null}
 

@@ -16,6 +16,8 @@ function columnsOf(v: BikeModelValues) {
     yearFrom: v.yearFrom ?? null,
     yearTo: v.yearTo ?? null,
     notes: v.notes ?? null,
+    forkOilType: v.forkOilType || null,
+    forkOilVolumeMl: v.forkOilVolumeMl ?? null,
     forkKind: v.spec.fork.kind,
     rearWheelTravelMm: v.spec.rear.wheelTravelMm,
     spec: v.spec,

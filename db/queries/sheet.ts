@@ -3,7 +3,7 @@
 import { and, eq } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { getDb } from "@/db/client";
-import { recommendationVersions, setupRequests, user } from "@/db/schema";
+import { bikeModels, recommendationVersions, setupRequests, user } from "@/db/schema";
 
 export async function findSheetRequest(requestId: string) {
   const db = await getDb();
@@ -18,8 +18,11 @@ export async function findSheetRequest(requestId: string) {
       discipline: setupRequests.discipline,
       skill: setupRequests.skill,
       answers: setupRequests.answers,
+      forkOilType: bikeModels.forkOilType,
+      forkOilVolumeMl: bikeModels.forkOilVolumeMl,
     })
     .from(setupRequests)
+    .leftJoin(bikeModels, eq(bikeModels.id, setupRequests.bikeModelId))
     .where(eq(setupRequests.id, requestId))
     .limit(1);
   return row ?? null;

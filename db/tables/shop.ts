@@ -56,6 +56,10 @@ export const bikeModels = pgTable(
     // validated by lib/sizing's bikeSpecSchema on every write.
     spec: jsonb("spec").$type<BikeSpecInput>().notNull(),
     notes: text("notes"),
+    // What the rider needs in the garage, printed on the sheet where known: the fork oil's type as
+    // the shop names it, and the volume in each leg (ml). Not engine data.
+    forkOilType: text("fork_oil_type"),
+    forkOilVolumeMl: doublePrecision("fork_oil_volume_ml"),
     retiredAt: timestamp("retired_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),

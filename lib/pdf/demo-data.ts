@@ -50,6 +50,7 @@ export function demoSheetData(
       skill: "advanced",
       riderWeight: { value: 84, unit: "kg" },
       gearIncluded: false,
+      forkOil: { type: null, volumeMlPerLeg: null },
     },
     version: {
       number: 1,
@@ -60,7 +61,7 @@ export function demoSheetData(
       updatedAt: approvedAt,
     },
     recommendation: recommend(demoSizingInput(options)),
-    reportUrl: "http://localhost:3000/status/demo-token-demo-token-demo-token-0000",
+    reportUrl: options.draft ? null : "http://localhost:3000/status/demo-token-demo-token-demo-token-0000",
     draft: options.draft ?? false,
   };
 }

@@ -46,6 +46,7 @@ export async function buildSheetData(
       skill: request.skill,
       riderWeight: answers.success ? answers.data.rider.weight : null,
       gearIncluded: answers.success ? answers.data.rider.gearIncluded : null,
+      forkOil: { type: request.forkOilType, volumeMlPerLeg: request.forkOilVolumeMl },
     },
     version: {
       number: version.version,
@@ -56,7 +57,8 @@ export async function buildSheetData(
       updatedAt: version.updatedAt,
     },
     recommendation,
-    reportUrl: await ensureSheetReportUrl(request.id),
+    // A draft preview carries no live link: the link is minted only for a sheet the rider may use.
+    reportUrl: options.draft ? null : await ensureSheetReportUrl(request.id),
     draft: options.draft,
   };
 }

@@ -3,6 +3,7 @@
 import { Document, Page, Text, View } from "@react-pdf/renderer";
 import { forceChartGeometry } from "@/lib/charts/force-curve";
 import { forkForceChart, rearForceChart } from "@/lib/charts/recommendation-charts";
+import { SizingBasis } from "./sections/basis";
 import { ForceChart } from "./sections/chart";
 import { Clickers } from "./sections/clickers";
 import { Cautions, NotesAndReport, SagSteps } from "./sections/guidance";
@@ -65,7 +66,12 @@ export function SetupSheet({ data }: { data: SheetData }) {
         <Cautions />
         <Text style={s.h2}>Springs, preload and sag</Text>
         <View style={s.row}>
-          <ForkCard front={rec.front} imperial={imperial} currentNmm={rec.input.currentSprings?.forkRateNmm} />
+          <ForkCard
+            front={rec.front}
+            imperial={imperial}
+            currentNmm={rec.input.currentSprings?.forkRateNmm}
+            forkOil={data.request.forkOil}
+          />
           <ShockCard
             rear={rec.rear}
             collarPitchMm={rec.input.bike.rear.collarPitchMm}
@@ -73,6 +79,7 @@ export function SetupSheet({ data }: { data: SheetData }) {
             currentNmm={rec.input.currentSprings?.shockRateNmm}
           />
         </View>
+        <SizingBasis rec={rec} />
         <Clickers clickers={rec.clickers} />
         <Footer data={data} />
       </Page>

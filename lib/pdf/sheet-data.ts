@@ -25,6 +25,8 @@ export interface SheetRequest {
   /** The weight as the rider typed it (value and unit), and whether gear was included. */
   riderWeight: { value: number; unit: "kg" | "lb" } | null;
   gearIncluded: boolean | null;
+  /** From the catalog model, where the shop filled them in. */
+  forkOil: { type: string | null; volumeMlPerLeg: number | null };
 }
 
 export interface SheetVersion {
@@ -42,8 +44,8 @@ export interface SheetData {
   request: SheetRequest;
   version: SheetVersion;
   recommendation: Recommendation;
-  /** The rider's private link for reporting measured sag. */
-  reportUrl: string;
+  /** The rider's private link for reporting measured sag; none on a draft preview (not approved, no live link). */
+  reportUrl: string | null;
   /** Watermark every page: a preview of a version that is not approved. */
   draft: boolean;
 }

@@ -92,3 +92,4 @@ export {
 } from "./calibration";
 export { calibrationParametersSchema, type CalibrationParameters } from "./bike-schema";
 export * as sizingDefaults from "./defaults";
+export { proposeClickerChanges, type RideFeedback, type ClickerChange, type ClickerProposal } from "./ride-feedback";

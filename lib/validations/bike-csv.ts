@@ -16,6 +16,8 @@ export const CATALOG_CSV_COLUMNS = [
   "yearTo",
   "retired",
   "notes",
+  "forkOilType",
+  "forkOilVolumeMl",
   "spec.massKg",
   "spec.frontFraction",
   "spec.unsprungFrontKg",
@@ -60,7 +62,7 @@ export const CATALOG_CSV_COLUMNS = [
   ].flatMap((c) => ["min", "max", "stock"].map((k) => `spec.clickers.${c}.${k}`)),
 ] as const;
 
-const TEXT_COLUMNS = new Set(["slug", "name", "bikeClass", "notes", "spec.fork.kind"]);
+const TEXT_COLUMNS = new Set(["slug", "name", "bikeClass", "notes", "forkOilType", "spec.fork.kind"]);
 
 function getPath(obj: unknown, path: string): unknown {
   return path
@@ -82,6 +84,8 @@ export interface CatalogCsvModel {
   yearFrom: number | null;
   yearTo: number | null;
   notes: string | null;
+  forkOilType?: string | null;
+  forkOilVolumeMl?: number | null;
   retiredAt: Date | null;
   spec: unknown;
 }

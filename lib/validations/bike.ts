@@ -2,6 +2,7 @@
 // whose integral misses the shock stroke, naming rear.shockStrokeMm), plus the columns the pages list.
 import { z } from "zod";
 import { text } from "./text";
+import { typedNumber } from "./number";
 import { bikeSpecSchema } from "@/lib/sizing";
 export { STROKE_TOLERANCE_FRACTION, STROKE_TOLERANCE_MIN_MM } from "@/lib/sizing/bike-schema";
 
@@ -44,6 +45,15 @@ export const bikeModelSchema = z
     yearFrom: optionalYear,
     yearTo: optionalYear,
     notes: text().trim().max(2000).nullable().optional(),
+    forkOilType: text().trim().max(80, "Keep the oil type under 80 characters").nullable().optional(),
+    forkOilVolumeMl: typedNumber(
+      z
+        .number({ message: "Enter the oil volume per leg in ml, as a number" })
+        .min(50, "Oil volume per leg looks too small (at least 50 ml)")
+        .max(2000, "Oil volume per leg looks too large (at most 2000 ml)")
+        .nullable()
+        .optional(),
+    ),
     spec: bikeSpecSchema,
   })
   .superRefine((b, ctx) => {

@@ -13,16 +13,19 @@ import {
   terrainSchema,
 } from "@/lib/sizing";
 import { emailSchema } from "./auth";
+import { typedNumber } from "./number";
 
 export const massUnitSchema = z.enum(["kg", "lb"]);
 export const lengthUnitSchema = z.enum(["mm", "in"]);
 export const heightUnitSchema = z.enum(["cm", "in"]);
 
 const positive = (field: string, max: number) =>
-  z.coerce
-    .number({ message: `Enter the ${field} as a number` })
-    .positive(`The ${field} must be more than 0`)
-    .max(max, `The ${field} looks too large`);
+  typedNumber(
+    z
+      .number({ message: `Enter the ${field} as a number` })
+      .positive(`The ${field} must be more than 0`)
+      .max(max, `The ${field} looks too large`),
+  );
 
 export const riderStepSchema = z.object({
   name: text().trim().min(2, "Enter your name").max(100, "Keep the name under 100 characters"),
@@ -39,7 +42,13 @@ export const ridingStepSchema = z.object({
   discipline: disciplineSchema,
   terrain: z.array(terrainSchema).max(6).default([]),
   jumpSize: jumpSizeSchema,
-  hoursPerMonth: z.coerce.number().min(0).max(400, "Hours per month looks too large").optional(),
+  hoursPerMonth: typedNumber(
+    z
+      .number({ message: "Enter the hours per month as a number" })
+      .min(0, "Hours per month cannot be negative")
+      .max(400, "Hours per month looks too large")
+      .optional(),
+  ),
 });
 
 const springRateSchema = z.object({ value: positive("spring rate", 400), unit: rateUnitSchema });
@@ -55,7 +64,14 @@ export const bikeStepSchema = z
         mass: z.object({ value: positive("bike weight", 300), unit: massUnitSchema }).optional(),
       })
       .optional(),
-    year: z.coerce.number().int().min(1970, "Year looks too early").max(2100).optional(),
+    year: typedNumber(
+      z
+        .number({ message: "Enter the year as a number, such as 2024" })
+        .int("Enter the year as a whole number, such as 2024")
+        .min(1970, "Year looks too early")
+        .max(2100, "Year looks too late")
+        .optional(),
+    ),
     currentForkSpring: springRateSchema.optional(),
     currentShockSpring: springRateSchema.optional(),
     modifications: text().trim().max(1000).optional(),
@@ -77,7 +93,13 @@ export const bikeStepSchema = z
     }
   });
 
-const sagValue = z.coerce.number().min(0).max(400, "Sag looks too large").optional();
+const sagValue = typedNumber(
+  z
+    .number({ message: "Enter the sag as a number" })
+    .min(0, "Sag cannot be negative")
+    .max(400, "Sag looks too large")
+    .optional(),
+);
 
 export const feelStepSchema = z.object({
   complaints: z.array(complaintSchema).max(8).default([]),

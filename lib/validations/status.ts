@@ -3,6 +3,8 @@
 import { z } from "zod";
 import { text } from "./text";
 import { lengthUnitSchema } from "./request";
+import { typedNumber } from "./number";
+import { SAG_TERMS } from "./sag-terms";
 
 /** A status token from the rider's link, or nothing when the rider is signed in by e-mail. */
 export const statusTokenSchema = text().min(20).max(200).optional();
@@ -16,15 +18,16 @@ export const riderAnswerSchema = z.object({
     .max(2000, "Keep the answer under 2000 characters"),
 });
 
-const sagReading = (what: string) =>
-  z.coerce
-    .number({ message: `Enter the ${what} as a number` })
-    .min(0, `The ${what} cannot be negative`)
-    .max(400, `The ${what} looks too large`);
-
-// Empty inputs arrive as "" from the form: treat them as "not measured" rather than 0.
+// Empty inputs arrive as "" from the form: the shared preprocess reads them as "not measured"
+// rather than 0, and "31,5" as 31.5.
 const optionalReading = (what: string) =>
-  z.preprocess((v) => (v === "" || v === null ? undefined : v), sagReading(what).optional());
+  typedNumber(
+    z
+      .number({ message: `Enter the ${what} as a number` })
+      .min(0, `The ${what} cannot be negative`)
+      .max(400, `The ${what} looks too large`)
+      .optional(),
+  );
 
 const endSchema = (end: "front" | "rear") =>
   z
@@ -44,7 +47,7 @@ const endSchema = (end: "front" | "rear") =>
         ctx.addIssue({
           code: "custom",
           path: ["race"],
-          message: "Race sag (with you aboard) must be larger than static sag",
+          message: `Race sag (${SAG_TERMS.race.meaning}) must be larger than static sag (${SAG_TERMS.static.meaning})`,
         });
     });
 

@@ -49,7 +49,9 @@ test.describe("rider", () => {
 
     await page.goto(link);
     await expect(page).toHaveURL("/my-requests");
-    await expect(page.getByText(`Signed in as ${email}`)).toHaveCount(1);
+    // Once on the page and once in the header (who is signed in, with a way out).
+    await expect(page.getByRole("main").getByText(`Signed in as ${email}`)).toHaveCount(1);
+    await expect(page.getByRole("navigation", { name: "Main" })).toContainText(`Signed in as ${email}`);
 
     const shop = await page.goto("/shop");
     expect(shop?.status()).toBe(403);

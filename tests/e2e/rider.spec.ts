@@ -111,8 +111,8 @@ test.describe("a rider's setup request", () => {
 
     await page.getByRole("checkbox", { name: "Bottoms out" }).check();
     await page.getByRole("group", { name: "Sag unit" }).getByText("in").click();
-    await page.getByLabel("Rear static sag (bike on its own weight)").fill("1.4");
-    await page.getByLabel("Rear race sag (you aboard in gear)").fill("4.3");
+    await page.getByLabel("Rear static sag (the bike on its own weight, no rider)").fill("1.4");
+    await page.getByLabel("Rear race sag (you aboard in full gear)").fill("4.3");
     await page.getByRole("button", { name: "Review" }).click();
     await expect(stepHeading(page)).toContainText("Step 5 of 5");
 
@@ -126,7 +126,7 @@ test.describe("a rider's setup request", () => {
       "350 four-stroke enduro, 2019 (not in the shop's list)",
       "12.8 in",
       "245 lb",
-      "rear static 1.4 in, rear race 4.3 in",
+      "rear static sag 1.4 in, rear race sag 4.3 in",
       "1 photo: bike.png",
     ]) {
       await expect(review.getByText(text, { exact: false }).first(), text).toBeVisible();
@@ -186,14 +186,18 @@ test.describe("a rider's setup request", () => {
     const safety = page.getByRole("note", { name: "Safety" });
     await expect(safety).toContainText("gas-charged shocks store energy");
     await expect(safety).toContainText("manufacturer's service manual");
-    await expect(page.getByRole("img", { name: /Race sag = L1 − L3/ })).toHaveCount(1);
+    await expect(page.getByRole("img", { name: /race sag = A − C/ })).toHaveCount(1);
 
     const form = page.getByRole("form", { name: "Report measured sag" });
     await form.getByRole("group", { name: "Sag unit" }).getByText("in").click();
     await form.getByLabel("Rear static sag").fill("1.5");
     await form.getByLabel("Rear race sag").fill("1.2");
     await form.getByRole("button", { name: "Check my sag" }).click();
-    await expect(form.getByText("Race sag (with you aboard) must be larger than static sag")).toHaveCount(1);
+    await expect(
+      form.getByText(
+        "Race sag (you aboard in full gear) must be larger than static sag (the bike on its own weight, no rider)",
+      ),
+    ).toHaveCount(1);
 
     await form.getByLabel("Rear race sag").fill("4.1");
     await form.getByLabel("Front static sag").fill("1.2");

@@ -1,8 +1,9 @@
 // Reads a PDF the way a person's viewer would, with poppler-utils (pdftotext, pdfinfo).
 import { execFileSync } from "node:child_process";
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
+import { PNG } from "pngjs";
 
 function withFile<T>(pdf: Uint8Array, fn: (file: string) => T): T {
   const dir = mkdtempSync(path.join(os.tmpdir(), "sagwise-pdf-"));
@@ -43,4 +44,33 @@ export function pdfFonts(pdf: Uint8Array): { name: string; embedded: boolean }[]
     .slice(2)
     .filter((line) => line.trim())
     .map((line) => ({ name: line.split(/\s+/)[0]!, embedded: /\byes\s+yes\s+(yes|no)\s+\d+\s+\d+\s*$/.test(line) }));
+}
+
+/** One page rendered to PNG by `pdftoppm` (poppler-utils) at `dpi`, as RGBA pixels (pngjs). */
+export function pdfPagePixels(
+  pdf: Uint8Array,
+  page: number,
+  dpi = 200,
+): { data: Uint8ClampedArray; width: number; height: number } {
+  return withFile(pdf, (file) => {
+    const root = path.join(path.dirname(file), "page");
+    execFileSync("pdftoppm", [
+      "-png",
+      "-r",
+      String(dpi),
+      "-f",
+      String(page),
+      "-l",
+      String(page),
+      "-singlefile",
+      file,
+      root,
+    ]);
+    const image = PNG.sync.read(readFileSync(`${root}.png`));
+    return {
+      data: new Uint8ClampedArray(image.data.buffer, image.data.byteOffset, image.data.length),
+      width: image.width,
+      height: image.height,
+    };
+  });
 }

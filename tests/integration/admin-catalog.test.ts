@@ -112,6 +112,32 @@ describe("create and edit", () => {
     expect(await response.json()).toMatchObject({ name: "Test 350 enduro 2025", slug: "test-350-enduro-2025" });
   });
 
+  it("keeps the fork oil type and volume per leg (a decimal comma too), and names a bad volume", async () => {
+    const model = {
+      ...newModel({ name: "Test 350 enduro 2025" }),
+      forkOilType: "5W fork oil",
+      forkOilVolumeMl: "385,5",
+    };
+    model.spec.fork = { ...model.spec.fork, travelMm: 300 };
+    model.spec.rear.wheelTravelMm = 300;
+    const saved = await putModel(
+      jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, model),
+      idContext(created.id),
+    );
+    expect(saved.status).toBe(200);
+    expect(await saved.json()).toMatchObject({ forkOilType: "5W fork oil", forkOilVolumeMl: 385.5 });
+    const before = await snapshot();
+    const bad = await putModel(
+      jsonRequest(`/api/shop/catalog/${created.id}`, "PUT", tuner, { ...model, forkOilVolumeMl: 5 }),
+      idContext(created.id),
+    );
+    expect(bad.status).toBe(400);
+    expect((await body(bad)).fields).toEqual({
+      forkOilVolumeMl: "Oil volume per leg looks too small (at least 50 ml)",
+    });
+    expect(await snapshot()).toBe(before);
+  });
+
   it("anonymous callers get 401", async () => {
     expect((await noCtx(createModel)(jsonRequest("/api/shop/catalog", "POST", undefined, newModel()))).status).toBe(
       401,

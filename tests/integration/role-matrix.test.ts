@@ -45,6 +45,7 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/requests": everyone,
   "GET /api/requests/[id]": staff,
   "POST /api/requests/[id]/approve": staff,
+  "POST /api/requests/[id]/ride-revision": staff,
   "POST /api/requests/[id]/ask": staff,
   "POST /api/requests/[id]/assign": staff,
   "POST /api/requests/[id]/decline": staff,
@@ -64,6 +65,9 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/shop/catalog/csv": staff,
   "GET /api/shop/settings": adminOnly,
   "PUT /api/shop/settings": adminOnly,
+  "GET /api/shop/emails/wording": adminOnly,
+  "PUT /api/shop/emails/wording": adminOnly,
+  "POST /api/shop/emails/preview": adminOnly,
   "GET /api/shop/stock": staff,
   "POST /api/shop/stock": staff,
   "PUT /api/shop/stock/[id]": staff,
@@ -80,6 +84,7 @@ const EXPECTED: Record<string, Row> = {
   "DELETE /api/shop/team/invites/[id]": adminOnly,
   "POST /api/status/[id]/answer": ridersOwn,
   "POST /api/status/[id]/sag": ridersOwn,
+  "POST /api/status/[id]/feedback": ridersOwn,
   "GET /api/uploads/[id]": { anonymous: 401, riderA: "ok", riderB: 404, tuner: "ok", admin: "ok" },
 };
 
@@ -173,6 +178,7 @@ const PROBE_BODY: Record<string, () => unknown> = {
   "POST /api/auth/[...all]": () => ({ userId: ids.member, role: "tuner" }),
   "POST /api/status/[id]/answer": () => ({ body: "The bike is stock apart from the bars." }),
   "POST /api/status/[id]/sag": () => ({ unit: "mm", front: { static: 30, race: 70 }, rear: { static: 35, race: 105 } }),
+  "POST /api/status/[id]/feedback": () => ({ front: ["bottoming"], rear: [] }),
 };
 const PROBE_QUERY: Record<string, string> = { "GET /api/requests/[id]/sheet": "?version=1" };
 

@@ -183,7 +183,13 @@ describe("setup sheet of seeded approved request r09", () => {
   });
 
   it("explains free, static and race sag step by step and carries the cautions", () => {
-    expect(flat).toContain("Free sag (rear)");
+    // One set of words and reading labels on the sheet, the status page and the e-mails
+    // (lib/validations/sag-terms.ts); the method is common practice.
+    expect(flat).toContain("Reading A, fully extended: Bike on a stand, wheel hanging free.");
+    expect(flat).toContain("Reading B, on its own weight");
+    expect(flat).toContain("Reading C, you aboard");
+    expect(flat).toContain("Free sag (optional)");
+    expect(flat).not.toMatch(/L[123]\b/);
     expect(flat).toContain("Static sag = A − B");
     expect(flat).toContain("Race sag = A − C");
     expect(flat).toContain("Springs and gas-charged shocks store energy");
@@ -197,6 +203,8 @@ describe("setup sheet of seeded approved request r09", () => {
     const token = /\/status\/([A-Za-z0-9_-]{40,})/.exec(text)?.[1];
     expect(token).toBeTruthy();
     expect(await findRequestIdByStatusToken(token!)).toBe(r09);
+    // Printed as a working link on an approved sheet (a PDF link annotation, ISO 32000-1 §12.6.4.7).
+    expect(Buffer.from(pdf).toString("latin1")).toMatch(/\/URI\s*\(/);
   });
 
   it("is reproducible: the same version renders to the same text and bytes", async () => {
@@ -269,6 +277,12 @@ describe("who may open a sheet", () => {
     const text = pdfText(await pdfOf(preview));
     expect(text).toContain("DRAFT PREVIEW: not approved, do not set up the bike from this sheet");
     expect(text).toContain("draft, not approved yet");
+    // A draft carries no live link: the sentence says it comes with approval, and no link is printed.
+    expect(text.replace(/\s+/g, " ")).toContain("the rider's private link appears here once the sheet is approved");
+    expect(text).not.toMatch(/\/status\//);
+    expect(
+      Buffer.from(await pdfOf(await getSheet(r04, { version: "1", preview: "1" }, staffCookie))).toString("latin1"),
+    ).not.toMatch(/\/URI\s*\(/);
   });
 
   it("answers 404 for an unknown version or request, 400 naming the field for a bad version", async () => {

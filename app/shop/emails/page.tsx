@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
+import { getShopName } from "@/db/queries/settings";
 import { emailTemplateNames, emailTemplates } from "@/emails";
+import Link from "next/link";
 import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { renderTemplate } from "@/lib/mail";
@@ -10,12 +12,14 @@ export const dynamic = "force-dynamic";
 // Every e-mail Sagwise sends, rendered with demo data exactly as the mail is built for sending:
 // the html part in a sandboxed frame (no scripts, no navigation) and the plain-text part below it.
 export default async function EmailPreviewsPage() {
-  await requireRole(STAFF_ROLES, { page: "/shop/emails" });
+  const user = await requireRole(STAFF_ROLES, { page: "/shop/emails" });
+  // The shop's own name from its settings, as the real e-mails carry it; the rest is demo data.
+  const shopName = await getShopName();
   const previews = await Promise.all(
     emailTemplateNames.map(async (name) => ({
       name,
       description: emailTemplates[name].description,
-      ...(await renderTemplate(name, emailTemplates[name].demoProps as never)),
+      ...(await renderTemplate(name, { ...emailTemplates[name].demoProps, shopName } as never)),
     })),
   );
   return (
@@ -23,10 +27,18 @@ export default async function EmailPreviewsPage() {
       <div>
         <h1 className="text-2xl font-bold">E-mails</h1>
         <p className="mt-1 max-w-prose text-stone-700">
-          What riders and staff receive, shown with invented demo data. Each e-mail has an html part and a plain-text
-          part for mail apps that show no html.
+          What riders and staff receive, with your shop&apos;s name and invented demo data for the rest. Each e-mail has
+          an html part and a plain-text part for mail apps that show no html.
         </p>
       </div>
+      {user.role === "admin" ? (
+        <Link
+          href="/shop/emails/wording"
+          className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline"
+        >
+          Write the rider e-mails in your shop&apos;s words
+        </Link>
+      ) : null}
       <ul className="flex flex-col gap-8">
         {previews.map((p) => (
           <li

@@ -9,6 +9,17 @@ const TICK_FONT = 13;
 // Svg text does not inherit the page font: name it, or the viewer falls back to its own Helvetica.
 const tick = { fontSize: TICK_FONT, fontFamily: SHEET_FONT };
 
+/** One legend line for the solid series, one for all dashed ones together, each label once. */
+export function legendLines(series: ChartGeometry["series"]): string[] {
+  const unique = (labels: string[]) => [...new Set(labels)];
+  const main = unique(series.filter((l) => l.emphasis === "main").map((l) => l.label));
+  const other = unique(series.filter((l) => l.emphasis !== "main").map((l) => l.label));
+  const lines: string[] = [];
+  if (main.length) lines.push(`Solid line: ${main.join("; ")}`);
+  if (other.length) lines.push(`${other.length === 1 ? "Dashed line" : "Dashed lines"}: ${other.join("; ")}`);
+  return lines;
+}
+
 export function ForceChart({ title, geometry, width }: { title: string; geometry: ChartGeometry; width: number }) {
   const g = geometry;
   const height = (width * g.height) / g.width;
@@ -72,10 +83,9 @@ export function ForceChart({ title, geometry, width }: { title: string; geometry
           />
         ))}
       </Svg>
-      {g.series.map((line) => (
-        <Text key={line.id} style={s.small}>
-          {line.emphasis === "main" ? "Solid line: " : "Dashed line: "}
-          {line.label}
+      {legendLines(g.series).map((line) => (
+        <Text key={line} style={s.small}>
+          {line}
         </Text>
       ))}
     </View>

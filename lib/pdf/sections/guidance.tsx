@@ -3,14 +3,16 @@
 import { Link, Text, View } from "@react-pdf/renderer";
 import { s } from "../styles";
 import { Bullets } from "./parts";
+import { FREE_SAG_NOTE, READINGS, READING_STEPS, SAG_FROM_READINGS, SAG_TERMS } from "@/lib/validations/sag-terms";
+import { COLORS } from "../styles";
+import { QrCode } from "./qr-code";
 
 export const SAG_STEPS = [
-  "Free sag (rear): put the bike on a stand so the rear wheel hangs free. Measure straight up from the rear axle centre to a fixed mark on the rear fender or side panel. Write it down as A.",
-  "Static sag: take the bike off the stand and let it settle on its wheels under its own weight, no rider. Measure the same two points again: B. Static sag = A − B.",
-  "Race sag: sit on the bike in full gear in your riding position, feet on the pegs, with a helper holding the bike upright. A second helper measures again: C. Race sag = A − C.",
-  "Friction makes the bike settle at slightly different heights: for each reading, push the bike down a little and let it rise, then lift it a little and let it settle, and use the average of the two.",
-  "Fork: measure the same three states along the fork, the exposed length of the inner tube from the dust seal to the axle bracket; a cable tie around the tube against the seal makes it easy to read.",
-  "Set race sag first with the shock preload collar, re-measure, then check static sag. Static sag below the window means the spring is too soft; above it, too stiff. Report your figures and we will confirm.",
+  `Pick two fixed marks and always measure between the same two: at the rear, the axle centre and a mark on the rear fender or side panel straight above it; at the fork, the dust seal and the axle bracket (a cable tie around the inner tube against the seal makes it easy to read).`,
+  ...READING_STEPS,
+  `${SAG_FROM_READINGS} Write each reading in the boxes below, for the rear and the fork.`,
+  FREE_SAG_NOTE,
+  `Set ${SAG_TERMS.race.name.toLowerCase()} first with the shock preload collar, measure again, then check ${SAG_TERMS.static.name.toLowerCase()}. ${SAG_TERMS.static.name} below the window means the spring is too soft; above it, too stiff. Report your figures and we will confirm.`,
 ];
 
 export const CAUTIONS = [
@@ -28,6 +30,42 @@ export function SagSteps() {
         Measure in millimetres on level ground, with two helpers. Each step uses the same two marks.
       </Text>
       <Bullets items={SAG_STEPS} numbered />
+      <ReadingBoxes />
+    </View>
+  );
+}
+
+const BOX = { borderWidth: 1, borderColor: COLORS.ink, height: 20, marginHorizontal: 2 } as const;
+
+/** Empty boxes to write the three readings (and the two sags worked out from them) per end. */
+export function ReadingBoxes() {
+  const columns = [
+    `${READINGS.A.label}: ${READINGS.A.name}`,
+    `${READINGS.B.label}: ${READINGS.B.name}`,
+    `${READINGS.C.label}: ${READINGS.C.name}`,
+    `${SAG_TERMS.static.name} ${SAG_TERMS.static.formula}`,
+    `${SAG_TERMS.race.name} ${SAG_TERMS.race.formula}`,
+  ];
+  const width = "17%";
+  return (
+    <View style={{ marginTop: 6 }} wrap={false}>
+      <Text style={s.h3}>Your readings (mm)</Text>
+      <View style={{ flexDirection: "row", marginBottom: 2 }}>
+        <Text style={{ width: "15%" }} />
+        {columns.map((c) => (
+          <Text key={c} style={[s.small, { width, paddingHorizontal: 2 }]}>
+            {c}
+          </Text>
+        ))}
+      </View>
+      {["Rear (shock)", "Fork"].map((end) => (
+        <View key={end} style={{ flexDirection: "row", alignItems: "center", marginBottom: 3 }}>
+          <Text style={{ width: "15%", fontWeight: 600 }}>{end}</Text>
+          {columns.map((c) => (
+            <View key={c} style={[BOX, { width }]} />
+          ))}
+        </View>
+      ))}
     </View>
   );
 }
@@ -47,7 +85,7 @@ export function NotesAndReport({
   approved,
 }: {
   notes: string | null;
-  reportUrl: string;
+  reportUrl: string | null;
   approved: boolean;
 }) {
   return (
@@ -56,13 +94,21 @@ export function NotesAndReport({
       <Text>{notes?.trim() ? notes.trim() : "No extra notes for this setup."}</Text>
       <Text style={s.h2}>Report your sag</Text>
       <Text>
-        {approved
+        {approved && reportUrl
           ? "Once the springs are fitted and set, send us your measured free, static and race sag through your private link. It is for you only: do not share it."
           : "Preview only: the rider's private link appears here once the sheet is approved."}
       </Text>
-      <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
-        {reportUrl}
-      </Link>
+      {approved && reportUrl ? (
+        <View style={{ flexDirection: "row", alignItems: "center", gap: 10, marginTop: 4 }}>
+          <QrCode text={reportUrl} width={84} />
+          <View style={{ flex: 1 }}>
+            <Text style={s.small}>Scan the code with your phone&apos;s camera, or open:</Text>
+            <Link src={reportUrl} style={[s.link, { marginTop: 2 }]}>
+              {reportUrl}
+            </Link>
+          </View>
+        </View>
+      ) : null}
     </View>
   );
 }

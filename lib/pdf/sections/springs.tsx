@@ -19,7 +19,10 @@ function RateTable({
 }) {
   const rec = rateParts(rateNmm, end);
   const stock = stockNmm === null ? null : rateParts(stockNmm, end);
-  const now = currentNmm === undefined ? null : rateParts(currentNmm, end);
+  // The springs the rider told us are fitted now get their own column only where they differ from
+  // the catalog's stock rate (by more than rounding: 0.5 %); otherwise the stock column says so.
+  const same = currentNmm !== undefined && stockNmm !== null && Math.abs(currentNmm - stockNmm) <= 0.005 * stockNmm;
+  const now = currentNmm === undefined || same ? null : rateParts(currentNmm, end);
   const rows: [keyof typeof rec, string][] = [
     ["nMm", "N/mm"],
     ["kgfMm", "kgf/mm"],
@@ -30,7 +33,7 @@ function RateTable({
     <View style={{ marginBottom: 4 }}>
       <View style={s.tableHead}>
         <Text style={{ width: w }}>Recommended</Text>
-        <Text style={{ width: w }}>Stock (for comparison)</Text>
+        <Text style={{ width: w }}>{same ? "Stock, fitted now (as you told us)" : "Stock (the catalog's)"}</Text>
         {now ? <Text style={{ width: w }}>Fitted now (as you told us)</Text> : null}
       </View>
       {rows.map(([key]) => (
@@ -42,16 +45,6 @@ function RateTable({
       ))}
     </View>
   );
-}
-
-const BASIS_WORDS = {
-  "ride-frequency": "Rate chosen to ride like the stock spring does for the rider it was made for, scaled to you",
-  "sag-window": "Rate chosen to meet both the race sag and the static sag targets",
-} as const;
-
-/** Which rate basis sized this end (lib/sizing/README.md, "Model 2"); sheets from engine 1.x have none. */
-function BasisLine({ basis }: { basis: RearResult["rateBasis"] | null | undefined }) {
-  return basis ? <Text style={s.small}>{BASIS_WORDS[basis.used]}.</Text> : null;
 }
 
 type SagState = RearResult["predicted"]["raceState"];
@@ -75,15 +68,28 @@ function SagLines({ result, imperial }: { result: FrontResult | RearResult; impe
   );
 }
 
+/** "5W fork oil, 380 ml in each leg": what the catalog has of the two, or nothing. */
+export function forkOilText(oil: { type: string | null; volumeMlPerLeg: number | null } | undefined, legs: number) {
+  if (!oil || (!oil.type && oil.volumeMlPerLeg === null)) return null;
+  const volume =
+    oil.volumeMlPerLeg === null
+      ? null
+      : `${fixed(oil.volumeMlPerLeg, oil.volumeMlPerLeg % 1 ? 1 : 0)} ml ${legs === 1 ? "in the oil leg" : "in each leg"}`;
+  return [oil.type, volume].filter(Boolean).join(", ");
+}
+
 export function ForkCard({
   front,
   imperial,
   currentNmm,
+  forkOil,
 }: {
   front: FrontResult;
   imperial: boolean;
   currentNmm?: number;
+  forkOil?: { type: string | null; volumeMlPerLeg: number | null };
 }) {
+  const oil = forkOilText(forkOil, front.kind !== "air" && front.sprungLegs === 1 ? 1 : 2);
   const coil = front.kind !== "air" && front.chosenRate;
   return (
     <View style={[s.card, s.col]} wrap={false}>
@@ -99,12 +105,12 @@ export function ForkCard({
             currentNmm={currentNmm}
             end="fork"
           />
-          <BasisLine basis={front.rateBasis} />
           <KeyValue label="Preload">{length(front.preloadMm ?? 0, 1, imperial)}</KeyValue>
           <KeyValue label="Oil level">{`${length(front.oilLevelMm ?? front.stockOilLevelMm, 0, imperial)} (stock ${fixed(front.stockOilLevelMm, 0)} mm)`}</KeyValue>
           <Text style={s.small}>
             Oil level: measured down from the top of the outer tube, fork fully compressed, spring out.
           </Text>
+          {oil ? <KeyValue label="Fork oil">{oil}</KeyValue> : null}
         </>
       ) : (
         <>
@@ -120,6 +126,7 @@ export function ForkCard({
             Set the pressure, then fine-tune it by measuring sag: air forks vary from one to the next.
           </Text>
           <KeyValue label="Oil level">{`as stock, ${length(front.stockOilLevelMm, 0, imperial)}`}</KeyValue>
+          {oil ? <KeyValue label="Fork oil">{oil}</KeyValue> : null}
         </>
       )}
       <SagLines result={front} imperial={imperial} />
@@ -143,7 +150,6 @@ export function ShockCard({
       <Text style={s.h3}>Shock (rear)</Text>
       <Text style={s.muted}>Spring rate</Text>
       <RateTable rateNmm={rear.chosenRate.nMm} stockNmm={rear.stockRate.nMm} currentNmm={currentNmm} end="shock" />
-      <BasisLine basis={rear.rateBasis} />
       <KeyValue label="Preload">{length(rear.preloadMm, 1, imperial)}</KeyValue>
       <KeyValue label="Collar">{`${turns(rear.preloadCollarTurns)} from where the collar just touches the spring (${fixed(collarPitchMm, 1)} mm per turn)`}</KeyValue>
       <SagLines result={rear} imperial={imperial} />

@@ -56,6 +56,8 @@ export default async function BikePage({ params }: { params: Promise<{ id: strin
           yearFrom: model.yearFrom,
           yearTo: model.yearTo,
           notes: model.notes,
+          forkOilType: model.forkOilType,
+          forkOilVolumeMl: model.forkOilVolumeMl,
           spec: model.spec,
         }}
       />

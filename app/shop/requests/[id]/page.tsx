@@ -5,6 +5,8 @@ import { notFound } from "next/navigation";
 import { AnswersPanel } from "@/components/review/answers-panel";
 import { EmailsPanel, MessagesPanel, PhotosPanel, SagReportsPanel } from "@/components/review/activity-panels";
 import { AuditTimeline } from "@/components/review/audit-timeline";
+import { RideFeedbackPanel } from "@/components/review/ride-feedback-panel";
+import { listRideFeedback } from "@/db/queries/ride-feedback";
 import { CalibrationNote } from "@/components/review/calibration-note";
 import { RecommendationEditor } from "@/components/review/recommendation-editor";
 import { VersionPicker, sheetLinkFor } from "@/components/review/version-picker";
@@ -124,6 +126,7 @@ export default async function RequestPage({
         <VersionPicker requestId={id} versions={detail.versions} shown={shown?.version ?? 0} />
       ) : null}
       <WorkflowActions requestId={id} status={detail.status} />
+      <RideFeedbackPanel requestId={id} rows={await listRideFeedback(id)} />
       <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
         <AnswersPanel answers={detail.answers} bikeLabel={detail.bikeLabel} />
         <div className="flex flex-col gap-6">

@@ -1,0 +1,5 @@
+import { PageSkeleton } from "@/components/settings/page-skeleton";
+
+export default function Loading() {
+  return <PageSkeleton blocks={2} />;
+}

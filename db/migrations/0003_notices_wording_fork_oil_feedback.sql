@@ -1,0 +1,42 @@
+CREATE TABLE "staff_notices" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"request_id" uuid NOT NULL,
+	"kind" text NOT NULL,
+	"to_address" text NOT NULL,
+	"detail" jsonb DEFAULT '{}'::jsonb NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"seen_at" timestamp with time zone,
+	"seen_by" text
+);
+--> statement-breakpoint
+CREATE TABLE "email_wording" (
+	"template" text PRIMARY KEY NOT NULL,
+	"heading" text,
+	"intro" text,
+	"updated_at" timestamp with time zone DEFAULT now() NOT NULL,
+	"updated_by" text
+);
+--> statement-breakpoint
+CREATE TABLE "ride_feedback" (
+	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
+	"request_id" uuid NOT NULL,
+	"version_id" uuid NOT NULL,
+	"version" integer NOT NULL,
+	"front" jsonb NOT NULL,
+	"rear" jsonb NOT NULL,
+	"notes" text,
+	"proposal" jsonb NOT NULL,
+	"revised_version" integer,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL
+);
+--> statement-breakpoint
+ALTER TABLE "staff_invites" ADD COLUMN "revoked_at" timestamp with time zone;--> statement-breakpoint
+ALTER TABLE "bike_models" ADD COLUMN "fork_oil_type" text;--> statement-breakpoint
+ALTER TABLE "bike_models" ADD COLUMN "fork_oil_volume_ml" double precision;--> statement-breakpoint
+ALTER TABLE "staff_notices" ADD CONSTRAINT "staff_notices_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "staff_notices" ADD CONSTRAINT "staff_notices_seen_by_user_id_fk" FOREIGN KEY ("seen_by") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "ride_feedback" ADD CONSTRAINT "ride_feedback_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "ride_feedback" ADD CONSTRAINT "ride_feedback_version_id_recommendation_versions_id_fk" FOREIGN KEY ("version_id") REFERENCES "public"."recommendation_versions"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+CREATE INDEX "staff_notices_unseen_idx" ON "staff_notices" USING btree ("seen_at","kind");--> statement-breakpoint
+CREATE INDEX "staff_notices_request_idx" ON "staff_notices" USING btree ("request_id");--> statement-breakpoint
+CREATE INDEX "ride_feedback_request_idx" ON "ride_feedback" USING btree ("request_id","created_at");

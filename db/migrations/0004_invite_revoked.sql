@@ -1,1 +1,0 @@
-ALTER TABLE "staff_invites" ADD COLUMN "revoked_at" timestamp with time zone;
