@@ -13,6 +13,9 @@ const SERVICES = [
   "@/lib/requests/sag-follow-up",
   "@/lib/auth/staff",
   "@/lib/notify",
+  "@/lib/service/hours",
+  "@/lib/service/overview",
+  "@/lib/service/reminders",
 ];
 
 const layer = (files, patterns, ignores = []) => ({ files, ignores, rules: { [RULE]: ["error", { patterns }] } });

@@ -38,6 +38,7 @@ import {
 import { requestAnswersSchema } from "@/lib/validations/request";
 import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
+import { seedService } from "./seed-service";
 import {
   DEMO_CALIBRATION_TRUTH,
   DEMO_REQUESTS,
@@ -305,6 +306,7 @@ export async function seedDemo(): Promise<string> {
     const line = await seedRequest(db, demo, bike, staff, secret);
     if (line) added.push(line);
   }
+  await seedService();
   const [users] = await db.select({ n: count() }).from(user);
   const links = added.length ? `\n  status links:\n  ${added.join("\n  ")}` : "";
   return `${bikes.size} bike classes, ${Number(users?.n ?? 0)} users, ${added.length} new requests${links}`;

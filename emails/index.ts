@@ -3,6 +3,7 @@
 import type { ReactElement } from "react";
 import * as requestDeclined from "./request-declined";
 import * as requestReceived from "./request-received";
+import * as serviceReminder from "./service-reminder";
 import * as sheetReady from "./sheet-ready";
 import * as signInLink from "./sign-in-link";
 import * as staffInvite from "./staff-invite";
@@ -53,6 +54,12 @@ export const emailTemplates = {
     demoProps: sheetReady.demoProps,
     description: "Approved (or revised) setup sheet with its download link",
   } satisfies EmailTemplate<sheetReady.SheetReadyEmailProps>,
+  "service-reminder": {
+    Component: serviceReminder.ServiceReminderEmail,
+    subject: serviceReminder.subject,
+    demoProps: serviceReminder.demoProps,
+    description: "Service due soon (or overdue), with a link to book it",
+  } satisfies EmailTemplate<serviceReminder.ServiceReminderEmailProps>,
 } as const;
 
 export type EmailTemplateName = keyof typeof emailTemplates;

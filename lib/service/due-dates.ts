@@ -52,7 +52,7 @@ function dueByHours(input: DueInput, intervalHours: number): string | null {
   if (!(perMonth > 0)) return null;
   const from = logs.at(-1)?.riddenOn ?? input.startedOn;
   // The first whole day by which the remaining hours are ridden at the usual rate.
-  const days = Math.ceil((((intervalHours - total) / perMonth) * MEAN_MONTH_DAYS) - 1e-9);
+  const days = Math.ceil(((intervalHours - total) / perMonth) * MEAN_MONTH_DAYS - 1e-9);
   return addDays(from, days);
 }
 

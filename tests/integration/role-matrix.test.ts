@@ -76,6 +76,8 @@ const EXPECTED: Record<string, Row> = {
   "PATCH /api/shop/team/[id]": adminOnly,
   "POST /api/status/[id]/answer": ridersOwn,
   "POST /api/status/[id]/sag": ridersOwn,
+  // Logging hours: another rider's token or session is told no (403), not "no such request".
+  "POST /api/status/[id]/hours": { anonymous: 401, riderA: "ok", riderB: 403, tuner: 403, admin: 403 },
   "GET /api/uploads/[id]": { anonymous: 401, riderA: "ok", riderB: 404, tuner: "ok", admin: "ok" },
 };
 
@@ -159,6 +161,7 @@ beforeAll(async () => {
 const PROBE_BODY: Record<string, () => unknown> = {
   "POST /api/auth/[...all]": () => ({ userId: ids.member, role: "tuner" }),
   "POST /api/status/[id]/answer": () => ({ body: "The bike is stock apart from the bars." }),
+  "POST /api/status/[id]/hours": () => ({ hours: "1,5", date: new Date().toISOString().slice(0, 10) }),
   "POST /api/status/[id]/sag": () => ({ unit: "mm", front: { static: 30, race: 70 }, rear: { static: 35, race: 105 } }),
 };
 const PROBE_QUERY: Record<string, string> = { "GET /api/requests/[id]/sheet": "?version=1" };
