@@ -13,6 +13,7 @@ const SERVICES = [
   "@/lib/requests/sag-follow-up",
   "@/lib/auth/staff",
   "@/lib/notify",
+  "@/lib/service/due-soon",
   "@/lib/service/hours",
   "@/lib/service/overview",
   "@/lib/service/reminders",

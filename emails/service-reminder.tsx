@@ -42,9 +42,8 @@ export function ServiceReminderEmail(props: ServiceReminderEmailProps) {
       action={{ label: "Book it: start a request for this bike", url: props.url }}
       after={
         <>
-          <Text style={s.paragraph}>
-            Log the hours you ride on your request page, and the dates move with them: {props.statusUrl}
-          </Text>
+          <Text style={s.paragraph}>Log the hours you ride on your request page, and the dates move with them:</Text>
+          <Text style={s.urlText}>{props.statusUrl}</Text>
           <Text style={s.small}>
             These dates are our estimate from common practice and the hours you gave us, not your bike maker&apos;s
             figures: the manufacturer&apos;s service manual comes first. Forks and gas-charged shocks hold pressure and

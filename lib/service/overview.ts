@@ -11,7 +11,10 @@ import {
   type ServiceSubject,
 } from "@/db/queries/service";
 import { localDateOf } from "./civil-date";
-import { dueState, nextDueDates, type DueState } from "./due-dates";
+import { dueState, nextDueDates } from "./due-dates";
+import type { ServiceHistory, ServiceOverview } from "./types";
+
+export type { DueService, ServiceOverview } from "./types";
 import {
   DEFAULT_NOTICE_DAYS,
   DEFAULT_SERVICE_INTERVALS,
@@ -19,7 +22,6 @@ import {
   SERVICE_ITEM_LABELS,
   intervalsFor,
   type ServiceInterval,
-  type ServiceItem,
 } from "./items";
 
 export interface ServiceConfig {
@@ -38,27 +40,6 @@ export async function loadServiceConfig(): Promise<ServiceConfig> {
     intervals: intervals.length ? intervals : [...DEFAULT_SERVICE_INTERVALS],
     defaults: intervals.length === 0,
   };
-}
-
-export interface DueService {
-  item: ServiceItem;
-  label: string;
-  dueOn: string | null;
-  by: "hours" | "months" | null;
-  state: DueState;
-  intervalHours: number;
-}
-
-export interface ServiceOverview {
-  requestId: string;
-  /** The day the service clock started (shop's calendar) and from what. */
-  startedOn: string;
-  startedBy: "order-shipped" | "sheet-approved";
-  today: string;
-  hoursPerMonth: number | null;
-  hoursLogged: number;
-  logs: { id: string; hours: number; riddenOn: string }[];
-  due: DueService[];
 }
 
 function overviewOf(
@@ -128,11 +109,10 @@ export async function loadServiceOverview(requestId: string, now = new Date()): 
 }
 
 /** The request page's service history: hours logged and reminders sent, with the next due dates. */
-export async function loadServiceHistory(requestId: string, now = new Date()) {
+export async function loadServiceHistory(requestId: string, now = new Date()): Promise<ServiceHistory> {
   const [overview, reminders] = await Promise.all([loadServiceOverview(requestId, now), listReminders([requestId])]);
   return {
     overview,
     reminders: reminders.map((r) => ({ ...r, label: SERVICE_ITEM_LABELS[r.item] ?? r.item })),
   };
 }
-export type ServiceHistory = Awaited<ReturnType<typeof loadServiceHistory>>;

@@ -62,6 +62,7 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/shop/catalog/csv": staff,
   "GET /api/shop/settings": adminOnly,
   "PUT /api/shop/settings": adminOnly,
+  "PUT /api/shop/settings/service": adminOnly,
   "GET /api/shop/stock": staff,
   "POST /api/shop/stock": staff,
   "PUT /api/shop/stock/[id]": staff,
