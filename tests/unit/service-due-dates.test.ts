@@ -62,9 +62,7 @@ describe("the shop's calendar day of an instant", () => {
     // Adding 24 h to the instant instead would land at 23:30 CET on 25 Oct: the wrong day.
     const startedOn = localDateOf(new Date("2026-10-24T22:30:00Z"), "Europe/Berlin");
     expect(addDays(startedOn, 1)).toBe("2026-10-26");
-    expect(localDateOf(new Date(Date.parse("2026-10-24T22:30:00Z") + 86_400_000), "Europe/Berlin")).toBe(
-      "2026-10-25",
-    );
+    expect(localDateOf(new Date(Date.parse("2026-10-24T22:30:00Z") + 86_400_000), "Europe/Berlin")).toBe("2026-10-25");
   });
 });
 
