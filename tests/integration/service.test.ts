@@ -16,7 +16,7 @@ import { resolveAuthSecret } from "@/lib/auth/secret";
 import { drainOutbox } from "@/lib/mail";
 import { demoStatusToken } from "@/lib/requests/token";
 import { addDays } from "@/lib/service/civil-date";
-import { loadServiceOverview } from "@/lib/service/overview";
+import { loadServiceOverview, loadServiceRows } from "@/lib/service/overview";
 import { queueDueReminders } from "@/lib/service/reminders";
 import { setupTestApp } from "../helpers/app";
 import { ORIGIN } from "../helpers/auth";
@@ -38,6 +38,23 @@ const post = (requestId: string, body: unknown) =>
   );
 
 const today = () => new Date().toISOString().slice(0, 10); // the demo shop's calendar is UTC
+
+describe("the demo shop", () => {
+  it("has riders with services overdue, due soon and far off", async () => {
+    const rows = await loadServiceRows();
+    const states = new Set(rows.flatMap((r) => r.overview.due.map((d) => d.state)));
+    expect([...states].sort()).toEqual(expect.arrayContaining(["due-soon", "later", "overdue"]));
+    // r11: supercross at 40 h/month from an approval 14 days ago, 9.5 h logged 10 and 6 days ago:
+    // fork oil every 10 h (common practice) is reached by the projection long before today.
+    const r11 = rows.find((r) => r.subject.requestId === id("r11"))!;
+    expect(r11.overview.hoursLogged).toBe(9.5);
+    expect(r11.overview.due.find((d) => d.item === "fork-oil")!.state).toBe("overdue");
+    // r10: enduro, 30 h fork oil at 14 h/month from 11 days ago: about two months on.
+    expect(rows.find((r) => r.subject.requestId === id("r10"))!.overview.due.every((d) => d.state === "later")).toBe(
+      true,
+    );
+  });
+});
 
 describe("POST /api/status/:id/hours", () => {
   it("logs hours with a decimal comma and answers the moved due dates", async () => {
