@@ -11,7 +11,7 @@ export function ServiceHistory({ history }: { history: History }) {
   return (
     <section aria-labelledby="service-history-heading" className="rounded-xl border border-stone-200 bg-white p-4">
       <h2 id="service-history-heading" className="mb-2 text-lg font-semibold">
-        Service history
+        Service record
       </h2>
       {!overview ? (
         <p className="text-sm text-stone-600">Service dates start once a setup sheet is approved.</p>

@@ -87,7 +87,7 @@ test.describe("staff", () => {
     const row = table.getByRole("row").filter({ hasText: "Callum Ferreira-Stone" }).filter({ hasText: "Fork oil" });
     await expect(row).toContainText("Overdue since");
     await row.getByRole("link", { name: "Callum Ferreira-Stone" }).click();
-    await expect(page.getByRole("heading", { name: "Service history" })).toBeVisible();
+    await expect(page.getByRole("heading", { name: "Service record" })).toBeVisible();
   });
 
   test("the admin's intervals page refuses a bad figure beside its field", async ({ page }) => {

@@ -62,7 +62,7 @@ test.describe("e-mail previews", () => {
     await page.getByRole("link", { name: "E-mails" }).click();
     await expect(page).toHaveURL("/shop/emails");
     await expect(page.getByRole("heading", { level: 1 })).toHaveText("E-mails");
-    await expect(page.getByRole("heading", { level: 2 })).toHaveCount(6);
+    await expect(page.getByRole("heading", { level: 2 })).toHaveCount(7);
 
     const frame = page.frameLocator(
       'iframe[title="Approved (or revised) setup sheet with its download link: html preview"]',
