@@ -15,6 +15,10 @@ const SERVICES = [
   "@/lib/notify",
   "@/lib/notify-staff",
   "@/lib/requests/rider-answer",
+  "@/lib/service/due-soon",
+  "@/lib/service/hours",
+  "@/lib/service/overview",
+  "@/lib/service/reminders",
 ];
 
 const layer = (files, patterns, ignores = []) => ({ files, ignores, rules: { [RULE]: ["error", { patterns }] } });

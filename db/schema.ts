@@ -6,3 +6,4 @@ export * from "./tables/calibration";
 export * from "./tables/notices";
 export * from "./tables/email-wording";
 export * from "./tables/ride-feedback";
+export * from "./tables/service";

@@ -39,6 +39,7 @@ import { requestAnswersSchema } from "@/lib/validations/request";
 import { loadShopSizingContext } from "./queries/sizing-context";
 import { createStatusLink } from "./queries/status-links";
 import { seedNotices } from "./seed-notices";
+import { seedService } from "./seed-service";
 import {
   DEMO_CALIBRATION_TRUTH,
   DEMO_REQUESTS,
@@ -307,6 +308,7 @@ export async function seedDemo(): Promise<string> {
     if (line) added.push(line);
   }
   await seedNotices(db);
+  await seedService();
   const [users] = await db.select({ n: count() }).from(user);
   const links = added.length ? `\n  status links:\n  ${added.join("\n  ")}` : "";
   return `${bikes.size} bike classes, ${Number(users?.n ?? 0)} users, ${added.length} new requests${links}`;

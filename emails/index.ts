@@ -3,6 +3,7 @@
 import type { ReactElement } from "react";
 import * as requestDeclined from "./request-declined";
 import * as requestReceived from "./request-received";
+import * as serviceReminder from "./service-reminder";
 import * as sheetReady from "./sheet-ready";
 import * as signInLink from "./sign-in-link";
 import * as staffInvite from "./staff-invite";
@@ -60,6 +61,12 @@ export const emailTemplates = {
     demoProps: staffNotice.demoProps,
     description: "Notice to the shop: new request, rider's answer, sag report or payment",
   } satisfies EmailTemplate<staffNotice.StaffNoticeEmailProps>,
+  "service-reminder": {
+    Component: serviceReminder.ServiceReminderEmail,
+    subject: serviceReminder.subject,
+    demoProps: serviceReminder.demoProps,
+    description: "Service due soon (or overdue), with a link to book it",
+  } satisfies EmailTemplate<serviceReminder.ServiceReminderEmailProps>,
 } as const;
 
 export type EmailTemplateName = keyof typeof emailTemplates;

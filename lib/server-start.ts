@@ -1,9 +1,11 @@
 // Before the first request: refuse to run in production without BETTER_AUTH_SECRET, open and
 // migrate the database (so a fresh data folder is ready, and a locked one fails at start, loudly),
-// and start the e-mail outbox worker, which first sends what an earlier run left queued.
+// start the e-mail outbox worker, which first sends what an earlier run left queued, and the daily
+// service reminder job.
 import { getDatabase } from "@/db/client";
 import { resolveAuthSecret } from "@/lib/auth/secret";
 import { startOutboxWorker } from "@/lib/mail";
+import { startReminderScheduler } from "@/lib/service/reminders";
 
 export async function prepareServer(): Promise<void> {
   try {
@@ -14,4 +16,5 @@ export async function prepareServer(): Promise<void> {
     process.exit(1);
   }
   startOutboxWorker();
+  startReminderScheduler();
 }

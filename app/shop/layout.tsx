@@ -25,6 +25,7 @@ const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
   { href: "/shop/stock", label: "Stock", roles: STAFF_ROLES },
   { href: "/shop/emails", label: "E-mails", roles: STAFF_ROLES },
   { href: "/shop/tools", label: "Tools", roles: STAFF_ROLES },
+  { href: "/shop/service", label: "Due soon", roles: STAFF_ROLES },
   { href: "/shop/targets", label: "Targets", roles: ["admin"] },
   { href: "/shop/team", label: "Team", roles: ["admin"] },
   { href: "/shop/settings", label: "Settings", roles: ["admin"] },

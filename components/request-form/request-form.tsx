@@ -32,7 +32,14 @@ function send(draft: Draft, photos: File[]) {
   return callApi<{ statusUrl: string }>("/api/requests", "POST", body, { offline: OFFLINE });
 }
 
-export function RequestForm({ metric }: { metric: boolean }) {
+/** `prefill.bike`: the catalog bike a link chose (/request?bike=<id>, e.g. from a service reminder). */
+export function RequestForm({
+  metric,
+  prefill,
+}: {
+  metric: boolean;
+  prefill?: { bike?: { id: string; name: string } };
+}) {
   const router = useRouter();
   const [draft, setDraft] = useState<Draft | null>(null);
   const [restored, setRestored] = useState(false);
@@ -47,14 +54,17 @@ export function RequestForm({ metric }: { metric: boolean }) {
   const heading = useRef<HTMLHeadingElement>(null);
   const shownStep = useRef<number | null>(null);
 
+  const [prefillId, prefillName] = [prefill?.bike?.id, prefill?.bike?.name];
   useEffect(() => {
     const found = loadDraft();
+    const start = found ?? emptyDraft();
+    if (prefillId) start.values.bike = { ...start.values.bike, modelId: prefillId, bikeName: prefillName ?? "" };
     // Reading localStorage can only happen in the browser, after the first render.
     // eslint-disable-next-line react-hooks/set-state-in-effect
-    setDraft(found ?? emptyDraft());
+    setDraft(start);
     setRestored(Boolean(found && Object.keys(found.values).length));
     setLostPhotos(found?.photoCount ?? 0);
-  }, []);
+  }, [prefillId, prefillName]);
 
   // Moving between steps puts the focus on the new step's heading (not on first load).
   const step = draft?.step;

@@ -5,6 +5,8 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import type { RiderStatus } from "@/db/queries/status";
 import { STATUS_NEXT_STEP } from "@/lib/requests/status";
 import { sheetPath } from "@/lib/requests/token";
+import { ServiceDuePanel } from "@/components/service/service-due-panel";
+import type { ServiceOverview } from "@/lib/service/types";
 import { AnswerForm } from "./answer-form";
 import { AnswersList } from "./answers-list";
 import { SafetyCaution } from "./safety-caution";
@@ -14,7 +16,17 @@ import { formatDay } from "@/lib/format";
 
 const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4";
 
-export function StatusView({ data, token, justSent }: { data: RiderStatus; token?: string; justSent?: boolean }) {
+export function StatusView({
+  data,
+  token,
+  justSent,
+  service,
+}: {
+  data: RiderStatus;
+  token?: string;
+  justSent?: boolean;
+  service?: ServiceOverview | null;
+}) {
   const { request, versions, messages, photos, reports } = data;
   const withToken = (path: string) =>
     token ? `${path}${path.includes("?") ? "&" : "?"}token=${encodeURIComponent(token)}` : path;
@@ -121,6 +133,8 @@ export function StatusView({ data, token, justSent }: { data: RiderStatus; token
           <RideFeedbackForm requestId={request.id} token={token} />
         </section>
       ) : null}
+
+      {service ? <ServiceDuePanel requestId={request.id} token={token} overview={service} /> : null}
 
       {photos.length ? (
         <section className={box} aria-labelledby="photos-heading">

@@ -68,6 +68,7 @@ const EXPECTED: Record<string, Row> = {
   "GET /api/shop/emails/wording": adminOnly,
   "PUT /api/shop/emails/wording": adminOnly,
   "POST /api/shop/emails/preview": adminOnly,
+  "PUT /api/shop/settings/service": adminOnly,
   "GET /api/shop/stock": staff,
   "POST /api/shop/stock": staff,
   "PUT /api/shop/stock/[id]": staff,
@@ -85,6 +86,8 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/status/[id]/answer": ridersOwn,
   "POST /api/status/[id]/sag": ridersOwn,
   "POST /api/status/[id]/feedback": ridersOwn,
+  // Logging hours: another rider's token or session is told no (403), not "no such request".
+  "POST /api/status/[id]/hours": { anonymous: 401, riderA: "ok", riderB: 403, tuner: 403, admin: 403 },
   "GET /api/uploads/[id]": { anonymous: 401, riderA: "ok", riderB: 404, tuner: "ok", admin: "ok" },
 };
 
@@ -177,6 +180,7 @@ beforeAll(async () => {
 const PROBE_BODY: Record<string, () => unknown> = {
   "POST /api/auth/[...all]": () => ({ userId: ids.member, role: "tuner" }),
   "POST /api/status/[id]/answer": () => ({ body: "The bike is stock apart from the bars." }),
+  "POST /api/status/[id]/hours": () => ({ hours: "1,5", date: new Date().toISOString().slice(0, 10) }),
   "POST /api/status/[id]/sag": () => ({ unit: "mm", front: { static: 30, race: 70 }, rear: { static: 35, race: 105 } }),
   "POST /api/status/[id]/feedback": () => ({ front: ["bottoming"], rear: [] }),
 };

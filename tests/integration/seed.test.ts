@@ -24,6 +24,9 @@ const TABLES = {
   auditEvents: schema.auditEvents,
   sagReports: schema.sagReports,
   bikeCalibrations: schema.bikeCalibrations,
+  serviceSettings: schema.serviceSettings,
+  serviceIntervals: schema.serviceIntervals,
+  serviceHourLogs: schema.serviceHourLogs,
 };
 
 async function countAll() {

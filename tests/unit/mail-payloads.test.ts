@@ -22,6 +22,7 @@ import { configureOutbox, drainOutbox, queueTemplateEmail, resetOutboxPolicy } f
 import { notifyRider } from "@/lib/notify";
 import { notifyStaff } from "@/lib/notify-staff";
 import { renderSetupSheet } from "@/lib/pdf";
+import { queueDueReminders } from "@/lib/service/reminders";
 import { demoSheetData } from "@/lib/pdf/demo-data";
 import { closeTestDatabase, createTestDatabase } from "../helpers/db";
 import { pdfText } from "../helpers/pdf";
@@ -249,6 +250,26 @@ describe("e-mails not tied to a request", () => {
     expect(mail.subject).toBe(`Mara Quillfeather invited you to the ${SHOP} workspace`);
     expect(linkIn(mail, "/invite/")).toBe(url);
     expect(mail.text).toContain("As a tuner you can");
+  });
+});
+
+describe("the service reminder job", () => {
+  it("service-reminder: the due services, the booking link with the bike, and a status link that opens the request", async () => {
+    listen();
+    // The demo shop: r09's rider logged 12 h three days ago (db/seed-service.ts), so fork oil
+    // (15 h for motocross, common practice) falls due within the 14-day notice.
+    expect(await queueDueReminders()).toBeGreaterThan(0);
+    await drainOutbox();
+    const mail = posted.find((m) => [m.to].flat().includes(RIDER))!;
+    expect(mail, "a reminder to r09's rider").toBeTruthy();
+    covered.add("service-reminder");
+    expect(mail.from).toBe(process.env.MAIL_FROM);
+    expect(mail.tags).toEqual([{ name: "template", value: "service-reminder" }]);
+    expect(mail.subject).toMatch(/due for your /);
+    expect(mail.text).toContain("Fork oil change");
+    const booking = linkIn(mail, "/request?bike=");
+    expect(new URL(booking).searchParams.get("bike")).toBe(stableUuid("bike:mx-450-4t"));
+    await opensRequest(linkIn(mail, "/status/", "text"));
   });
 });
 

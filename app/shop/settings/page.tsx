@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { SettingsForm } from "@/components/settings/settings-form";
 import { getShopSettings } from "@/db/queries/settings";
 import { requireRole } from "@/lib/auth/guard";
@@ -13,6 +14,9 @@ export default async function SettingsPage() {
   return (
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold">Shop settings</h1>
+      <Link href="/shop/settings/service" className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">
+        Service intervals and reminders
+      </Link>
       <SettingsForm
         initial={{
           name: s?.name ?? "",

@@ -5,6 +5,7 @@ import { StatusView } from "@/components/status/status-view";
 import { findRequestForViewer, loadRiderStatus } from "@/db/queries/status";
 import { requireSession } from "@/lib/auth/guard";
 import { isUuid } from "@/lib/validations/id";
+import { loadServiceOverview } from "@/lib/service/overview";
 
 export const metadata: Metadata = { title: "Your request", robots: { index: false, follow: false } };
 export const dynamic = "force-dynamic";
@@ -22,7 +23,7 @@ export default async function MyRequestPage({ params }: { params: Promise<{ id: 
       <Link href="/my-requests" className="inline-flex min-h-11 items-center font-semibold text-pine-700 underline">
         All my requests
       </Link>
-      <StatusView data={data} />
+      <StatusView data={data} service={await loadServiceOverview(requestId)} />
     </div>
   );
 }

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { StatusView } from "@/components/status/status-view";
 import { findRequestForViewer, loadRiderStatus, touchStatusToken } from "@/db/queries/status";
+import { loadServiceOverview } from "@/lib/service/overview";
 
 // The token is the rider's key: keep the page out of search engines and the token out of Referer.
 export const metadata: Metadata = {
@@ -24,5 +25,12 @@ export default async function StatusPage({
   const data = await loadRiderStatus(requestId);
   if (!data) notFound();
   await touchStatusToken(token).catch(() => undefined);
-  return <StatusView data={data} token={token} justSent={(await searchParams).sent === "1"} />;
+  return (
+    <StatusView
+      data={data}
+      token={token}
+      justSent={(await searchParams).sent === "1"}
+      service={await loadServiceOverview(requestId)}
+    />
+  );
 }

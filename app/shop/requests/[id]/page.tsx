@@ -8,6 +8,7 @@ import { AuditTimeline } from "@/components/review/audit-timeline";
 import { RideFeedbackPanel } from "@/components/review/ride-feedback-panel";
 import { listRideFeedback } from "@/db/queries/ride-feedback";
 import { CalibrationNote } from "@/components/review/calibration-note";
+import { ServiceHistory } from "@/components/service/service-history";
 import { RecommendationEditor } from "@/components/review/recommendation-editor";
 import { VersionPicker, sheetLinkFor } from "@/components/review/version-picker";
 import { VersionView } from "@/components/review/version-view";
@@ -20,6 +21,7 @@ import { requireRole } from "@/lib/auth/guard";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { formatDay } from "@/lib/format";
 import { isUuid } from "@/lib/validations/id";
+import { loadServiceHistory } from "@/lib/service/overview";
 
 export const metadata: Metadata = { title: "Request" };
 export const dynamic = "force-dynamic";
@@ -133,6 +135,7 @@ export default async function RequestPage({
           <PhotosPanel photos={detail.photos} />
           <MessagesPanel messages={detail.messages} />
           <SagReportsPanel reports={detail.sagReports} />
+          <ServiceHistory history={await loadServiceHistory(id)} />
         </div>
         <EmailsPanel emails={detail.emails} />
         <AuditTimeline events={detail.audit} />
