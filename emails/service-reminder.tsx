@@ -39,11 +39,12 @@ export function ServiceReminderEmail(props: ServiceReminderEmailProps) {
       riderName={props.riderName}
       preview={`Service reminder for your ${props.bikeLabel}, from the hours you ride.`}
       heading="Your suspension is due for a service"
+      intro={`From the hours you ride, your ${props.bikeLabel} is coming up for:`}
       action={{ label: "Book it: start a request for this bike", url: props.url }}
+      secondary={{ label: "Log your hours", url: props.statusUrl }}
       after={
         <>
-          <Text style={s.paragraph}>Log the hours you ride on your request page, and the dates move with them:</Text>
-          <Text style={s.urlText}>{props.statusUrl}</Text>
+          <Text style={s.paragraph}>Log the hours you ride on your request page, and the dates move with them.</Text>
           <Text style={s.small}>
             These dates are our estimate from common practice and the hours you gave us, not your bike maker&apos;s
             figures: the manufacturer&apos;s service manual comes first. Forks and gas-charged shocks hold pressure and
@@ -52,7 +53,6 @@ export function ServiceReminderEmail(props: ServiceReminderEmailProps) {
         </>
       }
     >
-      <Text style={s.paragraph}>From the hours you ride, your {props.bikeLabel} is coming up for:</Text>
       {props.services.map((service) => (
         <Text key={service.label} style={{ ...s.paragraph, margin: "0 0 8px", paddingLeft: "12px" }}>
           <strong>{service.label}</strong>
