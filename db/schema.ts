@@ -3,3 +3,4 @@ export * from "./tables/auth";
 export * from "./tables/shop";
 export * from "./tables/requests";
 export * from "./tables/calibration";
+export * from "./tables/orders";

@@ -305,6 +305,7 @@ export async function seedDemo(): Promise<string> {
     const line = await seedRequest(db, demo, bike, staff, secret);
     if (line) added.push(line);
   }
+  await (await import("./seed-orders")).seedOrders(db);
   const [users] = await db.select({ n: count() }).from(user);
   const links = added.length ? `\n  status links:\n  ${added.join("\n  ")}` : "";
   return `${bikes.size} bike classes, ${Number(users?.n ?? 0)} users, ${added.length} new requests${links}`;

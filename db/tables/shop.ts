@@ -56,6 +56,8 @@ export const bikeModels = pgTable(
     // validated by lib/sizing's bikeSpecSchema on every write.
     spec: jsonb("spec").$type<BikeSpecInput>().notNull(),
     notes: text("notes"),
+    // The workshop's own build notes for this model (printed on an order's build sheet).
+    buildNotes: text("build_notes"),
     retiredAt: timestamp("retired_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
