@@ -3,6 +3,7 @@
 import { and, asc, desc, eq, inArray, isNotNull, isNull, sql } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
 import {
+  bikeModels,
   finisherJobs,
   finishers,
   orderEvents,
@@ -408,4 +409,39 @@ export async function findApprovedVersionForOrder(requestId: string, executor?: 
     .orderBy(desc(recommendationVersions.version))
     .limit(1);
   return row ?? null;
+}
+
+/** What the build sheet prints beside the order: the request, its bike model's build notes, the version's figures. */
+export async function findBuildSheetContext(orderId: string) {
+  const db = await getDb();
+  const [row] = await db
+    .select({
+      requestNumber: setupRequests.number,
+      riderName: setupRequests.riderName,
+      bikeLabel: setupRequests.bikeLabel,
+      bikeYear: setupRequests.bikeYear,
+      bikeModelId: setupRequests.bikeModelId,
+      bikeModelName: bikeModels.name,
+      buildNotes: bikeModels.buildNotes,
+      version: recommendationVersions.version,
+      output: recommendationVersions.output,
+    })
+    .from(orders)
+    .innerJoin(setupRequests, eq(setupRequests.id, orders.requestId))
+    .leftJoin(bikeModels, eq(bikeModels.id, setupRequests.bikeModelId))
+    .leftJoin(recommendationVersions, eq(recommendationVersions.id, orders.versionId))
+    .where(eq(orders.id, orderId))
+    .limit(1);
+  return row ?? null;
+}
+
+/** The workshop's build notes of a catalog model; false when there is no such model. */
+export async function saveBuildNotes(bikeModelId: string, buildNotes: string | null): Promise<boolean> {
+  const db = await getDb();
+  const rows = await db
+    .update(bikeModels)
+    .set({ buildNotes, updatedAt: new Date() })
+    .where(eq(bikeModels.id, bikeModelId))
+    .returning({ id: bikeModels.id });
+  return rows.length === 1;
 }

@@ -15,7 +15,11 @@ import { POST as finisherBack } from "@/app/api/orders/[id]/finisher-back/route"
 import { POST as refund } from "@/app/api/orders/[id]/refund/route";
 import { GET as getOrder, PATCH as patchOrder } from "@/app/api/orders/[id]/route";
 import { POST as webhook } from "@/app/api/payments/webhook/route";
-import { POST as createOrder } from "@/app/api/requests/[id]/order/route";
+import { GET as listOrders, POST as createOrder } from "@/app/api/requests/[id]/order/route";
+import { GET as buildSheetPdf } from "@/app/api/orders/[id]/build-sheet/route";
+import { PUT as putBuildNotes } from "@/app/api/shop/catalog/[id]/build-notes/route";
+import { PUT as putOrderSettings } from "@/app/api/shop/orders-settings/route";
+import { pdfText } from "../helpers/pdf";
 import { getDb } from "@/db/client";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { findLatestShippedOrderForRequest, saveOrderSettings } from "@/db/queries/orders";
@@ -384,5 +388,60 @@ describe("who may open an order", () => {
     expect(
       (await call(createOrder, "POST", requestId("r11"), { serviceType: "kit", token: token("r09") })).status,
     ).toBe(404);
+  });
+});
+
+describe("build sheet and settings", () => {
+  it("prints the sheet's springs with their rates, the model's build notes and the steps", async () => {
+    const id = stableUuid("order:o3"); // demo kit order on r09 (db/seed-orders.ts)
+    const order = await view(id);
+    const bikeModelId = stableUuid("bike:mx-450-4t"); // r09's bike (db/seed-data.ts)
+    const saved = await call(
+      putBuildNotes,
+      "PUT",
+      bikeModelId,
+      { buildNotes: "Check the linkage bearings." },
+      { cookie: tuner },
+    );
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const response = await buildSheetPdf(
+      new Request(`${ORIGIN()}/api/orders/${id}/build-sheet`, { headers: { cookie: tuner, ...fromClient() } }),
+      { params: Promise.resolve({ id }) },
+    );
+    expect(response.status).toBe(200);
+    const text = pdfText(new Uint8Array(await response.arrayBuffer()));
+    expect(text).toContain(`Build sheet · order ${order.number}`);
+    for (const line of order.lines.filter((l) => l.spring))
+      expect(text).toContain(`${line.spring!.rateNmm.toFixed(2)} N/mm`);
+    expect(text).toContain("Check the linkage bearings.");
+    expect(text).toContain("Pick the springs and parts listed");
+  });
+
+  it("lists a request's orders for its rider, and refuses settings in the shop's words", async () => {
+    const listed = await call(listOrders, "GET", requestId("r09"), undefined, { query: `?token=${token("r09")}` });
+    expect(listed.status).toBe(200);
+    expect((listed.body.orders as OrderView[]).length).toBeGreaterThan(1);
+    const owner = cookieFrom(await signInStaff("owner@sagwise.test", getEnv().DEMO_PASSWORD));
+    const bad = await call(
+      putOrderSettings,
+      "PUT",
+      "",
+      {
+        currency: "EURO",
+        taxRateBp: -1,
+        paymentMode: "half",
+        depositPercent: 0,
+        notifyStages: [],
+        packingInstructions: null,
+      },
+      { cookie: owner },
+    );
+    expect(bad.status).toBe(400);
+    expect(bad.body.fields).toEqual({
+      currency: "Enter a three-letter currency code (ISO 4217, e.g. EUR)",
+      taxRateBp: "The tax rate cannot be negative",
+      paymentMode: "Choose full payment or a deposit",
+      depositPercent: "The deposit must be at least 1 %",
+    });
   });
 });

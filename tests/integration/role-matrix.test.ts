@@ -52,7 +52,15 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/requests/[id]/decline": staff,
   "PATCH /api/requests/[id]/recommendation": staff,
   "GET /api/requests/[id]/sheet": { anonymous: 401, riderA: "ok", riderB: 403, tuner: "ok", admin: "ok" },
+  "GET /api/requests/[id]/order": staffOrRider,
   "POST /api/requests/[id]/order": staffOrRider,
+  "GET /api/orders/[id]/build-sheet": staff,
+  "PUT /api/shop/catalog/[id]/build-notes": staff,
+  "GET /api/shop/orders-settings": adminOnly,
+  "PUT /api/shop/orders-settings": adminOnly,
+  "PUT /api/shop/price-list": adminOnly,
+  "POST /api/shop/finishers": adminOnly,
+  "PATCH /api/shop/finishers/[id]": adminOnly,
   "GET /api/orders/[id]": staffOrRider,
   "PATCH /api/orders/[id]": staff,
   "PUT /api/orders/[id]/lines": staff,
@@ -134,6 +142,7 @@ beforeAll(async () => {
   ids.request = stableUuid("request:r09");
   ids.bike = stableUuid("bike:mx-450-4t");
   ids.order = stableUuid("order:o3"); // a demo order on r09 (db/seed-orders.ts)
+  ids.finisher = stableUuid("finisher:polish");
   const [stock] = await db.select({ id: springStock.id }).from(springStock).limit(1);
   const [tuner2] = await db.select({ id: user.id }).from(user).where(eq(user.email, "tuner2@sagwise.test"));
   ids.stock = stock!.id;
@@ -198,7 +207,9 @@ function target(route: string, method: string): { url: string; params: Record<st
               ? ids.upload
               : route.startsWith("/api/orders/")
                 ? ids.order
-                : undefined;
+                : route.startsWith("/api/shop/finishers/")
+                  ? ids.finisher
+                  : undefined;
   return { url: route.replace("[id]", id ?? "") + (PROBE_QUERY[`${method} ${route}`] ?? ""), params: id ? { id } : {} };
 }
 
