@@ -36,7 +36,7 @@ export function OrderTimeline({
                 done ? "bg-pine-700" : now ? "bg-amber-500 ring-4 ring-amber-100" : "bg-stone-300",
               )}
             />
-            <span className={cn(!done && !now && "text-stone-500")}>
+            <span className={cn(!done && !now && "text-stone-600")}>
               {RIDER_STAGE_WORDS[s]}
               {done ? <span className="text-sm text-stone-600"> · done{at ? ` ${formatDay(at)}` : ""}</span> : null}
               {now ? (

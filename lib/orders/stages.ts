@@ -39,7 +39,9 @@ const MOVES: Record<OrderStage, readonly OrderStage[]> = {
 };
 
 export function canMove(from: OrderStage, to: OrderStage, serviceType: ServiceType): boolean {
+  // Send-in parts are checked in before work starts; kits and springs have nothing to check in.
   if (from === "awaiting_parts" && to === "in_work" && serviceType === "send-in") return false;
+  if (to === "received" && serviceType !== "send-in") return false;
   return MOVES[from].includes(to);
 }
 
