@@ -87,7 +87,52 @@ export function CheckInForm({ order }: { order: OrderView }) {
           Record check-in
         </Button>
       </form>
+      <CheckInPhotos order={order} />
     </section>
+  );
+}
+
+function CheckInPhotos({ order }: { order: OrderView }) {
+  const { busy, problem, fields, done, send } = useOrderAction();
+  const photos = order.workshop?.photos ?? [];
+  async function upload(event: FormEvent<HTMLFormElement>) {
+    event.preventDefault();
+    const form = new FormData(event.currentTarget);
+    if (await send(`/api/orders/${order.id}/photos`, "POST", form, "Photos added.")) event.currentTarget?.reset();
+  }
+  return (
+    <div className="flex flex-col gap-2">
+      {photos.length ? (
+        <ul className="grid grid-cols-3 gap-2">
+          {photos.map((p, i) => (
+            <li key={p.id}>
+              <a
+                href={`/api/orders/${order.id}/photos?photo=${p.id}`}
+                className="block rounded border border-stone-200 p-1"
+              >
+                {/* Served by our own guarded route; next/image would cache it outside the guard. */}
+                {/* eslint-disable-next-line @next/next/no-img-element */}
+                <img
+                  src={`/api/orders/${order.id}/photos?photo=${p.id}`}
+                  alt={`Check-in photo ${i + 1}: ${p.name}`}
+                  className="aspect-square w-full rounded object-cover"
+                />
+              </a>
+            </li>
+          ))}
+        </ul>
+      ) : null}
+      <form onSubmit={upload} className="flex flex-col gap-2" noValidate aria-label="Check-in photos">
+        <label htmlFor="checkin-photos" className="text-sm font-medium">
+          Photos of the parts as received (JPEG, PNG or WebP, up to 10 MB each)
+        </label>
+        <input id="checkin-photos" name="photos" type="file" accept="image/jpeg,image/png,image/webp" multiple />
+        <Outcome problem={fields.photos ?? problem} done={done} />
+        <Button type="submit" variant="secondary" disabled={busy}>
+          Add photos
+        </Button>
+      </form>
+    </div>
   );
 }
 

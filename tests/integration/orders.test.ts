@@ -20,6 +20,8 @@ import { GET as buildSheetPdf } from "@/app/api/orders/[id]/build-sheet/route";
 import { PUT as putBuildNotes } from "@/app/api/shop/catalog/[id]/build-notes/route";
 import { PUT as putOrderSettings } from "@/app/api/shop/orders-settings/route";
 import { pdfText } from "../helpers/pdf";
+import { GET as getPhoto, POST as postPhotos } from "@/app/api/orders/[id]/photos/route";
+import { tinyPng } from "../fixtures/images";
 import { getDb } from "@/db/client";
 import { listAuditForRequest } from "@/db/queries/audit";
 import { findLatestShippedOrderForRequest, saveOrderSettings } from "@/db/queries/orders";
@@ -443,5 +445,45 @@ describe("build sheet and settings", () => {
       paymentMode: "Choose full payment or a deposit",
       depositPercent: "The deposit must be at least 1 %",
     });
+  });
+});
+
+describe("check-in photos", () => {
+  it("keeps a photo of the parts with the type sniffed from its bytes, and refuses a non-photo by name", async () => {
+    const id = stableUuid("order:o2"); // demo send-in order, checked in (db/seed-orders.ts)
+    const form = new FormData();
+    form.append("photos", new File([tinyPng() as BlobPart], "shock.png", { type: "image/png" }));
+    const sent = await postPhotos(
+      new Request(`${ORIGIN()}/api/orders/${id}/photos`, {
+        method: "POST",
+        body: form,
+        headers: { cookie: tuner, origin: ORIGIN(), ...fromClient() },
+      }),
+      { params: Promise.resolve({ id }) },
+    );
+    expect(sent.status, await sent.clone().text()).toBe(201);
+    const [photo] = ((await sent.json()) as { photos: { id: string }[] }).photos;
+    const read = await getPhoto(
+      new Request(`${ORIGIN()}/api/orders/${id}/photos?photo=${photo!.id}`, {
+        headers: { cookie: tuner, ...fromClient() },
+      }),
+      { params: Promise.resolve({ id }) },
+    );
+    expect(read.headers.get("content-type")).toBe("image/png");
+    expect(Buffer.from(await read.arrayBuffer())).toEqual(Buffer.from(tinyPng()));
+
+    const bad = new FormData();
+    bad.append("photos", new File(["not a picture"], "notes.txt", { type: "image/png" }));
+    const refused = await postPhotos(
+      new Request(`${ORIGIN()}/api/orders/${id}/photos`, {
+        method: "POST",
+        body: bad,
+        headers: { cookie: tuner, origin: ORIGIN(), ...fromClient() },
+      }),
+      { params: Promise.resolve({ id }) },
+    );
+    expect(refused.status).toBe(400);
+    const body = (await refused.json()) as { fields: Record<string, string> };
+    expect(Object.values(body.fields)[0]).toContain("notes.txt");
   });
 });

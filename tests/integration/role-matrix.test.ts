@@ -55,6 +55,8 @@ const EXPECTED: Record<string, Row> = {
   "GET /api/requests/[id]/order": staffOrRider,
   "POST /api/requests/[id]/order": staffOrRider,
   "GET /api/orders/[id]/build-sheet": staff,
+  "GET /api/orders/[id]/photos": staff,
+  "POST /api/orders/[id]/photos": staff,
   "PUT /api/shop/catalog/[id]/build-notes": staff,
   "GET /api/shop/orders-settings": adminOnly,
   "PUT /api/shop/orders-settings": adminOnly,
