@@ -19,6 +19,9 @@ import { GET as listOrders, POST as createOrder } from "@/app/api/requests/[id]/
 import { GET as buildSheetPdf } from "@/app/api/orders/[id]/build-sheet/route";
 import { PUT as putBuildNotes } from "@/app/api/shop/catalog/[id]/build-notes/route";
 import { PUT as putOrderSettings } from "@/app/api/shop/orders-settings/route";
+import { PUT as putPriceList } from "@/app/api/shop/price-list/route";
+import { POST as addFinisher } from "@/app/api/shop/finishers/route";
+import { auditEvents } from "@/db/schema";
 import { pdfText } from "../helpers/pdf";
 import { GET as getPhoto, POST as postPhotos } from "@/app/api/orders/[id]/photos/route";
 import { tinyPng } from "../fixtures/images";
@@ -485,5 +488,36 @@ describe("check-in photos", () => {
     expect(refused.status).toBe(400);
     const body = (await refused.json()) as { fields: Record<string, string> };
     expect(Object.values(body.fields)[0]).toContain("notes.txt");
+  });
+});
+
+describe("the admin's price list and finishers", () => {
+  it("changes a price and adds a finisher, both in the audit log; a tuner may not", async () => {
+    const owner = cookieFrom(await signInStaff("owner@sagwise.test", getEnv().DEMO_PASSWORD));
+    const item = { code: "seal-kit-fork", label: "Fork seal and bushing kit", kind: "part", unitPriceMinor: 5100 };
+    expect((await call(putPriceList, "PUT", "", { items: [item] }, { cookie: tuner })).status).toBe(403);
+    const saved = await call(putPriceList, "PUT", "", { items: [item] }, { cookie: owner });
+    expect(saved.status, JSON.stringify(saved.body)).toBe(200);
+    const added = await call(
+      addFinisher,
+      "POST",
+      "",
+      { name: "Test Anodisers", work: "Anodising", turnaroundDays: 0 },
+      { cookie: owner },
+    );
+    expect(added.status).toBe(400);
+    expect(added.body.fields).toEqual({ turnaroundDays: "The turnaround must be at least 1 day" });
+    const ok = await call(
+      addFinisher,
+      "POST",
+      "",
+      { name: "Test Anodisers", work: "Anodising", turnaroundDays: 6 },
+      { cookie: owner },
+    );
+    expect(ok.status).toBe(201);
+    const db = await getDb();
+    const actions = (await db.select({ action: auditEvents.action }).from(auditEvents)).map((a) => a.action);
+    expect(actions).toContain("settings.price_list_changed");
+    expect(actions).toContain("settings.finisher_added");
   });
 });

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { OrderSettingsLink } from "@/components/order-settings/order-settings-link";
 import { SettingsForm } from "@/components/settings/settings-form";
 import { getShopSettings } from "@/db/queries/settings";
 import { requireRole } from "@/lib/auth/guard";
@@ -13,6 +14,7 @@ export default async function SettingsPage() {
   return (
     <div className="flex flex-col gap-4">
       <h1 className="text-2xl font-bold">Shop settings</h1>
+      <OrderSettingsLink />
       <SettingsForm
         initial={{
           name: s?.name ?? "",
