@@ -7,3 +7,4 @@ export * from "./tables/notices";
 export * from "./tables/email-wording";
 export * from "./tables/ride-feedback";
 export * from "./tables/service";
+export * from "./tables/orders";

@@ -309,6 +309,7 @@ export async function seedDemo(): Promise<string> {
   }
   await seedNotices(db);
   await seedService();
+  await (await import("./seed-orders")).seedOrders(db);
   const [users] = await db.select({ n: count() }).from(user);
   const links = added.length ? `\n  status links:\n  ${added.join("\n  ")}` : "";
   return `${bikes.size} bike classes, ${Number(users?.n ?? 0)} users, ${added.length} new requests${links}`;

@@ -1,6 +1,8 @@
 // Every e-mail template by name, with its subject line and demo props, for sending (lib/mail's
 // sendTemplateEmail) and for the staff preview page.
 import type { ReactElement } from "react";
+import * as orderStage from "./order-stage";
+import * as paymentReceived from "./payment-received";
 import * as requestDeclined from "./request-declined";
 import * as requestReceived from "./request-received";
 import * as serviceReminder from "./service-reminder";
@@ -67,6 +69,18 @@ export const emailTemplates = {
     demoProps: serviceReminder.demoProps,
     description: "Service due soon (or overdue), with a link to book it",
   } satisfies EmailTemplate<serviceReminder.ServiceReminderEmailProps>,
+  "order-stage": {
+    Component: orderStage.OrderStageEmail,
+    subject: orderStage.subject,
+    demoProps: orderStage.demoProps,
+    description: "An order reached a stage the shop tells riders about",
+  } satisfies EmailTemplate<orderStage.OrderStageEmailProps>,
+  "payment-received": {
+    Component: paymentReceived.PaymentReceivedEmail,
+    subject: paymentReceived.subject,
+    demoProps: paymentReceived.demoProps,
+    description: "Payment for an order received",
+  } satisfies EmailTemplate<paymentReceived.PaymentReceivedEmailProps>,
 } as const;
 
 export type EmailTemplateName = keyof typeof emailTemplates;

@@ -21,6 +21,12 @@ const envSchema = z.object({
   S3_REGION: z.string().min(1).default("us-east-1"),
   S3_ACCESS_KEY_ID: z.string().min(1).optional(),
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  // Payments: the hosted payment service's SDK (lib/payments), pointed at the local fake unless
+  // PAYMENT_API_URL says otherwise (README, configuration).
+  PAYMENT_SECRET_KEY: z.string().min(1).default("sk_test_sagwise_local_fake"),
+  PAYMENT_WEBHOOK_SECRET: z.string().min(1).default("whsec_sagwise_local_fake"),
+  PAYMENT_API_URL: z.string().url().optional(),
+  PAYMENT_FAKE_PORT: z.coerce.number().int().positive().default(4026),
   S3_FORCE_PATH_STYLE: z
     .enum(["true", "false", "1", "0"])
     .transform((v) => v === "true" || v === "1")
@@ -53,6 +59,12 @@ export function appBaseUrl(): string {
 export function mailBaseUrl(): string {
   const env = getEnv();
   return env.RESEND_BASE_URL ?? `http://127.0.0.1:${env.MAIL_FAKE_PORT}`;
+}
+
+/** Where the payment SDK sends its calls: the local payments fake unless configured otherwise. */
+export function paymentApiUrl(): URL {
+  const env = getEnv();
+  return new URL(env.PAYMENT_API_URL ?? `http://127.0.0.1:${env.PAYMENT_FAKE_PORT}`);
 }
 
 /** Tests reset the cache after changing process.env. */

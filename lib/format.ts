@@ -31,3 +31,16 @@ export function formatNumber(value: number, digits: number): string {
   // Intl writes "-0.0" for a tiny negative; a figure never shows a signed zero.
   return format.format(value).replace(/^-(0(\.0+)?)$/, "$1");
 }
+
+const moneyFormats = new Map<string, Intl.NumberFormat>();
+
+/** "€1,234.50" from integer minor units (1234 50 cents) of an ISO 4217 currency. */
+export function formatMoney(minor: number, currency: string): string {
+  let format = moneyFormats.get(currency);
+  if (!format) {
+    format = new Intl.NumberFormat("en-GB", { style: "currency", currency });
+    moneyFormats.set(currency, format);
+  }
+  const digits = format.resolvedOptions().maximumFractionDigits ?? 2;
+  return format.format(minor / 10 ** digits);
+}

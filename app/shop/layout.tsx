@@ -21,6 +21,7 @@ function noticeSummary(unseen: Record<string, number>): string {
 // Link only pages that exist; `roles` lists who sees the link (the pages guard themselves too).
 const SHOP_NAV: (NavItem & { roles: readonly Role[] })[] = [
   { href: "/shop", label: "Queue", roles: STAFF_ROLES },
+  { href: "/shop/workshop", label: "Workshop", roles: STAFF_ROLES },
   { href: "/shop/catalog", label: "Catalog", roles: STAFF_ROLES },
   { href: "/shop/stock", label: "Stock", roles: STAFF_ROLES },
   { href: "/shop/emails", label: "E-mails", roles: STAFF_ROLES },

@@ -1,5 +1,6 @@
 // The rider's private view of one request: where it stands and what happens next, the shop's
 // question, the approved sheets, the sag follow-up, the photos and the answers as given.
+import { RiderOrders } from "@/components/orders/rider-orders";
 import { SagGuide } from "@/components/sag-guide/sag-guide";
 import { StatusBadge } from "@/components/ui/status-badge";
 import type { RiderStatus } from "@/db/queries/status";
@@ -106,6 +107,7 @@ export function StatusView({
         </section>
       ) : null}
 
+      <RiderOrders requestId={request.id} token={token} canOrder={request.status === "approved"} />
       {request.status === "approved" ? (
         <section className={box} aria-labelledby="sag-heading">
           <h2 id="sag-heading" className="text-lg font-semibold">

@@ -60,6 +60,8 @@ export const bikeModels = pgTable(
     // the shop names it, and the volume in each leg (ml). Not engine data.
     forkOilType: text("fork_oil_type"),
     forkOilVolumeMl: doublePrecision("fork_oil_volume_ml"),
+    // The workshop's own build notes for this model (printed on an order's build sheet).
+    buildNotes: text("build_notes"),
     retiredAt: timestamp("retired_at", { withTimezone: true }),
     createdAt: timestamp("created_at", { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),

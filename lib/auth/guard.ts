@@ -21,7 +21,15 @@ export class AuthError extends Error {
 }
 
 async function requestHeaders(given?: Headers): Promise<Headers> {
-  return given ?? new Headers(await nextHeaders());
+  const headers = given ?? new Headers(await nextHeaders());
+  if (!headers.get("content-type")?.startsWith("multipart/")) return headers;
+  // better-auth's getSession finds no session for a multipart request's headers (it looks at the
+  // content type); the session needs only the cookie, so staff uploads are recognised too.
+  const copy = new Headers();
+  headers.forEach((value, name) => {
+    if (name !== "content-type") copy.set(name, value);
+  });
+  return copy;
 }
 
 /** The signed-in user, or null. Banned (deactivated) users have no session. */

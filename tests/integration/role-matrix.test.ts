@@ -32,6 +32,8 @@ const adminOnly: Row = { anonymous: 401, riderA: 403, riderB: 403, tuner: 403, a
 // The status page's writes without a token: the rider's own session only; anyone else's session
 // (staff included) does not find the request.
 const ridersOwn: Row = { anonymous: 401, riderA: "ok", riderB: 404, tuner: 404, admin: 404 };
+// Orders: staff see every one; a rider only the orders of their own requests (404 for another's).
+const staffOrRider: Row = { anonymous: 401, riderA: "ok", riderB: 404, tuner: "ok", admin: "ok" };
 
 const EXPECTED: Record<string, Row> = {
   // better-auth's own: probed on its admin plugin (GET list-users, POST set-role), the endpoints
@@ -53,6 +55,28 @@ const EXPECTED: Record<string, Row> = {
   "POST /api/requests/[id]/seen": staff,
   "POST /api/requests/[id]/start": staff,
   "GET /api/requests/[id]/sheet": { anonymous: 401, riderA: "ok", riderB: 403, tuner: "ok", admin: "ok" },
+  "GET /api/requests/[id]/order": staffOrRider,
+  "POST /api/requests/[id]/order": staffOrRider,
+  "GET /api/orders/[id]/build-sheet": staff,
+  "GET /api/orders/[id]/photos": staff,
+  "POST /api/orders/[id]/photos": staff,
+  "PUT /api/shop/catalog/[id]/build-notes": staff,
+  "GET /api/shop/orders-settings": adminOnly,
+  "PUT /api/shop/orders-settings": adminOnly,
+  "PUT /api/shop/price-list": adminOnly,
+  "POST /api/shop/finishers": adminOnly,
+  "PATCH /api/shop/finishers/[id]": adminOnly,
+  "GET /api/orders/[id]": staffOrRider,
+  "PATCH /api/orders/[id]": staff,
+  "PUT /api/orders/[id]/lines": staff,
+  "POST /api/orders/[id]/accept": staffOrRider,
+  "POST /api/orders/[id]/checkout": staffOrRider,
+  "POST /api/orders/[id]/refund": staff,
+  "POST /api/orders/[id]/check-in": staff,
+  "POST /api/orders/[id]/finishers": staff,
+  "POST /api/orders/[id]/finisher-back": staff,
+  // The payment service's webhook: no session, admitted by its signature (the probe has none: 400).
+  "POST /api/payments/webhook": everyone,
   "GET /api/shop/catalog": staff,
   "POST /api/shop/catalog": staff,
   "GET /api/shop/catalog/[id]": staff,
@@ -131,6 +155,8 @@ beforeAll(async () => {
   const db = await getDb();
   ids.request = stableUuid("request:r09");
   ids.bike = stableUuid("bike:mx-450-4t");
+  ids.order = stableUuid("order:o3"); // a demo order on r09 (db/seed-orders.ts)
+  ids.finisher = stableUuid("finisher:polish");
   const [stock] = await db.select({ id: springStock.id }).from(springStock).limit(1);
   const [tuner2] = await db.select({ id: user.id }).from(user).where(eq(user.email, "tuner2@sagwise.test"));
   ids.stock = stock!.id;
@@ -179,6 +205,7 @@ beforeAll(async () => {
 // nothing about the data), the probe sends a well-formed body or query so the guard decides.
 const PROBE_BODY: Record<string, () => unknown> = {
   "POST /api/auth/[...all]": () => ({ userId: ids.member, role: "tuner" }),
+  "POST /api/requests/[id]/order": () => ({ serviceType: "kit" }),
   "POST /api/status/[id]/answer": () => ({ body: "The bike is stock apart from the bars." }),
   "POST /api/status/[id]/hours": () => ({ hours: "1,5", date: new Date().toISOString().slice(0, 10) }),
   "POST /api/status/[id]/sag": () => ({ unit: "mm", front: { static: 30, race: 70 }, rear: { static: 35, race: 105 } }),
@@ -205,7 +232,11 @@ function target(route: string, method: string): { url: string; params: Record<st
               ? ids.member
               : route.startsWith("/api/uploads/")
                 ? ids.upload
-                : undefined;
+                : route.startsWith("/api/orders/")
+                  ? ids.order
+                  : route.startsWith("/api/shop/finishers/")
+                    ? ids.finisher
+                    : undefined;
   return { url: route.replace("[id]", id ?? "") + (PROBE_QUERY[`${method} ${route}`] ?? ""), params: id ? { id } : {} };
 }
 

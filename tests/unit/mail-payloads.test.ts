@@ -21,6 +21,9 @@ import { appBaseUrl, mailBaseUrl } from "@/lib/env";
 import { configureOutbox, drainOutbox, queueTemplateEmail, resetOutboxPolicy } from "@/lib/mail";
 import { notifyRider } from "@/lib/notify";
 import { notifyStaff } from "@/lib/notify-staff";
+import { findOrder } from "@/db/queries/orders";
+import { notifyOrderStage, notifyPaymentReceived } from "@/lib/orders/notify";
+import { RIDER_STAGE_WORDS } from "@/lib/orders/stages";
 import { renderSetupSheet } from "@/lib/pdf";
 import { queueDueReminders } from "@/lib/service/reminders";
 import { demoSheetData } from "@/lib/pdf/demo-data";
@@ -207,6 +210,31 @@ describe("notices to the shop through notifyStaff", () => {
     const mail = lastPayload("staff-notice", "tuner@sagwise.test");
     expect(mail.subject).toBe("The rider answered your question: request 9 (Dario Lindqvist)");
     expect(linkIn(mail, `/shop/requests/${r09}`)).toBe(`${appBaseUrl()}/shop/requests/${r09}`);
+  });
+});
+
+describe("order e-mails (lib/orders/notify.ts)", () => {
+  it("order-stage: the stage in the rider's words, the tracking once shipped, and the status link", async () => {
+    listen();
+    const order = (await findOrder(stableUuid("order:o6")))!; // shipped demo order on r09 (db/seed-orders.ts)
+    await notifyOrderStage(await getDb(), order, "shipped", { userId: null, label: "system" });
+    await drainOutbox({ settle: true });
+    const mail = lastPayload("order-stage", RIDER);
+    expect(mail.subject).toBe(`Order ${order.number}: ${RIDER_STAGE_WORDS.shipped}`);
+    expect(mail.text).toContain(`${order.carrier}, tracking ${order.trackingNumber}`);
+    await opensRequest(linkIn(mail, "/status/"));
+  });
+
+  it("payment-received: the amount in the order's currency and what is left to pay", async () => {
+    listen();
+    const order = (await findOrder(stableUuid("order:o6")))!;
+    await notifyPaymentReceived(await getDb(), order, 12345, 500, { userId: null, label: "payment service" });
+    await drainOutbox({ settle: true });
+    const mail = lastPayload("payment-received", RIDER);
+    expect(mail.subject).toBe(`Payment received for order ${order.number}`);
+    expect(mail.text).toContain("€123.45");
+    expect(mail.text).toContain("Still to pay before we ship: €5.00");
+    await opensRequest(linkIn(mail, "/status/"));
   });
 });
 

@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { OrderSettingsLink } from "@/components/order-settings/order-settings-link";
 import { SettingsForm } from "@/components/settings/settings-form";
 import { getShopSettings } from "@/db/queries/settings";
 import { requireRole } from "@/lib/auth/guard";
@@ -17,6 +18,7 @@ export default async function SettingsPage() {
       <Link href="/shop/settings/service" className="inline-flex min-h-11 w-fit items-center text-pine-700 underline">
         Service intervals and reminders
       </Link>
+      <OrderSettingsLink />
       <SettingsForm
         initial={{
           name: s?.name ?? "",

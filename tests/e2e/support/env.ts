@@ -4,7 +4,11 @@
 /** Only for the throwaway server of a browser-test run. */
 export const E2E_AUTH_SECRET = "e2e-secret-e2e-secret-e2e-secret-0123456789";
 
-export const E2E_ENV = { baseUrl: "SAGWISE_E2E_BASE_URL", mailUrl: "SAGWISE_E2E_MAIL_URL" } as const;
+export const E2E_ENV = {
+  baseUrl: "SAGWISE_E2E_BASE_URL",
+  mailUrl: "SAGWISE_E2E_MAIL_URL",
+  paymentsUrl: "SAGWISE_E2E_PAYMENTS_URL",
+} as const;
 
 export const DEMO_PASSWORD = process.env.DEMO_PASSWORD ?? "sagwise-demo";
 

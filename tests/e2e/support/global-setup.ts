@@ -52,9 +52,10 @@ export default async function globalSetup() {
     throw new Error("No production build: run `npm run build` before `npm run test:e2e`.");
   }
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-e2e-"));
-  const [appPort, mailPort] = await Promise.all([freePort(), freePort()]);
+  const [appPort, mailPort, paymentsPort] = await Promise.all([freePort(), freePort(), freePort()]);
   const baseUrl = `http://localhost:${appPort}`;
   const mailUrl = `http://127.0.0.1:${mailPort}`;
+  const paymentsUrl = `http://127.0.0.1:${paymentsPort}`;
   const env: NodeJS.ProcessEnv = {
     ...process.env,
     NODE_ENV: "production",
@@ -65,6 +66,9 @@ export default async function globalSetup() {
     RESEND_BASE_URL: mailUrl,
     MAIL_FAKE_PORT: String(mailPort),
     MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
+    PAYMENT_FAKE_PORT: String(paymentsPort),
+    PAYMENT_API_URL: paymentsUrl,
+    PAYMENT_WEBHOOK_URL: `${baseUrl}/api/payments/webhook`,
     // The browser tests run on the embedded database even when the shell points at PostgreSQL.
     DATABASE_URL: "",
     // The browser tests send X-Forwarded-For as one proxy in front would (tests/e2e/support/fixtures.ts).
@@ -78,9 +82,11 @@ export default async function globalSetup() {
     if (process.env.E2E_VERBOSE) process.stdout.write(`[${name}] ${chunk}`);
   };
   const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true });
+  const payments = spawn("npx", ["tsx", "fakes/payments/server.ts"], { env, detached: true });
   const app = spawn("npx", ["next", "start", "-p", String(appPort)], { env, detached: true });
   for (const [name, child] of [
     ["mail", mail],
+    ["payments", payments],
     ["app", app],
   ] as const) {
     child.stdout?.on("data", output(name));
@@ -89,10 +95,12 @@ export default async function globalSetup() {
   const teardown = () => {
     stop(app);
     stop(mail);
+    stop(payments);
     rmSync(dataDir, { recursive: true, force: true });
   };
   try {
     await waitFor(`${mailUrl}/emails`, mail, "mail fake");
+    await waitFor(`${paymentsUrl}/payments`, payments, "payments fake");
     await waitFor(`${baseUrl}/api/health`, app, "next start");
   } catch (error) {
     teardown();
@@ -101,5 +109,6 @@ export default async function globalSetup() {
 
   process.env[E2E_ENV.baseUrl] = baseUrl;
   process.env[E2E_ENV.mailUrl] = mailUrl;
+  process.env[E2E_ENV.paymentsUrl] = paymentsUrl;
   return teardown;
 }
