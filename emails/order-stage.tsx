@@ -32,11 +32,9 @@ export function OrderStageEmail(props: OrderStageEmailProps) {
       riderName={props.riderName}
       preview={`Order ${props.orderNumber}: ${props.stageWords}`}
       heading={props.stageWords}
+      intro={`Your order ${props.orderNumber} has moved on: ${props.stageWords.toLowerCase()}.`}
       action={{ label: "Follow your order", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>
-        Your order {props.orderNumber} has moved on: {props.stageWords.toLowerCase()}.
-      </Text>
       {props.tracking ? <Text style={s.paragraph}>Shipment: {props.tracking}</Text> : null}
       <Text style={s.paragraph}>The status page shows every step so far.</Text>
     </RiderEmail>

@@ -32,11 +32,9 @@ export function PaymentReceivedEmail(props: PaymentReceivedEmailProps) {
       riderName={props.riderName}
       preview={`We received ${props.amount} for order ${props.orderNumber}.`}
       heading="Payment received"
+      intro={`Thank you: we received ${props.amount} for order ${props.orderNumber}.`}
       action={{ label: "See your order", url: props.statusUrl }}
     >
-      <Text style={s.paragraph}>
-        Thank you: we received {props.amount} for order {props.orderNumber}.
-      </Text>
       <Text style={s.paragraph}>
         {props.remaining ? `Still to pay before we ship: ${props.remaining}.` : "The order is paid in full."}
       </Text>

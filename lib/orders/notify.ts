@@ -9,6 +9,7 @@ import { setupRequests } from "@/db/schema";
 import { appBaseUrl } from "@/lib/env";
 import { formatMoney } from "@/lib/format";
 import { queueTemplateEmail } from "@/lib/mail";
+import { notifyStaff } from "@/lib/notify-staff";
 import { statusPath } from "@/lib/requests/token";
 import { RIDER_STAGE_WORDS, type OrderStage } from "./stages";
 
@@ -65,6 +66,14 @@ export async function notifyPaymentReceived(
   actor: OrderActor,
 ) {
   const { rider, props } = await common(tx, order);
+  // The shop hears of it too: the assigned tuner, or the shop's address (lib/notify-staff.ts).
+  await notifyStaff(tx, {
+    kind: "payment-received",
+    requestId: order.requestId,
+    summary: `${formatMoney(amountMinor, order.currency)} paid for order ${order.number}`,
+    amountMinor,
+    currency: order.currency,
+  });
   return queueTemplateEmail(
     tx,
     "payment-received",

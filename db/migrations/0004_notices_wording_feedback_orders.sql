@@ -30,39 +30,6 @@ CREATE TABLE "ride_feedback" (
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL
 );
 --> statement-breakpoint
-CREATE TABLE "service_hour_logs" (
-	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
-	"request_id" uuid NOT NULL,
-	"hours" double precision NOT NULL,
-	"ridden_on" date NOT NULL,
-	"created_at" timestamp with time zone DEFAULT now() NOT NULL
-);
---> statement-breakpoint
-CREATE TABLE "service_intervals" (
-	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
-	"item" text NOT NULL,
-	"discipline" text NOT NULL,
-	"hours" double precision NOT NULL,
-	"months" integer,
-	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
-);
---> statement-breakpoint
-CREATE TABLE "service_reminders" (
-	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
-	"request_id" uuid NOT NULL,
-	"item" text NOT NULL,
-	"due_on" date NOT NULL,
-	"outbound_email_id" uuid,
-	"created_at" timestamp with time zone DEFAULT now() NOT NULL
-);
---> statement-breakpoint
-CREATE TABLE "service_settings" (
-	"id" smallint PRIMARY KEY DEFAULT 1 NOT NULL,
-	"notice_days" integer DEFAULT 14 NOT NULL,
-	"time_zone" text DEFAULT 'UTC' NOT NULL,
-	"updated_at" timestamp with time zone DEFAULT now() NOT NULL
-);
---> statement-breakpoint
 CREATE TABLE "finisher_jobs" (
 	"id" uuid PRIMARY KEY DEFAULT gen_random_uuid() NOT NULL,
 	"order_id" uuid NOT NULL,
@@ -194,9 +161,6 @@ ALTER TABLE "staff_notices" ADD CONSTRAINT "staff_notices_request_id_setup_reque
 ALTER TABLE "staff_notices" ADD CONSTRAINT "staff_notices_seen_by_user_id_fk" FOREIGN KEY ("seen_by") REFERENCES "public"."user"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "ride_feedback" ADD CONSTRAINT "ride_feedback_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "ride_feedback" ADD CONSTRAINT "ride_feedback_version_id_recommendation_versions_id_fk" FOREIGN KEY ("version_id") REFERENCES "public"."recommendation_versions"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "service_hour_logs" ADD CONSTRAINT "service_hour_logs_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "service_reminders" ADD CONSTRAINT "service_reminders_request_id_setup_requests_id_fk" FOREIGN KEY ("request_id") REFERENCES "public"."setup_requests"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
-ALTER TABLE "service_reminders" ADD CONSTRAINT "service_reminders_outbound_email_id_outbound_emails_id_fk" FOREIGN KEY ("outbound_email_id") REFERENCES "public"."outbound_emails"("id") ON DELETE set null ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "finisher_jobs" ADD CONSTRAINT "finisher_jobs_order_id_orders_id_fk" FOREIGN KEY ("order_id") REFERENCES "public"."orders"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "finisher_jobs" ADD CONSTRAINT "finisher_jobs_finisher_id_finishers_id_fk" FOREIGN KEY ("finisher_id") REFERENCES "public"."finishers"("id") ON DELETE restrict ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "order_events" ADD CONSTRAINT "order_events_order_id_orders_id_fk" FOREIGN KEY ("order_id") REFERENCES "public"."orders"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
@@ -210,9 +174,6 @@ ALTER TABLE "payments" ADD CONSTRAINT "payments_order_id_orders_id_fk" FOREIGN K
 CREATE INDEX "staff_notices_unseen_idx" ON "staff_notices" USING btree ("seen_at","kind");--> statement-breakpoint
 CREATE INDEX "staff_notices_request_idx" ON "staff_notices" USING btree ("request_id");--> statement-breakpoint
 CREATE INDEX "ride_feedback_request_idx" ON "ride_feedback" USING btree ("request_id","created_at");--> statement-breakpoint
-CREATE INDEX "service_hour_logs_request_idx" ON "service_hour_logs" USING btree ("request_id","ridden_on");--> statement-breakpoint
-CREATE UNIQUE INDEX "service_intervals_item_discipline_idx" ON "service_intervals" USING btree ("item","discipline");--> statement-breakpoint
-CREATE UNIQUE INDEX "service_reminders_once_idx" ON "service_reminders" USING btree ("request_id","item","due_on");--> statement-breakpoint
 CREATE INDEX "finisher_jobs_order_idx" ON "finisher_jobs" USING btree ("order_id");--> statement-breakpoint
 CREATE INDEX "finisher_jobs_due_idx" ON "finisher_jobs" USING btree ("back_on","due_on");--> statement-breakpoint
 CREATE INDEX "order_events_order_idx" ON "order_events" USING btree ("order_id","created_at");--> statement-breakpoint
