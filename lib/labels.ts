@@ -141,6 +141,9 @@ export const EMAIL_TEMPLATE_LABELS: Record<string, string> = {
   "request-declined": "decline notice",
   "sheet-ready": "setup sheet",
   "staff-notice": "notice to the shop",
+  "service-reminder": "service reminder",
+  "order-stage": "order news",
+  "payment-received": "payment receipt",
 };
 
 export const STAFF_NOTICE_LABELS: Record<string, string> = {

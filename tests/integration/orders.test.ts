@@ -202,7 +202,7 @@ describe("quote, payment and webhook", () => {
     expect(order.paymentStatus).toBe("paid");
     expect(order.paidMinor).toBe(32280);
     await drainOutbox();
-    const mails = app.sent.slice(before).filter((m) => m.subject.startsWith("Payment received"));
+    const mails = app.sent.slice(before).filter((m) => m.subject.startsWith("Payment received for order"));
     expect(mails).toHaveLength(1);
     expect(mails[0]!.text).toContain("€322.80");
     const audit = await listAuditForRequest(requestId("r10"));
