@@ -388,29 +388,6 @@ export async function listStaffForBoard() {
     .orderBy(asc(user.name));
 }
 
-/** The newest approved version of an approved request (what an order is made from). */
-export async function findApprovedVersionForOrder(requestId: string, executor?: Executor) {
-  const db = await exec(executor);
-  const [row] = await db
-    .select({
-      id: recommendationVersions.id,
-      version: recommendationVersions.version,
-      output: recommendationVersions.output,
-    })
-    .from(recommendationVersions)
-    .innerJoin(setupRequests, eq(setupRequests.id, recommendationVersions.requestId))
-    .where(
-      and(
-        eq(recommendationVersions.requestId, requestId),
-        eq(recommendationVersions.state, "approved"),
-        eq(setupRequests.status, "approved"),
-      ),
-    )
-    .orderBy(desc(recommendationVersions.version))
-    .limit(1);
-  return row ?? null;
-}
-
 /** What the build sheet prints beside the order: the request, its bike model's build notes, the version's figures. */
 export async function findBuildSheetContext(orderId: string) {
   const db = await getDb();

@@ -1,7 +1,7 @@
 // The rider's side of a request: who may open it (status token or the signed-in rider's e-mail,
 // checked in the query), what the status page shows, and what the rider may send back.
 import { and, asc, desc, eq, inArray, isNotNull } from "drizzle-orm";
-import { getDb, type Tx } from "@/db/client";
+import { getDb, type Executor, type Tx } from "@/db/client";
 import {
   auditEvents,
   recommendationVersions,
@@ -135,9 +135,12 @@ export async function recordRiderAnswer(requestId: string, body: string, also?: 
   });
 }
 
-/** The approved version the sag follow-up is judged against (the newest approved one). */
-export async function findApprovedVersion(requestId: string) {
-  const db = await getDb();
+/**
+ * The newest approved version of an approved request: what the sag follow-up is judged against and
+ * what an order is made from (in the caller's transaction when given one).
+ */
+export async function findApprovedVersion(requestId: string, executor?: Executor) {
+  const db = executor ?? (await getDb());
   const [row] = await db
     .select({
       id: recommendationVersions.id,

@@ -5,7 +5,6 @@
 import { recordAudit, type AuditInsert } from "@/db/queries/audit";
 import {
   countOpenFinisherJobs,
-  findApprovedVersionForOrder,
   findFinisher,
   findPriceItemsByCode,
   findPriceItemsByIds,
@@ -22,6 +21,7 @@ import {
   type OrderLineInsert,
   type OrderRow,
 } from "@/db/queries/orders";
+import { findApprovedVersion } from "@/db/queries/status";
 import { inTransaction, type Tx } from "@/db/queries/transaction";
 import { ConflictError, NotFoundError, ValidationError } from "@/lib/errors";
 import { isoDay } from "@/lib/format";
@@ -54,7 +54,7 @@ export const PRICE_CODES = {
 } as const;
 
 export async function sheetLines(requestId: string, serviceType: ServiceType, tx: Tx) {
-  const approved = await findApprovedVersionForOrder(requestId, tx);
+  const approved = await findApprovedVersion(requestId, tx);
   if (!approved) throw new ConflictError("An order can be made once the setup sheet is approved.");
   const out = approved.output;
   const items = await findPriceItemsByCode(
