@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -43,7 +45,7 @@ export function RiderLinkForm() {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Rider sign-in">
+    <Form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Rider sign-in">
       <Field
         id="rider-email"
         label="E-mail you used for your request"
@@ -57,6 +59,6 @@ export function RiderLinkForm() {
       <Button type="submit" variant="secondary" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Sending…" : "E-mail me a sign-in link"}
       </Button>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -39,7 +41,7 @@ export function StaffSignInForm({ next }: { next: string }) {
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Staff sign-in">
+    <Form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Staff sign-in">
       <Field
         id="staff-email"
         label="E-mail"
@@ -61,6 +63,6 @@ export function StaffSignInForm({ next }: { next: string }) {
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Signing in…" : "Sign in"}
       </Button>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Create or edit a catalog model: react-hook-form checked with the same bikeModelSchema the server uses.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
@@ -116,7 +118,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
   );
 
   return (
-    <form onSubmit={save} noValidate aria-label="Bike model" className="flex flex-col gap-5">
+    <Form onSubmit={save} noValidate aria-label="Bike model" className="flex flex-col gap-5">
       <section className={section} aria-labelledby="bike-identity">
         <h2 id="bike-identity" className="font-semibold">
           Model
@@ -268,6 +270,6 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
           {formState.isSubmitting ? "Saving…" : id ? "Save changes" : "Add bike"}
         </Button>
       </div>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Upload a catalog CSV; shows what was saved and, per refused row, each field and why.
 import { useRouter } from "next/navigation";
 import { useState } from "react";
@@ -50,7 +52,7 @@ export function CsvImport() {
         >
           Download CSV
         </a>
-        <form
+        <Form
           onSubmit={(e) => {
             e.preventDefault();
             void upload(e.currentTarget);
@@ -64,7 +66,7 @@ export function CsvImport() {
           <Button type="submit" variant="secondary" disabled={busy}>
             {busy ? "Importing…" : "Import"}
           </Button>
-        </form>
+        </Form>
       </div>
       {error ? (
         <p role="alert" className="rounded-lg bg-red-50 p-3 text-sm text-red-800">

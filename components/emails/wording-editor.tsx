@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // One rider e-mail's wording: heading and opening paragraph in the shop's own words, previewed as
 // the e-mail would be sent (nothing saved until "Save"), and saved for every later e-mail.
 import { useState } from "react";
@@ -31,7 +33,7 @@ export function WordingEditor({ row }: { row: WordingRow }) {
   };
 
   return (
-    <form
+    <Form
       aria-labelledby={id("title")}
       className="flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4"
       onSubmit={async (e) => {
@@ -118,6 +120,6 @@ export function WordingEditor({ row }: { row: WordingRow }) {
           />
         </div>
       ) : null}
-    </form>
+    </Form>
   );
 }

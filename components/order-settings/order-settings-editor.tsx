@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The admin's order settings: payment and tax, the stages that e-mail the rider, packing
 // instructions for send-in orders, the price list (prices typed in the currency's major unit), and
 // the outside finishers. Each part saves on its own through the API.
@@ -99,7 +101,7 @@ function PaymentSettings({ settings }: { settings: Settings }) {
       <h2 id="payment-heading" className="text-lg font-semibold">
         Payment and tax
       </h2>
-      <form onSubmit={submit} className="flex flex-col gap-3" noValidate aria-label="Payment and tax">
+      <Form onSubmit={submit} className="flex flex-col gap-3" noValidate aria-label="Payment and tax">
         <Field
           id="currency"
           name="currency"
@@ -163,7 +165,7 @@ function PaymentSettings({ settings }: { settings: Settings }) {
         <Button type="submit" disabled={busy}>
           Save payment and tax
         </Button>
-      </form>
+      </Form>
     </section>
   );
 }
@@ -347,7 +349,7 @@ function Finishers({ finishers }: { finishers: Finisher[] }) {
           </li>
         ))}
       </ul>
-      <form onSubmit={add} className="flex flex-col gap-3" noValidate aria-label="Add a finisher">
+      <Form onSubmit={add} className="flex flex-col gap-3" noValidate aria-label="Add a finisher">
         <Field id="finisher-name" name="name" label="Name" error={fields.name} />
         <Field id="finisher-work" name="work" label="What they do" error={fields.work} />
         <Field
@@ -361,7 +363,7 @@ function Finishers({ finishers }: { finishers: Finisher[] }) {
         <Button type="submit" disabled={busy}>
           Add finisher
         </Button>
-      </form>
+      </Form>
     </section>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { DISCIPLINE_LABELS } from "@/lib/labels";
 import { useEffect, useState } from "react";
 import { DayInput } from "@/components/forms/day-input";
@@ -50,7 +52,7 @@ export function QueueFiltersForm({
   );
 
   return (
-    <form
+    <Form
       role="search"
       aria-label="Filter requests"
       className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4"
@@ -123,6 +125,6 @@ export function QueueFiltersForm({
           </Button>
         </div>
       ) : null}
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { Field } from "@/components/ui/field";
 import { RATE_UNITS } from "@/lib/sizing/vocab";
 import { bikeStepSchema } from "@/lib/validations/request";
@@ -71,7 +73,7 @@ export function BikeStep({ photos, onPhotos, photoError, ...props }: BikeStepPro
   const modelId = (watch("modelId") as string) ?? "";
   const notListed = modelId === NOT_LISTED;
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Your bike">
+    <Form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Your bike">
       <BikePicker
         register={register("modelId")}
         selectedId={modelId}
@@ -179,6 +181,6 @@ export function BikeStep({ photos, onPhotos, photoError, ...props }: BikeStepPro
       />
       <PhotoPicker files={photos} onChange={onPhotos} serverError={photoError} />
       <StepActions onBack={props.onBack} />
-    </form>
+    </Form>
   );
 }

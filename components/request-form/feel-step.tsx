@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { feelStepSchema } from "@/lib/validations/request";
 import { SAG_TERMS, endSagLabel } from "@/lib/validations/sag-terms";
 import { ChoiceGroup, MeasureField, TextAreaField, UnitToggle, errorAt } from "./fields";
@@ -28,7 +30,7 @@ export function FeelStep(props: StepProps) {
   const { register, formState } = form;
   const e = (path: string) => errorAt(formState.errors, path);
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="How it feels">
+    <Form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="How it feels">
       <ChoiceGroup
         name="complaints"
         legend="What feels wrong? (tick all that apply)"
@@ -62,6 +64,6 @@ export function FeelStep(props: StepProps) {
         ))}
       </fieldset>
       <StepActions onBack={props.onBack} nextLabel="Review" />
-    </form>
+    </Form>
   );
 }

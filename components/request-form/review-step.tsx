@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { AnswersList } from "@/components/status/answers-list";
 import { Button } from "@/components/ui/button";
 import { reviewStepSchema } from "@/lib/validations/request";
@@ -37,7 +39,7 @@ export function ReviewStep({ draft, photos, submitting, problem, onGo, ...props 
     </Button>
   );
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Review and send">
+    <Form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Review and send">
       {problem ? (
         <div role="alert" className="rounded-xl border border-red-300 bg-red-50 p-4 text-red-900">
           <p className="font-semibold">{problem.error}</p>
@@ -89,6 +91,6 @@ export function ReviewStep({ draft, photos, submitting, problem, onGo, ...props 
           {submitting ? "Sending…" : "Send my request"}
         </Button>
       </div>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { Field } from "@/components/ui/field";
 import { riderStepSchema } from "@/lib/validations/request";
 import { ChoiceGroup, MeasureField, UnitToggle, errorAt } from "./fields";
@@ -26,7 +28,7 @@ export function RiderStep(props: StepProps) {
   const { register, formState } = form;
   const e = (path: string) => errorAt(formState.errors, path);
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="About you">
+    <Form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="About you">
       <Field id="rider-name" label="Your name" autoComplete="name" error={e("name")} {...register("name")} />
       <Field
         id="rider-email"
@@ -87,6 +89,6 @@ export function RiderStep(props: StepProps) {
         columns={1}
       />
       <StepActions onBack={props.onBack} />
-    </form>
+    </Form>
   );
 }

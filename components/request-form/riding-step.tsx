@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 import { ridingStepSchema } from "@/lib/validations/request";
 import { ChoiceGroup, MeasureField, errorAt } from "./fields";
 import { DISCIPLINE_LABELS, JUMP_LABELS, TERRAIN_LABELS } from "./labels";
@@ -16,7 +18,7 @@ export function RidingStep(props: StepProps) {
   const { register, formState } = form;
   const e = (path: string) => errorAt(formState.errors, path);
   return (
-    <form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Your riding">
+    <Form onSubmit={submit} noValidate className="flex flex-col gap-5" aria-label="Your riding">
       <ChoiceGroup
         name="discipline"
         legend="What do you ride most?"
@@ -51,6 +53,6 @@ export function RidingStep(props: StepProps) {
         unit={<span className="flex items-center px-2 text-stone-700">h</span>}
       />
       <StepActions onBack={props.onBack} />
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The adjust editor: every change re-runs the engine at once and shows the consequences against the
 // engine's own proposal; "Save draft" stores the overrides (the server recomputes), "Approve" freezes
 // the saved draft and e-mails the rider.
@@ -167,7 +169,7 @@ export function RecommendationEditor({
         {!live.ok ? " (Showing the last valid figures: fix the marked field.)" : ""}
       </p>
       <div className="grid grid-cols-1 gap-6 lg:grid-cols-2">
-        <form
+        <Form
           className="flex flex-col gap-6"
           aria-label="Adjust the recommendation"
           onSubmit={form.handleSubmit(() => run("save"))}
@@ -251,7 +253,7 @@ export function RecommendationEditor({
               onCancel={() => setConfirming(false)}
             />
           ) : null}
-        </form>
+        </Form>
         <div className="flex flex-col gap-4">
           <ResultsTable engine={engine.rec} current={r} caption="Consequences, recomputed as you type" />
           <WarningsList warnings={r.warnings} />

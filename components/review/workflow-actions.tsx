@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Ask the rider, decline, assign. Each posts to its endpoint and refreshes the page's server data.
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
@@ -45,7 +47,7 @@ function TextAction(props: {
     if (await action.run({ [props.field]: text }, () => `${props.done} ${emailNote()}`)) setText("");
   }
   return (
-    <form onSubmit={submit} className="flex flex-col gap-2" aria-label={props.button}>
+    <Form onSubmit={submit} className="flex flex-col gap-2" aria-label={props.button}>
       <label htmlFor={props.id} className="text-sm font-medium text-stone-800">
         {props.label}
       </label>
@@ -72,7 +74,7 @@ function TextAction(props: {
       <Button type="submit" variant={props.variant} disabled={action.busy || text.trim().length < 5}>
         {props.button}
       </Button>
-    </form>
+    </Form>
   );
 }
 
@@ -120,7 +122,7 @@ export function AssignForm({
   const [tunerId, setTunerId] = useState(current ?? "");
   const action = useAction(`/api/requests/${requestId}/assign`);
   return (
-    <form
+    <Form
       aria-label="Assign"
       className="flex flex-wrap items-end gap-2"
       onSubmit={(e) => {
@@ -156,6 +158,6 @@ export function AssignForm({
           {action.done}
         </p>
       ) : null}
-    </form>
+    </Form>
   );
 }

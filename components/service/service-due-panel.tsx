@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The rider's next fork and shock service dates, and a form to log hours ridden (a number and a
 // day; "12,5" reads as 12.5). The dates come back from the server with every log.
 import { zodResolver } from "@hookform/resolvers/zod";
@@ -120,7 +122,7 @@ export function ServiceDuePanel({
         Intervals are the shop&apos;s, from common practice; your bike maker&apos;s service manual comes first. Forks
         and gas-charged shocks hold pressure and spring force: have a qualified technician open them.
       </p>
-      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Log riding hours">
+      <Form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Log riding hours">
         <h3 className="font-semibold">Log hours ridden</h3>
         <div className="grid grid-cols-2 gap-3">
           <Field
@@ -149,7 +151,7 @@ export function ServiceDuePanel({
             {saved}
           </p>
         ) : null}
-      </form>
+      </Form>
     </section>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The admin's service intervals: per service, engine hours and an optional month limit, for any
 // discipline (required: the fallback) and for the disciplines that differ; the reminder notice period
 // and the shop's time zone. Checked with the server's schema before sending.
@@ -88,7 +90,7 @@ export function ServiceSettingsForm({
     setCells((c) => ({ ...c, [k]: { ...c[k]!, [part]: value } }));
 
   return (
-    <form onSubmit={save} noValidate className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4">
+    <Form onSubmit={save} noValidate className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4">
       <div className="grid gap-4 sm:grid-cols-2">
         <Field
           id="notice-days"
@@ -172,6 +174,6 @@ export function ServiceSettingsForm({
           </p>
         ) : null}
       </div>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Shop settings form, checked with the same schema as the server (react-hook-form + zodResolver).
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
@@ -66,7 +68,7 @@ export function SettingsForm({ initial }: { initial: Draft }) {
   );
 
   return (
-    <form
+    <Form
       onSubmit={save}
       noValidate
       aria-label="Shop settings"
@@ -131,6 +133,6 @@ export function SettingsForm({ initial }: { initial: Draft }) {
       <Button type="submit" className="self-start" disabled={formState.isSubmitting}>
         Save settings
       </Button>
-    </form>
+    </Form>
   );
 }

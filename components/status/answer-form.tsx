@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The rider's answer to the tuner's question; the request goes back to the tuner at once.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
@@ -39,7 +41,7 @@ export function AnswerForm({ requestId, token }: { requestId: string; token?: st
     setProblem(sent.error);
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Answer the shop">
+    <Form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Answer the shop">
       <TextAreaField
         id="answer-body"
         label="Your answer"
@@ -54,6 +56,6 @@ export function AnswerForm({ requestId, token }: { requestId: string; token?: st
       <Button type="submit" className="min-h-12" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Sending…" : "Send answer"}
       </Button>
-    </form>
+    </Form>
   );
 }

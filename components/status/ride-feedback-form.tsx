@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // After the first rides: how the bike rides now, per end (the request form's complaint list) and in
 // the rider's words. The answer shows what the shop's clicker rules suggest from the fitted setup;
 // the tuner checks it and sends a revised sheet.
@@ -27,7 +29,7 @@ export function RideFeedbackForm({ requestId, token }: { requestId: string; toke
     setPicked((p) => ({ ...p, [end]: p[end].includes(c) ? p[end].filter((x) => x !== c) : [...p[end], c] }));
 
   return (
-    <form
+    <Form
       aria-label="How the bike rides now"
       noValidate
       className="flex flex-col gap-4"
@@ -116,6 +118,6 @@ export function RideFeedbackForm({ requestId, token }: { requestId: string; toke
           <p>Your tuner checks this and sends you a revised sheet; change nothing until then.</p>
         </div>
       ) : null}
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The sag follow-up: three readings per end in mm or inches; the engine's verdict comes back at once.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
@@ -67,7 +69,7 @@ export function SagForm({
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Report measured sag">
+    <Form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-label="Report measured sag">
       <div className="flex items-center justify-between gap-3">
         <span className="text-sm font-medium text-stone-800">Unit for every reading</span>
         <UnitToggle name="report-unit" legend="Sag unit" units={["mm", "in"]} register={register("unit")} />
@@ -99,6 +101,6 @@ export function SagForm({
           )}
         </div>
       ) : null}
-    </form>
+    </Form>
   );
 }

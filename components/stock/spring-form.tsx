@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Add or edit one spring line. The rate can be typed in any unit; the server stores N/mm.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
@@ -73,7 +75,7 @@ export function SpringForm({
   );
 
   return (
-    <form
+    <Form
       onSubmit={submit}
       noValidate
       aria-label={label}
@@ -119,6 +121,6 @@ export function SpringForm({
           {message}
         </p>
       ) : null}
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Accepting an invitation: the person sets their name and password and is signed in.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
@@ -37,7 +39,7 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
   const tokenError = formState.errors.token?.message;
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Accept invitation" className="flex max-w-md flex-col gap-4">
+    <Form onSubmit={onSubmit} noValidate aria-label="Accept invitation" className="flex max-w-md flex-col gap-4">
       <p className="text-sm text-stone-700">
         Your account: <strong>{email}</strong>
       </p>
@@ -61,6 +63,6 @@ export function AcceptInviteForm({ token, email }: { token: string; email: strin
       <Button type="submit" disabled={formState.isSubmitting}>
         {formState.isSubmitting ? "Setting up…" : "Join the workspace"}
       </Button>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // Invite by e-mail with a role; the result (sent or refused) is said by the team page.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
@@ -34,7 +36,7 @@ export function InviteForm({ onResult }: { onResult: (message: InviteMessage) =>
   });
 
   return (
-    <form
+    <Form
       onSubmit={onSubmit}
       noValidate
       aria-label="Invite to the team"
@@ -59,6 +61,6 @@ export function InviteForm({ onResult }: { onResult: (message: InviteMessage) =>
       <Button type="submit" disabled={formState.isSubmitting}>
         Send invitation
       </Button>
-    </form>
+    </Form>
   );
 }

@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The shop's own build notes for a catalog model, kept with the model and printed on every build sheet.
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
@@ -28,7 +30,7 @@ export function BuildNotesForm({ bikeModelId, notes }: { bikeModelId: string; no
       </div>
     );
   return (
-    <form onSubmit={submit} className="flex flex-col gap-2 print:hidden" noValidate>
+    <Form onSubmit={submit} className="flex flex-col gap-2 print:hidden" noValidate>
       <label htmlFor="buildNotes" className="text-sm font-medium">
         Build notes for this model
       </label>
@@ -47,6 +49,6 @@ export function BuildNotesForm({ bikeModelId, notes }: { bikeModelId: string; no
       <Button type="submit" disabled={busy}>
         Save build notes
       </Button>
-    </form>
+    </Form>
   );
 }

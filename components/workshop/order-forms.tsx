@@ -1,5 +1,7 @@
 "use client";
 
+import { Form } from "@/components/ui/form";
+
 // The order page's workshop forms: check-in, a part out to a finisher and back, shipping, refund.
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
@@ -57,7 +59,7 @@ export function CheckInForm({ order }: { order: OrderView }) {
           {checkIn.serials.map((s) => `${s.part} ${s.serial}`).join(", ") || "none"}.
         </p>
       ) : null}
-      <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
+      <Form onSubmit={submit} className="flex flex-col gap-3" noValidate>
         <Field
           id="forkSerial"
           name="forkSerial"
@@ -86,7 +88,7 @@ export function CheckInForm({ order }: { order: OrderView }) {
         <Button type="submit" disabled={busy}>
           Record check-in
         </Button>
-      </form>
+      </Form>
       <CheckInPhotos order={order} />
     </section>
   );
@@ -122,7 +124,7 @@ function CheckInPhotos({ order }: { order: OrderView }) {
           ))}
         </ul>
       ) : null}
-      <form onSubmit={upload} className="flex flex-col gap-2" noValidate aria-label="Check-in photos">
+      <Form onSubmit={upload} className="flex flex-col gap-2" noValidate aria-label="Check-in photos">
         <label htmlFor="checkin-photos" className="text-sm font-medium">
           Photos of the parts as received (JPEG, PNG or WebP, up to 10 MB each)
         </label>
@@ -131,7 +133,7 @@ function CheckInPhotos({ order }: { order: OrderView }) {
         <Button type="submit" variant="secondary" disabled={busy}>
           Add photos
         </Button>
-      </form>
+      </Form>
     </div>
   );
 }
@@ -191,7 +193,7 @@ export function FinisherForms({
         <p className="text-sm text-stone-600">No part has gone out.</p>
       )}
       {canSend ? (
-        <form onSubmit={submit} className="flex flex-col gap-3" noValidate aria-label="Send a part out">
+        <Form onSubmit={submit} className="flex flex-col gap-3" noValidate aria-label="Send a part out">
           <Field id="part" name="part" label="Part" placeholder="e.g. fork tubes" error={fields.part} />
           <div className="flex flex-col gap-1">
             <label htmlFor="finisherId" className="text-sm font-medium">
@@ -225,7 +227,7 @@ export function FinisherForms({
           <Button type="submit" disabled={busy || !finishers.length}>
             Mark part out
           </Button>
-        </form>
+        </Form>
       ) : (
         <Outcome problem={problem} done={done} />
       )}
@@ -259,14 +261,14 @@ export function ShippingForm({ order }: { order: OrderView }) {
           Shipped with {order.shipping.carrier}, tracking {order.shipping.trackingNumber}.
         </p>
       ) : order.stage === "assembled" ? (
-        <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
+        <Form onSubmit={submit} className="flex flex-col gap-3" noValidate>
           <Field id="carrier" name="carrier" label="Carrier" error={fields.carrier} />
           <Field id="trackingNumber" name="trackingNumber" label="Tracking number" error={fields.trackingNumber} />
           <Outcome problem={problem} done={done} />
           <Button type="submit" disabled={busy}>
             Mark shipped
           </Button>
-        </form>
+        </Form>
       ) : (
         <p className="text-sm text-stone-600">Ships once it is built and tested.</p>
       )}
@@ -298,7 +300,7 @@ export function RefundForm({ order }: { order: OrderView }) {
       <h2 id="refund-heading" className="text-lg font-semibold">
         Refund
       </h2>
-      <form onSubmit={submit} className="flex flex-col gap-3" noValidate>
+      <Form onSubmit={submit} className="flex flex-col gap-3" noValidate>
         <Field
           id="amount"
           name="amount"
@@ -312,7 +314,7 @@ export function RefundForm({ order }: { order: OrderView }) {
         <Button type="submit" variant="danger" disabled={busy}>
           Refund
         </Button>
-      </form>
+      </Form>
     </section>
   );
 }
