@@ -16,7 +16,8 @@ export function ChartSvg({
   // Never drawn narrower than its own width, so the axis text stays at its size on a phone: a narrow
   // screen scrolls the chart inside its own box instead of shrinking the text.
   return (
-    <div className="max-w-full overflow-x-auto">
+    // Focusable and named, so a keyboard can scroll it too (WCAG 2.1.1; axe "scrollable-region-focusable").
+    <div className="max-w-full overflow-x-auto" tabIndex={0} role="group" aria-label={`${label} (scrolls sideways)`}>
       <svg
         viewBox={`0 0 ${g.width} ${g.height}`}
         role="img"

@@ -271,7 +271,7 @@ export function sagWarnings(
     const soft = dir?.clamped ? dir.chosenNmm < dir.idealNmm : below > 0;
     const pick =
       dir?.windowPickNmm != null && Math.abs(dir.windowPickNmm - dir.chosenNmm) > 1e-9
-        ? ` The sag-window basis would pick ${rateText(dir.windowPickNmm, field)}.`
+        ? ` Sized to the sag window instead, it would be ${rateText(dir.windowPickNmm, field)}.`
         : "";
     warnings.push({
       code: `${code}_STATIC_SAG_OUTSIDE_WINDOW`,

@@ -128,7 +128,7 @@ describe("ride-frequency basis", () => {
     expect(over).toBeGreaterThan(0);
     expect(w.message).toContain(`${over.toFixed(0)} mm above`);
     expect(w.message).toContain("stiff side");
-    expect(w.message).toContain("sag-window basis would pick");
+    expect(w.message).toContain("Sized to the sag window instead, it would be");
     expect(w.requiresAcknowledgement).toBeUndefined();
   });
 
