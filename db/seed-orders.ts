@@ -43,14 +43,24 @@ const DEMO_FINISHERS = [
 const DAY = 86_400_000;
 
 // Which demo request carries which order, its service and stage, and how many days ago it started.
-const DEMO_ORDERS: { key: string; request: string; serviceType: ServiceType; stage: OrderStage; daysAgo: number }[] = [
+// The shipped and closed orders sit on two 125-class riders approved weeks ago (db/seed-data.ts),
+// shipped after their approval: a ship date restarts the service clock (lib/service/overview.ts), so
+// the service scenario of db/seed-service.ts (r09, r10, r11) stays as its comment says.
+const DEMO_ORDERS: {
+  key: string;
+  request: string;
+  serviceType: ServiceType;
+  stage: OrderStage;
+  daysAgo: number;
+  shippedDaysAgo?: number;
+}[] = [
   { key: "o1", request: "r10", serviceType: "send-in", stage: "awaiting_parts", daysAgo: 2 },
   { key: "o2", request: "r11", serviceType: "send-in", stage: "received", daysAgo: 4 },
   { key: "o3", request: "r09", serviceType: "kit", stage: "in_work", daysAgo: 6 },
   { key: "o4", request: "r10", serviceType: "send-in", stage: "at_finisher", daysAgo: 20 },
   { key: "o5", request: "r11", serviceType: "kit", stage: "assembled", daysAgo: 12 },
-  { key: "o6", request: "r09", serviceType: "springs-only", stage: "shipped", daysAgo: 9 },
-  { key: "o7", request: "r11", serviceType: "springs-only", stage: "closed", daysAgo: 40 },
+  { key: "o6", request: "c04", serviceType: "springs-only", stage: "shipped", daysAgo: 9, shippedDaysAgo: 2 },
+  { key: "o7", request: "c05", serviceType: "springs-only", stage: "closed", daysAgo: 40, shippedDaysAgo: 33 },
 ];
 
 export async function seedOrders(db: AppDb): Promise<void> {
@@ -104,7 +114,7 @@ export async function seedOrders(db: AppDb): Promise<void> {
           : null,
         carrier: shipped ? "Demo Parcel Service" : null,
         trackingNumber: shipped ? `DEMO${demo.key.toUpperCase()}0042` : null,
-        shippedAt: shipped ? new Date(now - 2 * DAY) : null,
+        shippedAt: shipped ? new Date(now - (demo.shippedDaysAgo ?? 2) * DAY) : null,
         createdAt: started,
       });
       await tx.insert(orderLines).values(lines.map((l, i) => ({ ...l, orderId: id, sortOrder: i })));

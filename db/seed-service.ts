@@ -4,7 +4,8 @@
 // - r11 (supercross, 40 h a month, approved 14 days ago): fork oil overdue, shock service due soon;
 // - r09 (motocross, 18 h a month): 12 h logged three days ago, so its fork oil falls due within days;
 // - r10 (enduro, 14 h a month, approved 11 days ago): everything weeks away;
-// - the 125 class riders (approved 39 to 74 days ago at 10 h a month): fork oil due or overdue.
+// - the 125 class riders (approved 40 to 75 days ago at 10 h a month): fork oil due or overdue, but
+//   c04, whose springs shipped two days ago (db/seed-orders.ts), starts again from the ship date.
 import { getDb } from "@/db/client";
 import { insertServiceDefaults } from "@/db/queries/service";
 import { serviceHourLogs } from "@/db/schema";

@@ -3,6 +3,7 @@
 import { and, asc, desc, eq, inArray, isNotNull, max, sql } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
 import {
+  orders,
   outboundEmails,
   recommendationVersions,
   serviceHourLogs,
@@ -125,13 +126,18 @@ export async function listServiceSubjects(requestId?: string) {
 export type ServiceSubject = Awaited<ReturnType<typeof listServiceSubjects>>[number];
 
 /**
- * SEAM for orders: where an order exists, its ship date is when the suspension left the bench and the
- * service clock starts. No orders table is in this database yet, so there is nothing to return; when
- * one lands, answer each request's latest ship date here and the due dates follow it.
+ * Each request's latest ship date among its orders: when the suspension left the workshop, where
+ * the service clock starts (lib/service/overview.ts decides between this and the approval).
  */
 export async function findOrderShipDates(requestIds: readonly string[]): Promise<Map<string, Date>> {
-  void requestIds;
-  return new Map();
+  if (requestIds.length === 0) return new Map();
+  const db = await getDb();
+  const rows = await db
+    .select({ requestId: orders.requestId, shippedAt: max(orders.shippedAt) })
+    .from(orders)
+    .where(and(inArray(orders.requestId, [...requestIds]), isNotNull(orders.shippedAt)))
+    .groupBy(orders.requestId);
+  return new Map(rows.filter((r) => r.shippedAt !== null).map((r) => [r.requestId, new Date(r.shippedAt!)]));
 }
 
 /** Records a reminder unless one exists for this request, item and due date; the new row's id, or null. */

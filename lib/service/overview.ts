@@ -49,7 +49,11 @@ function overviewOf(
   config: ServiceConfig,
   now: Date,
 ): ServiceOverview {
-  const startedOn = localDateOf(shippedAt ?? subject.approvedAt, config.timeZone);
+  // The clock starts when the suspension was last set up: the order's ship date where an order left
+  // the workshop after the sheet was approved, else the approval itself (a later revised sheet the
+  // rider fits at home restarts it too).
+  const fromShipment = shippedAt !== undefined && shippedAt.getTime() > subject.approvedAt.getTime();
+  const startedOn = localDateOf(fromShipment ? shippedAt : subject.approvedAt, config.timeZone);
   const today = localDateOf(now, config.timeZone);
   const hoursPerMonth = Number.isFinite(subject.hoursPerMonth) ? subject.hoursPerMonth : null;
   const dates = nextDueDates({
@@ -61,7 +65,7 @@ function overviewOf(
   return {
     requestId: subject.requestId,
     startedOn,
-    startedBy: shippedAt ? "order-shipped" : "sheet-approved",
+    startedBy: fromShipment ? "order-shipped" : "sheet-approved",
     today,
     hoursPerMonth,
     hoursLogged: dates[0]?.hoursLogged ?? 0,

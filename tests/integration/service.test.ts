@@ -54,6 +54,19 @@ describe("the demo shop", () => {
       true,
     );
   });
+
+  it("starts the clock at an order's ship date when the order left after the approval", async () => {
+    const rows = await loadServiceRows();
+    // c04 (approved 54 days ago) had its springs shipped 2 days ago (db/seed-orders.ts): the clock
+    // starts at the ship date, so motocross fork oil at 10 h a month is weeks away again.
+    const c04 = rows.find((r) => r.subject.requestId === id("c04"))!;
+    expect(c04.overview.startedBy).toBe("order-shipped");
+    expect(c04.overview.startedOn).toBe(addDays(today(), -2));
+    expect(c04.overview.due.every((d) => d.state === "later")).toBe(true);
+    // r11 has orders, none shipped: its clock still starts at the approval.
+    const r11 = rows.find((r) => r.subject.requestId === id("r11"))!;
+    expect(r11.overview.startedBy).toBe("sheet-approved");
+  });
 });
 
 describe("POST /api/status/:id/hours", () => {
