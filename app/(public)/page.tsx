@@ -46,7 +46,7 @@ export default async function HomePage() {
         <h2 id="how-heading" className="text-2xl font-bold">
           How it works
         </h2>
-        <ol className="grid gap-4 md:grid-cols-3">
+        <ol className="grid grid-cols-1 gap-4 md:grid-cols-3">
           {STEPS.map((step, i) => (
             <li key={step.title} className="flex gap-4 rounded-xl border border-stone-200 bg-white p-4 md:flex-col">
               <span

@@ -1,5 +1,6 @@
 // The fitted loads beside the catalog's (and the active calibration's, when one is applied).
 import type { CalibrationParameters } from "@/lib/sizing";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const ROWS: { key: keyof CalibrationParameters; label: string; format: (v: number) => string }[] = [
   { key: "rearSprungKg", label: "Sprung mass on the rear, bike alone", format: (v) => `${v.toFixed(1)} kg` },
@@ -20,7 +21,7 @@ interface Props {
 
 export function ParametersTable({ catalog, fitted, reports, active }: Props) {
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+    <ScrollBox label="Loads" className="rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Loads: catalog, fitted and applied</caption>
         <thead className="bg-stone-100 text-stone-700">
@@ -54,6 +55,6 @@ export function ParametersTable({ catalog, fitted, reports, active }: Props) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

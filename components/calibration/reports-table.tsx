@@ -2,6 +2,7 @@
 // the catalog's loads and with the fitted ones.
 import Link from "next/link";
 import type { ReportComparison } from "@/lib/calibration/service";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const day = new Intl.DateTimeFormat("en-GB", { dateStyle: "medium", timeZone: "UTC" });
 const mm = (v: number | undefined | null) => (v === undefined || v === null ? "–" : `${Math.round(v)}`);
@@ -19,7 +20,7 @@ function Cells({ measured, catalog, fitted }: { measured?: number; catalog?: num
 
 export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+    <ScrollBox label="Sag reports" className="rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-left text-sm">
         <caption className="px-3 py-2 text-left text-stone-700">
           Sag in mm: measured by the rider, predicted with the catalog&apos;s loads, predicted with the fitted loads.
@@ -101,7 +102,7 @@ export function ReportsTable({ rows }: { rows: ReportComparison[] }) {
           ) : null}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }
 

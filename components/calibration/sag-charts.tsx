@@ -41,7 +41,7 @@ export function SagCharts({ rows }: { rows: ReportComparison[] }) {
   const front = chartFor(rows, "front");
   if (!rear && !front) return null;
   return (
-    <div className="grid gap-4 lg:grid-cols-2">
+    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
       {rear ? <ForceChart title="Rear race sag against rider mass" spec={rear} /> : null}
       {front ? <ForceChart title="Front race sag against rider mass" spec={front} /> : null}
     </div>

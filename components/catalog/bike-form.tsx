@@ -8,7 +8,8 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, useWatch, type Path, type Resolver } from "react-hook-form";
 import { Button } from "@/components/ui/button";
-import { Field } from "@/components/ui/field";
+import { ErrorText, Field } from "@/components/ui/field";
+import { BIKE_CLASS_LABELS } from "@/lib/labels";
 import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import { bikeModelSchema, type BikeModelInput, type BikeModelValues } from "@/lib/validations/bike";
 import {
@@ -59,12 +60,15 @@ const SERVER_FIELDS = [
   "spec",
 ];
 
+/** The class select's value for "a class of the shop's own" (never a class code: those have no "*"). */
+const OWN_CLASS = "*own";
+
 const section = "flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4";
 
 export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string }) {
   const router = useRouter();
   const [message, setMessage] = useState<string | null>(null);
-  const { control, register, handleSubmit, getValues, setError, formState } = useForm<
+  const { control, register, handleSubmit, getValues, setError, setValue, formState } = useForm<
     BikeModelInput,
     unknown,
     BikeModelValues
@@ -73,6 +77,10 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
     defaultValues: initial,
   });
   const errors = formState.errors;
+  // The generic classes are chosen by their names; a class of the shop's own is typed.
+  const [classChoice, setClassChoice] = useState(() =>
+    Object.hasOwn(BIKE_CLASS_LABELS, initial.bikeClass ?? "") ? (initial.bikeClass as string) : OWN_CLASS,
+  );
   const [forkKind, curve, wheelTravelMm, shockStrokeMm, rateNmm, preloadMm] = useWatch({
     control,
     name: [
@@ -123,15 +131,41 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
         <h2 id="bike-identity" className="font-semibold">
           Model
         </h2>
-        <div className="grid gap-4 sm:grid-cols-2">
+        <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
           <Field id="name" label="Name" error={errors.name?.message} {...register("name")} />
-          <Field
-            id="bikeClass"
-            label="Class"
-            hint="Lower-case with dashes, e.g. mx-450-4t"
-            error={errors.bikeClass?.message}
-            {...register("bikeClass")}
-          />
+          <div className="flex flex-col gap-1">
+            <label htmlFor="bikeClassChoice" className="text-sm font-medium text-stone-800">
+              Class
+            </label>
+            <select
+              id="bikeClassChoice"
+              className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base"
+              value={classChoice}
+              onChange={(e) => {
+                setClassChoice(e.target.value);
+                setValue("bikeClass", e.target.value === OWN_CLASS ? "" : e.target.value, {
+                  shouldValidate: formState.isSubmitted,
+                });
+              }}
+            >
+              {Object.entries(BIKE_CLASS_LABELS).map(([code, label]) => (
+                <option key={code} value={code}>
+                  {label}
+                </option>
+              ))}
+              <option value={OWN_CLASS}>A class of the shop&apos;s own</option>
+            </select>
+            {classChoice === OWN_CLASS ? null : <ErrorText id="bikeClass-error" message={errors.bikeClass?.message} />}
+          </div>
+          {classChoice === OWN_CLASS ? (
+            <Field
+              id="bikeClass"
+              label="Own class name"
+              hint="Lower-case letters, digits and dashes: it groups models in the catalog and the queue"
+              error={errors.bikeClass?.message}
+              {...register("bikeClass")}
+            />
+          ) : null}
           <Field
             id="slug"
             label="Slug (optional)"
@@ -171,15 +205,15 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
         <h2 id="bike-masses" className="font-semibold">
           Masses and geometry
         </h2>
-        <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">{MASS_FIELDS.map(num)}</div>
+        <div className="grid grid-cols-1 gap-4 sm:grid-cols-2 lg:grid-cols-4">{MASS_FIELDS.map(num)}</div>
       </section>
 
       <section className={section} aria-labelledby="bike-rear">
         <h2 id="bike-rear" className="font-semibold">
           Rear suspension
         </h2>
-        <div className="grid gap-4 sm:grid-cols-3">{REAR_FIELDS.map(num)}</div>
-        <div className="grid gap-4 lg:grid-cols-[minmax(0,22rem)_1fr]">
+        <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">{REAR_FIELDS.map(num)}</div>
+        <div className="grid grid-cols-1 gap-4 lg:grid-cols-[minmax(0,22rem)_1fr]">
           <CurveTable control={control} register={register} getValues={getValues} errors={errors} />
           <LeveragePreview
             curve={curve}
@@ -208,7 +242,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
             ))}
           </select>
         </label>
-        <div className="grid gap-4 sm:grid-cols-2">
+        <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
           <Field
             id="forkOilType"
             label="Fork oil type (optional)"
@@ -224,13 +258,13 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
             {...register("forkOilVolumeMl", { setValueAs: toNumber(null) })}
           />
         </div>
-        <div className="grid gap-4 sm:grid-cols-3">
+        <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">
           {FORK_FIELDS.filter(([p]) => forkKind !== "air" || !/stockRate|Preload/.test(p)).map(num)}
         </div>
         {forkKind === "air" ? (
-          <div className="grid gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div>
+          <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">{AIR_FIELDS.map(num)}</div>
         ) : (
-          <div className="grid gap-4 sm:grid-cols-3">{FORK_SPRING_FIELDS.map(num)}</div>
+          <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">{FORK_SPRING_FIELDS.map(num)}</div>
         )}
         {errorAt(errors, "spec.fork.air") ? (
           <p className="text-sm font-medium text-red-700">{errorAt(errors, "spec.fork.air")}</p>
@@ -241,7 +275,7 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
         <h2 id="bike-clickers" className="font-semibold">
           Clickers, counted out from fully closed
         </h2>
-        <div className="grid gap-4 lg:grid-cols-2">
+        <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
           {CLICKERS.map(([cid, label]) => (
             <fieldset key={cid} className="grid grid-cols-3 gap-2">
               <legend className="mb-1 text-sm font-semibold text-stone-800">{label}</legend>

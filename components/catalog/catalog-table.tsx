@@ -13,6 +13,7 @@ import {
   type SortingState,
 } from "@tanstack/react-table";
 import { FORK_KIND_LABELS } from "./bike-fields";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export interface CatalogRow {
   id: string;
@@ -63,7 +64,7 @@ export function CatalogTable({ rows }: { rows: CatalogRow[] }) {
     getSortedRowModel: getSortedRowModel(),
   });
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+    <ScrollBox label="Bike models" className="rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Bike models</caption>
         <thead className="bg-stone-100 text-stone-700">
@@ -111,6 +112,6 @@ export function CatalogTable({ rows }: { rows: CatalogRow[] }) {
           ) : null}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

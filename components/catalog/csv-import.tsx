@@ -7,6 +7,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/lib/api-client";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 interface Report {
   saved: { row: number; slug: string; action: string }[];
@@ -79,7 +80,7 @@ export function CsvImport() {
             {report.saved.length} row(s) saved, {report.refused.length} refused.
           </p>
           {report.refused.length ? (
-            <div className="max-w-full overflow-x-auto">
+            <ScrollBox label="Refused rows">
               <table className="text-left">
                 <thead>
                   <tr>
@@ -110,7 +111,7 @@ export function CsvImport() {
                   ))}
                 </tbody>
               </table>
-            </div>
+            </ScrollBox>
           ) : null}
         </div>
       ) : null}

@@ -11,6 +11,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { errorAt, toNumber } from "@/components/forms/apply-server-errors";
 import type { BikeModelInput, BikeModelValues } from "@/lib/validations/bike";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const LIST = "spec.rear.leverageCurve" as const;
 // Any point moves the curve's integral, which the schema checks against the stroke.
@@ -32,7 +33,7 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
       <legend className="text-sm font-semibold text-stone-800">
         Leverage-ratio curve (wheel travel per shock travel)
       </legend>
-      <div className="max-w-full overflow-x-auto">
+      <ScrollBox label="Leverage-ratio curve">
         <table className="text-sm">
           <thead>
             <tr className="text-left text-stone-600">
@@ -90,7 +91,7 @@ export function CurveTable({ control, register, getValues, errors }: Props) {
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       {listError ? <p className="text-sm font-medium text-red-700">{listError}</p> : null}
       <Button
         variant="secondary"

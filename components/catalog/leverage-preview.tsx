@@ -77,7 +77,7 @@ export function LeveragePreview({ curve, wheelTravelMm, shockStrokeMm, rateNmm, 
           ? "Enter at least two points, from 0 mm to the full wheel travel, to check the curve against the stroke."
           : `${fits ? "Curve matches the stroke" : "Curve does not match the stroke"}: it gives ${stroke.toFixed(1)} mm of shock travel over ${travel} mm of wheel travel; stroke ${shockStrokeMm ?? "?"} mm, tolerance ±${tol?.toFixed(1) ?? "?"} mm (1.5 % of the stroke, at least 1 mm).`}
       </p>
-      <div className="grid gap-3 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-3 lg:grid-cols-2">
         {ratioChart ? (
           <LineChart
             geometry={ratioChart}

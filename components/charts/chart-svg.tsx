@@ -2,6 +2,7 @@
 // series, markers). The force charts of the review and the catalog's leverage preview both draw
 // through it; the setup sheet draws the same geometry with react-pdf (lib/pdf/sections/chart.tsx).
 import type { ChartGeometry } from "@/lib/charts/force-curve";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export function ChartSvg({
   geometry: g,
@@ -16,8 +17,7 @@ export function ChartSvg({
   // Never drawn narrower than its own width, so the axis text stays at its size on a phone: a narrow
   // screen scrolls the chart inside its own box instead of shrinking the text.
   return (
-    // Focusable and named, so a keyboard can scroll it too (WCAG 2.1.1; axe "scrollable-region-focusable").
-    <div className="max-w-full overflow-x-auto" tabIndex={0} role="group" aria-label={`${label} (scrolls sideways)`}>
+    <ScrollBox label={label}>
       <svg
         viewBox={`0 0 ${g.width} ${g.height}`}
         role="img"
@@ -83,6 +83,6 @@ export function ChartSvg({
           </g>
         ))}
       </svg>
-    </div>
+    </ScrollBox>
   );
 }

@@ -7,7 +7,7 @@ export function ForceChart({ spec, title }: { spec: ChartSpec; title: string }) 
   const g = forceChartGeometry(spec);
   const main = g.series.find((s) => s.emphasis === "main");
   return (
-    <figure className="flex flex-col gap-2">
+    <figure className="flex min-w-0 flex-col gap-2">
       <ChartSvg geometry={g} label={`${title}: ${main?.label ?? ""}`} className="h-auto w-full max-w-xl" />
       <figcaption className="text-sm text-stone-700">
         <span className="font-medium">{title}.</span>{" "}

@@ -12,7 +12,7 @@ export function LineChart({
   description: string;
 }) {
   return (
-    <figure className="rounded-xl border border-stone-200 bg-white p-3">
+    <figure className="min-w-0 rounded-xl border border-stone-200 bg-white p-3">
       <figcaption className="mb-1 text-sm font-semibold text-stone-800">{title}</figcaption>
       <ChartSvg geometry={geometry} label={`${title}. ${description}`} />
       <p className="text-xs text-stone-600">{description}</p>

@@ -18,6 +18,7 @@ import {
   type OrderStage,
   type PriceKind,
 } from "@/lib/orders/stages";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const box = "flex flex-col gap-3 rounded-xl border border-stone-200 bg-white p-4";
 
@@ -61,7 +62,7 @@ function Outcome({ problem, done }: { problem: string | null; done: string | nul
 
 export function OrderSettingsEditor(props: { settings: Settings; priceList: PriceItem[]; finishers: Finisher[] }) {
   return (
-    <div className="grid gap-4 lg:grid-cols-2">
+    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
       <PaymentSettings settings={props.settings} />
       <PriceList items={props.priceList} currency={props.settings.currency} />
       <Finishers finishers={props.finishers} />
@@ -207,7 +208,7 @@ function PriceList({ items, currency }: { items: PriceItem[]; currency: string }
         Quotes start from the items coded service-send-in, service-kit, service-springs-only, spring-fork, spring-shock
         and shipping-return; staff add the others by hand.
       </p>
-      <div className="overflow-x-auto">
+      <ScrollBox label="Price list">
         <table className="w-full min-w-[34rem] text-sm">
           <thead>
             <tr className="text-left text-stone-600">
@@ -282,7 +283,7 @@ function PriceList({ items, currency }: { items: PriceItem[]; currency: string }
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       <div className="flex flex-wrap gap-2">
         <Button
           variant="secondary"

@@ -1,11 +1,12 @@
 // The quote's lines with their amounts, the subtotal, tax and total, written by lib/format.
 import { formatMoney } from "@/lib/format";
 import type { OrderView } from "@/lib/orders/types";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export function QuoteTable({ order }: { order: OrderView }) {
   const money = (minor: number) => formatMoney(minor, order.currency);
   return (
-    <div className="overflow-x-auto">
+    <ScrollBox label="Quote">
       <table className="w-full text-left text-sm">
         <thead>
           <tr className="border-b border-stone-200 text-stone-600">
@@ -52,6 +53,6 @@ export function QuoteTable({ order }: { order: OrderView }) {
           </tr>
         </tfoot>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

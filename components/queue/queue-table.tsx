@@ -14,6 +14,7 @@ import Link from "next/link";
 import { StatusBadge } from "@/components/ui/status-badge";
 import type { QueueRow } from "./queue-data";
 import { formatDay } from "@/lib/format";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const SORT_OF: Record<string, { asc: string; desc: string }> = {
   number: { asc: "number_asc", desc: "number" },
@@ -110,7 +111,7 @@ export function QueueTable({
     getRowId: (r) => r.id,
   });
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white" aria-busy={busy}>
+    <ScrollBox label="Setup requests" className="rounded-xl border border-stone-200 bg-white" aria-busy={busy}>
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Setup requests, sorted by {sort}</caption>
         <thead className="bg-stone-100 text-stone-700">
@@ -165,6 +166,6 @@ export function QueueTable({
           ) : null}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -4,6 +4,7 @@ import { EmailStatusItems } from "@/components/mail/email-status-list";
 import type { RequestDetail } from "@/db/queries/review";
 import { formatDateTime, formatNumber } from "@/lib/format";
 import { END_LABELS, SAG_VERDICT_LABELS, labelOf } from "@/lib/labels";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const box = "rounded-xl border border-stone-200 bg-white p-4";
 
@@ -90,7 +91,7 @@ export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReport
       </h2>
       {reports.length === 0 ? <p className="text-sm text-stone-600">No measured sag reported yet.</p> : null}
       {reports.length ? (
-        <div className="overflow-x-auto">
+        <ScrollBox label="Measured sag">
           <table className="w-full min-w-[34rem] text-left text-sm">
             <caption className="sr-only">Measured sag per report and end, with the verdict</caption>
             <thead className="bg-stone-100 text-stone-700">
@@ -142,7 +143,7 @@ export function SagReportsPanel({ reports }: { reports: RequestDetail["sagReport
               })}
             </tbody>
           </table>
-        </div>
+        </ScrollBox>
       ) : null}
     </section>
   );

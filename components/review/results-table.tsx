@@ -1,6 +1,7 @@
 // Engine proposal against this version, figure by figure; a changed figure says so in words.
 import type { Recommendation } from "@/lib/sizing";
 import { BALANCE_FIGURES, FRONT_FIGURES, REAR_FIGURES, clickerFigures, formatFigure, type Figure } from "./figures";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 function Section({
   title,
@@ -57,7 +58,7 @@ export function ResultsTable({
   caption: string;
 }) {
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+    <ScrollBox label={caption} className="rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-sm">
         <caption className="px-3 py-2 text-left font-semibold">{caption}</caption>
         <thead className="bg-stone-100 text-stone-700">
@@ -91,6 +92,6 @@ export function ResultsTable({
           current={current}
         />
       </table>
-    </div>
+    </ScrollBox>
   );
 }

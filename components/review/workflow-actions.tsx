@@ -83,7 +83,7 @@ export function WorkflowActions({ requestId, status }: { requestId: string; stat
   return (
     <section
       aria-labelledby="workflow-heading"
-      className="grid gap-4 rounded-xl border border-stone-200 bg-white p-4 md:grid-cols-2"
+      className="grid grid-cols-1 gap-4 rounded-xl border border-stone-200 bg-white p-4 md:grid-cols-2"
     >
       <h2 id="workflow-heading" className="text-lg font-semibold md:col-span-2">
         Ask or decline

@@ -79,7 +79,7 @@ export function SagGuide() {
         fender or side panel straight above it; at the front, the wiper seal and the axle clamp. A helper makes it
         easier.
       </p>
-      <div className="grid gap-3 md:grid-cols-3">
+      <div className="grid grid-cols-1 gap-3 md:grid-cols-3">
         <Figure title={`Reading A, ${READINGS.A.name}`} caption={READINGS.A.how}>
           <RearEnd drop={0} stand />
         </Figure>

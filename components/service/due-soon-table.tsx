@@ -3,6 +3,7 @@ import Link from "next/link";
 import { cn } from "@/components/ui/cn";
 import { formatDateTime, formatDay } from "@/lib/format";
 import type { DueSoonRow } from "@/lib/service/types";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const civilDay = (day: string) => formatDay(`${day}T00:00:00Z`);
 
@@ -12,7 +13,7 @@ export function DueSoonTable({ items }: { items: DueSoonRow[] }) {
       <p className="rounded-xl border border-stone-200 bg-white p-4">No service is due within the notice period.</p>
     );
   return (
-    <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+    <ScrollBox label="Services due" className="rounded-xl border border-stone-200 bg-white">
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Services due soon or overdue</caption>
         <thead className="bg-stone-50 text-stone-700">
@@ -58,6 +59,6 @@ export function DueSoonTable({ items }: { items: DueSoonRow[] }) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollBox>
   );
 }

@@ -14,6 +14,7 @@ import { SERVICE_ITEMS, SERVICE_ITEM_LABELS, type IntervalDiscipline, type Servi
 import { DISCIPLINE_LABELS } from "@/components/request-form/labels";
 import { DISCIPLINES } from "@/lib/sizing";
 import { serviceSettingsSchema } from "@/lib/validations/service";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 const ROWS: IntervalDiscipline[] = ["any", ...DISCIPLINES];
 const rowLabel = (d: IntervalDiscipline) => (d === "any" ? "Any discipline" : DISCIPLINE_LABELS[d]);
@@ -91,7 +92,7 @@ export function ServiceSettingsForm({
 
   return (
     <Form onSubmit={save} noValidate className="flex flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4">
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         <Field
           id="notice-days"
           label="Notice period (days before a service is due)"
@@ -109,7 +110,7 @@ export function ServiceSettingsForm({
           error={errors.timeZone}
         />
       </div>
-      <div className="overflow-x-auto">
+      <ScrollBox label="Service intervals">
         <table className="w-full min-w-[40rem] text-left text-sm">
           <caption className="mb-2 text-left text-stone-700">
             Engine hours between services, and an optional limit in months (whichever comes first). Leave a
@@ -164,7 +165,7 @@ export function ServiceSettingsForm({
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       {errors.intervals ? <p className="text-sm font-medium text-red-700">{errors.intervals}</p> : null}
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit">Save service intervals</Button>

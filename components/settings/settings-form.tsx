@@ -74,7 +74,7 @@ export function SettingsForm({ initial }: { initial: Draft }) {
       aria-label="Shop settings"
       className="flex max-w-3xl flex-col gap-4 rounded-xl border border-stone-200 bg-white p-4"
     >
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         <Field id="name" label="Shop name" error={errors.name?.message} {...register("name")} />
         <Field id="email" label="Contact e-mail" type="email" error={errors.email?.message} {...register("email")} />
         <Field id="phone" label="Phone" error={errors.phone?.message} {...register("phone")} />
@@ -87,7 +87,7 @@ export function SettingsForm({ initial }: { initial: Draft }) {
         />
       </div>
       {textarea("address", "Address", "min-h-20")}
-      <div className="grid gap-4 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-2">
         {select("units", "Units shown first", [
           ["metric", "Metric (kg, mm, N/mm)"],
           ["imperial", "Imperial (lb, in, lbf/in)"],
@@ -98,7 +98,7 @@ export function SettingsForm({ initial }: { initial: Draft }) {
         ])}
       </div>
       {textarea("sheetFooter", "Setup sheet footer", "min-h-16")}
-      <div className="grid gap-4 sm:grid-cols-3">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">
         <Field
           id="gearMassKg"
           label="Riding gear mass (kg)"

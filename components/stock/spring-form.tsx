@@ -79,7 +79,7 @@ export function SpringForm({
       onSubmit={submit}
       noValidate
       aria-label={label}
-      className="grid items-end gap-3 sm:grid-cols-4 lg:grid-cols-8"
+      className="grid grid-cols-1 items-end gap-3 sm:grid-cols-4 lg:grid-cols-8"
     >
       <label className="flex flex-col gap-1 text-sm font-medium">
         End

@@ -13,6 +13,7 @@ import { applyServerErrors, errorAt, toNumber } from "@/components/forms/apply-s
 import { callApi } from "@/lib/api-client";
 import { CLICKER_IDS, COMPLAINTS, TERRAINS, type ClickerRule } from "@/lib/sizing";
 import { clickerRulesSchema } from "@/lib/validations/targets";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 type Trigger = ClickerRule["trigger"];
 const RATE_TRIGGERS = ["rear-stiffer", "rear-softer", "front-stiffer", "front-softer"] as const;
@@ -95,7 +96,7 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
         Change in clicks (turns for shock high-speed); a positive change is out, less damping. Rate-change rules fire
         when the chosen spring differs from stock by at least the given share.
       </p>
-      <div className="overflow-x-auto">
+      <ScrollBox label="Clicker rules">
         <table className="w-full text-left text-sm">
           <thead>
             <tr className="text-stone-600">
@@ -191,7 +192,7 @@ export function ClickerRulesEditor({ initial }: { initial: ClickerRule[] }) {
             })}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       <div className="flex flex-wrap gap-2">
         <Button variant="secondary" onClick={() => append(NEW_RULE)}>
           Add rule

@@ -102,7 +102,7 @@ export function TargetEditor({
           ))}
         </select>
       </label>
-      <div className="grid gap-4 sm:grid-cols-3">
+      <div className="grid grid-cols-1 gap-4 sm:grid-cols-3">
         {SAG_FIELDS.map(([key, label, end]) => (
           // Shown in % of travel, kept as the fraction the schema checks.
           <Controller

@@ -8,6 +8,7 @@ import { callApi } from "@/lib/api-client";
 import type { TargetRowValues } from "@/lib/requests/sizing-input";
 import type { PreviewSummary } from "@/lib/shop/target-preview";
 import type { Discipline, SkillLevel } from "@/lib/sizing";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export interface PreviewBike {
   id: string;
@@ -69,7 +70,7 @@ export function TargetPreview({
         </p>
       ) : null}
       {result ? (
-        <div className="max-w-full overflow-x-auto">
+        <ScrollBox label="Preview">
           <table className="max-w-xl text-left text-sm tabular-nums">
             <caption className="text-left text-stone-600">
               {bike.name}, moderate style, medium jumps, no complaints
@@ -99,7 +100,7 @@ export function TargetPreview({
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollBox>
       ) : null}
       {result?.after.warnings.length ? (
         <ul className="list-disc pl-5 text-sm text-amber-900">

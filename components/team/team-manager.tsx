@@ -8,6 +8,7 @@ import { callApi } from "@/lib/api-client";
 import { formatDay } from "@/lib/format";
 import { roleLabel } from "@/lib/labels";
 import { InviteForm, type InviteMessage } from "./invite-form";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export interface Member {
   id: string;
@@ -73,7 +74,7 @@ export function TeamManager({
           {message.text}
         </p>
       ) : null}
-      <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+      <ScrollBox label="Team members" className="rounded-xl border border-stone-200 bg-white">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Team members</caption>
           <thead className="bg-stone-100 text-stone-700">
@@ -130,7 +131,7 @@ export function TeamManager({
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       {invites.length ? (
         <section aria-labelledby="open-invites">
           <h2 id="open-invites" className="mb-2 font-semibold">

@@ -51,7 +51,7 @@ export function CoilSpringTool() {
       }
       source="Shigley, Mechanical Engineering Design, 10th ed.: eq. 10-9 (rate), eq. 10-4 (Wahl factor), eqs. 10-1 and 10-4 (stress), table 10-1 (end types); G ≈ 79.3 GPa for steel spring wire, table 10-5; minimum tensile strength S_ut = A/d^m, table 10-4 (ASTM wire grades); allowable torsional stress for static service, before set removed, as a fraction of S_ut, table 10-6."
     >
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         {n("wireDiameterMm", "Wire diameter d (mm)")}
         {n("outerDiameterMm", "Outer diameter OD (mm)")}
         {n("totalCoils", "Total coils")}

@@ -48,7 +48,7 @@ export function LoadTestTool() {
       }
       source="Hooke's law for a linear spring (Shigley, Mechanical Engineering Design, §10-2); points taken well clear of coil bind and of the first few mm, common practice."
     >
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         {n("length1Mm", "First length L₁ (mm)")}
         {n("force1", "Force at L₁")}
         {n("length2Mm", "Second length L₂ (mm)")}

@@ -25,7 +25,7 @@ export function RateConverter() {
       formula={<>1 kgf/mm = 9.80665 N/mm; 1 lbf/in = 4.4482216152605 N / 25.4 mm = 0.175127 N/mm.</>}
       source="NIST SP 811 (2008), appendix B.8: exact definitions of the kilogram-force, pound-force and inch."
     >
-      <div className="grid gap-3 sm:grid-cols-2">
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         <Field
           id="conv-value"
           label="Rate"

@@ -8,6 +8,7 @@ import { formatMoney } from "@/lib/format";
 import { currencyDigits, parseMajorToMinor } from "@/lib/orders/money";
 import type { OrderView } from "@/lib/orders/types";
 import { useOrderAction } from "./use-order-action";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 interface Row {
   key: number;
@@ -63,7 +64,7 @@ export function QuoteEditor({
 
   return (
     <div className="flex flex-col gap-3">
-      <div className="overflow-x-auto">
+      <ScrollBox label="Quote lines">
         <table className="w-full min-w-[36rem] text-sm">
           <thead>
             <tr className="text-left text-stone-600">
@@ -120,7 +121,7 @@ export function QuoteEditor({
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       <div className="flex flex-wrap items-end gap-2">
         <label className="flex flex-col text-sm">
           Add from the price list

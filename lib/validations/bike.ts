@@ -39,8 +39,8 @@ export const bikeModelSchema = z
     bikeClass: z
       .string()
       .trim()
-      .min(2, "Give the class, e.g. mx-450-4t")
-      .max(40)
+      .min(2, "Choose the class, or name one of your own")
+      .max(40, "Keep the class under 40 characters")
       .regex(slugPattern, "Use lower-case letters, digits and single dashes"),
     yearFrom: optionalYear,
     yearTo: optionalYear,

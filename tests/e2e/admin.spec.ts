@@ -53,7 +53,8 @@ test.describe("admin catalog", () => {
     await expect(page).toHaveURL("/shop/catalog/new");
     const form = page.getByRole("form", { name: "Bike model" });
     await form.getByLabel("Name", { exact: true }).fill(name);
-    await form.getByLabel("Class", { exact: true }).fill("enduro-350-4t");
+    await form.getByLabel("Class", { exact: true }).selectOption({ label: "A class of the shop's own" });
+    await form.getByLabel("Own class name").fill("enduro-350-4t");
     await form.getByLabel("Rear wheel travel (mm)").fill("300");
     // The template has 7 points; keep 4.
     for (const n of [7, 6, 5]) await form.getByRole("button", { name: `Remove point ${n}` }).click();

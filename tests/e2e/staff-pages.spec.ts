@@ -1,8 +1,119 @@
-// The staff workspace's review and queue, in the browser: opening a submitted request leaves it
+// The staff workspace in the browser: every staff page (and the rider's public pages beside them) at
+// a laptop's 1440×900 and a phone's 390×844 has no horizontal overflow outside its own scroll boxes,
+// is clean of serious and critical axe-core findings (WCAG 2 A and AA) and shows no raw code and no
+// zod default message (tests/helpers/vocabulary.ts). Then: opening a submitted request leaves it
 // submitted (a GET never writes; "Start review" is the action); the queue takes a typed date, finds a
 // request by its number and sorts status in workflow order both ways.
+import AxeBuilder from "@axe-core/playwright";
+import type { Page } from "@playwright/test";
 import { stableUuid } from "@/db/seed-data";
+import { demoStatusToken } from "@/lib/requests/token";
+import { unspokenWords } from "../helpers/vocabulary";
+import { E2E_AUTH_SECRET } from "./support/env";
 import { expect, signInWithPassword, test } from "./support/fixtures";
+
+const request = (key: string) => `/shop/requests/${stableUuid(`request:${key}`)}`;
+const order = (key: string) => `/shop/workshop/${stableUuid(`order:${key}`)}`;
+const bike = (key: string) => `/shop/catalog/${stableUuid(`bike:${key}`)}`;
+
+/** Every staff page, with a seeded row where it needs one; the owner (admin) sees them all. */
+const STAFF_PAGES = [
+  "/shop",
+  request("r02"), // submitted, not yet in review
+  request("r04"), // in review: the editor
+  request("r07"), // waiting for the rider's answer
+  request("c01"), // approved, with a sag report
+  "/shop/workshop",
+  order("o1"),
+  `${order("o1")}/build-sheet`,
+  "/shop/service",
+  "/shop/catalog",
+  "/shop/catalog/new",
+  bike("mx-450-4t"),
+  `${bike("mx-125-2t")}/calibration`,
+  "/shop/stock",
+  "/shop/targets",
+  "/shop/tools",
+  "/shop/emails",
+  "/shop/emails/wording",
+  "/shop/team",
+  "/shop/settings",
+  "/shop/settings/orders",
+  "/shop/settings/service",
+];
+
+const PUBLIC_PAGES = [
+  "/",
+  "/request",
+  `/status/${demoStatusToken(E2E_AUTH_SECRET, stableUuid("request:r07"))}`,
+  `/status/${demoStatusToken(E2E_AUTH_SECRET, stableUuid("request:c01"))}`,
+];
+
+/** What is wrong with the page as shown: overflow, serious or critical axe findings, unspoken words. */
+async function problems(page: Page, width: number): Promise<string[]> {
+  const found: string[] = [];
+  const overflow = await page.evaluate((limit) => {
+    if (document.documentElement.scrollWidth <= limit) return [];
+    // Name the widest elements that stick out and are not inside a scroll box of their own.
+    return [...document.body.querySelectorAll<HTMLElement>("*")]
+      .filter((el) => el.getBoundingClientRect().right > limit + 1 && !el.parentElement?.closest(".overflow-x-auto"))
+      .map((el) => ({
+        what: `${el.tagName.toLowerCase()}${el.className && typeof el.className === "string" ? `.${el.className.split(/\s+/).slice(0, 3).join(".")}` : ""}`,
+        right: Math.round(el.getBoundingClientRect().right),
+      }))
+      .sort((a, b) => b.right - a.right)
+      .slice(0, 4)
+      .map((e) => `${e.what} reaches ${e.right} px`);
+  }, width);
+  if (overflow.length) found.push(`wider than ${width} px: ${overflow.join("; ")}`);
+  const axe = await new AxeBuilder({ page }).exclude("iframe").withTags(["wcag2a", "wcag2aa"]).analyze();
+  for (const v of axe.violations)
+    if (v.impact === "serious" || v.impact === "critical")
+      found.push(
+        `axe ${v.id}: ${v.help} (${v.nodes
+          .map((n) => n.target.join(" "))
+          .slice(0, 3)
+          .join(", ")})`,
+      );
+  for (const word of unspokenWords(await page.locator("body").innerText())) found.push(`shows ${word}`);
+  return found;
+}
+
+for (const viewport of [
+  { width: 1440, height: 900 },
+  { width: 390, height: 844 },
+]) {
+  test.describe(`every page at ${viewport.width}×${viewport.height}`, () => {
+    test.use({ viewport });
+
+    test("staff pages fit, pass axe-core and speak the shop's words", async ({ page }) => {
+      test.setTimeout(240_000);
+      await signInWithPassword(page, "owner@sagwise.test", "/shop");
+      const report: Record<string, string[]> = {};
+      for (const path of STAFF_PAGES) {
+        const response = await page.goto(path);
+        expect(response?.status(), path).toBe(200);
+        await page.waitForLoadState("networkidle");
+        const found = await problems(page, viewport.width);
+        if (found.length) report[path] = found;
+      }
+      expect(report).toEqual({});
+    });
+
+    test("public pages fit, pass axe-core and speak the rider's words", async ({ page }) => {
+      test.setTimeout(120_000);
+      const report: Record<string, string[]> = {};
+      for (const path of PUBLIC_PAGES) {
+        const response = await page.goto(path);
+        expect(response?.status(), path).toBe(200);
+        await page.waitForLoadState("networkidle");
+        const found = await problems(page, viewport.width);
+        if (found.length) report[path] = found;
+      }
+      expect(report).toEqual({});
+    });
+  });
+}
 
 test("opening a submitted request changes nothing; Start review is the action", async ({ page, staffApi }) => {
   const api = await staffApi("tuner@sagwise.test");

@@ -11,7 +11,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   return (
     <div className="flex flex-col gap-8">
       <h1 className="text-2xl font-bold">Sign in</h1>
-      <div className="grid gap-6 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 md:grid-cols-2">
         <section aria-labelledby="staff-heading" className="rounded-xl border border-stone-200 bg-white p-5 shadow-sm">
           <h2 id="staff-heading" className="mb-1 text-lg font-semibold">
             Shop staff

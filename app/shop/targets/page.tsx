@@ -8,6 +8,7 @@ import { listClickerRules, listSetupTargets } from "@/db/queries/targets";
 import { requireRole } from "@/lib/auth/guard";
 import { defaultTargetValues } from "@/lib/shop/targets";
 import { DISCIPLINES, SKILL_LEVELS, disciplineSchema, sizingDefaults, skillLevelSchema } from "@/lib/sizing";
+import { ScrollBox } from "@/components/ui/scroll-box";
 
 export const metadata: Metadata = { title: "Setup targets" };
 export const dynamic = "force-dynamic";
@@ -30,7 +31,7 @@ export default async function TargetsPage({ searchParams }: { searchParams: Prom
         engine&apos;s defaults (common practice and values from memory): tune them to your philosophy. Choose a row to
         edit it.
       </p>
-      <div className="overflow-x-auto rounded-xl border border-stone-200 bg-white">
+      <ScrollBox label="Targets per discipline and skill" className="rounded-xl border border-stone-200 bg-white">
         <table className="w-full text-left text-sm tabular-nums">
           <caption className="sr-only">Targets per discipline and skill</caption>
           <thead className="bg-stone-100 text-stone-700">
@@ -94,7 +95,7 @@ export default async function TargetsPage({ searchParams }: { searchParams: Prom
             )}
           </tbody>
         </table>
-      </div>
+      </ScrollBox>
       <TargetEditor
         key={`${discipline}-${skill}`}
         discipline={discipline}

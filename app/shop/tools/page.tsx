@@ -18,7 +18,7 @@ export default async function ToolsPage() {
         Springs and gas-charged shocks store energy. Use a proper spring compressor, release the gas charge only as the
         manufacturer&apos;s service manual says, follow local rules, or have a qualified technician do the work.
       </p>
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
         <CoilSpringTool />
         <div className="flex flex-col gap-4">
           <LoadTestTool />

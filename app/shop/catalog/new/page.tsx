@@ -18,7 +18,7 @@ export default async function NewBikePage() {
         The form starts from the typical values of the “{template.name}” class, not any maker&apos;s data: replace every
         figure with your model&apos;s own (service manual or your measurements).
       </p>
-      <BikeForm initial={{ name: "", bikeClass: "", spec: structuredClone(template.spec) }} />
+      <BikeForm initial={{ name: "", bikeClass: template.id, spec: structuredClone(template.spec) }} />
     </div>
   );
 }

@@ -62,7 +62,7 @@ export default async function OrderPage({ params }: { params: Promise<{ id: stri
         <MoveStage orderId={order.id} orderNumber={order.number} stage={order.stage} serviceType={order.serviceType} />
       </header>
 
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
         <section className={box} aria-labelledby="quote-heading">
           <h2 id="quote-heading" className="text-lg font-semibold">
             Quote {order.acceptedAt ? "(accepted)" : "(not accepted yet)"}
