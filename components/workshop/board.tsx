@@ -22,7 +22,7 @@ export function WorkshopBoard({ orders, today }: { orders: BoardOrder[]; today: 
       role="region"
       aria-label="Workshop board"
       tabIndex={0}
-      className="max-w-full overflow-x-auto rounded-xl border border-stone-200 bg-stone-50 p-2"
+      className="relative max-w-full overflow-x-auto rounded-xl border border-stone-200 bg-stone-50 p-2"
     >
       <div className="flex gap-3">
         {ORDER_STAGES.map((stage) => {

@@ -53,19 +53,28 @@ const PUBLIC_PAGES = [
 async function problems(page: Page, width: number): Promise<string[]> {
   const found: string[] = [];
   const overflow = await page.evaluate((limit) => {
-    if (document.documentElement.scrollWidth <= limit) return [];
-    // Name the widest elements that stick out and are not inside a scroll box of their own.
-    return [...document.body.querySelectorAll<HTMLElement>("*")]
-      .filter((el) => el.getBoundingClientRect().right > limit + 1 && !el.parentElement?.closest(".overflow-x-auto"))
+    const wide = document.documentElement.scrollWidth;
+    if (wide <= limit) return null;
+    // Name the widest elements that stick out: those outside any scroll box, and positioned ones
+    // whose containing block lies outside their scroll box (they escape its clipping).
+    const escapes = (el: HTMLElement) => {
+      const box = el.parentElement?.closest<HTMLElement>(".overflow-x-auto");
+      if (!box) return true;
+      const position = getComputedStyle(el).position;
+      return (position === "absolute" || position === "fixed") && getComputedStyle(box).position === "static";
+    };
+    const named = [...document.body.querySelectorAll<HTMLElement>("*")]
+      .filter((el) => el.getBoundingClientRect().right > limit + 1 && escapes(el))
       .map((el) => ({
-        what: `${el.tagName.toLowerCase()}${el.className && typeof el.className === "string" ? `.${el.className.split(/\s+/).slice(0, 3).join(".")}` : ""}`,
+        what: `${el.tagName.toLowerCase()}${typeof el.className === "string" && el.className ? `.${el.className.split(/\s+/).slice(0, 3).join(".")}` : ""}`,
         right: Math.round(el.getBoundingClientRect().right),
       }))
       .sort((a, b) => b.right - a.right)
       .slice(0, 4)
       .map((e) => `${e.what} reaches ${e.right} px`);
+    return `${wide} px wide: ${named.join("; ") || "nothing named"}`;
   }, width);
-  if (overflow.length) found.push(`wider than ${width} px: ${overflow.join("; ")}`);
+  if (overflow) found.push(`wider than ${width} px, ${overflow}`);
   const axe = await new AxeBuilder({ page }).exclude("iframe").withTags(["wcag2a", "wcag2aa"]).analyze();
   for (const v of axe.violations)
     if (v.impact === "serious" || v.impact === "critical")
