@@ -55,10 +55,10 @@ export function QueueFiltersForm({
     <Form
       role="search"
       aria-label="Filter requests"
-      className="grid grid-cols-1 gap-3 sm:grid-cols-2 lg:grid-cols-4"
+      className="grid grid-cols-2 gap-3 lg:grid-cols-4"
       onSubmit={(e) => e.preventDefault()}
     >
-      <label className={`${labelClass} sm:col-span-2`}>
+      <label className={`${labelClass} col-span-2`}>
         Search rider, e-mail, bike or number
         <input type="search" value={q} onChange={(e) => setQ(e.target.value)} className={selectClass} maxLength={100} />
       </label>

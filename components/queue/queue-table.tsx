@@ -15,6 +15,8 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import type { QueueRow } from "./queue-data";
 import { formatDay } from "@/lib/format";
 import { ScrollBox } from "@/components/ui/scroll-box";
+import { cn } from "@/components/ui/cn";
+import type { QueueSort } from "@/lib/validations/queue";
 
 const SORT_OF: Record<string, { asc: string; desc: string }> = {
   number: { asc: "number_asc", desc: "number" },
@@ -41,6 +43,22 @@ export function sortFrom(sorting: SortingState): string {
 
 const col = createColumnHelper<QueueRow>();
 
+/** Columns shown from the small breakpoint up; a phone keeps number, rider and status side by side. */
+const WIDE_ONLY = new Set(["bikeLabel", "discipline", "assignedTunerName", "createdAt"]);
+const cellClass = (id: string) => (WIDE_ONLY.has(id) ? "hidden sm:table-cell" : "");
+
+/** The order the list is in, in words, for the table's caption. */
+const SORT_WORDS: Record<QueueSort, string> = {
+  newest: "newest first",
+  oldest: "oldest first",
+  number: "number, highest first",
+  number_asc: "number, lowest first",
+  rider: "rider, A to Z",
+  rider_desc: "rider, Z to A",
+  status: "status, in workflow order",
+  status_desc: "status, in reverse workflow order",
+};
+
 const columns = [
   col.accessor("number", { header: "No.", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
   col.accessor("riderName", {
@@ -53,7 +71,11 @@ const columns = [
         >
           {c.getValue()}
         </Link>
-        <span className="text-xs text-stone-600">{c.row.original.riderEmail}</span>
+        <span className="text-xs break-all text-stone-600 sm:break-normal">{c.row.original.riderEmail}</span>
+        {/* On a phone the bike and the day received ride along here; their own columns are wide-screen only. */}
+        <span className="text-xs text-stone-700 sm:hidden">
+          {c.row.original.bikeLabel} · received {formatDay(c.row.original.createdAt)}
+        </span>
         {c.row.original.notices?.length ? (
           <span className="mt-1 flex flex-wrap gap-1">
             {c.row.original.notices.map((k) => (
@@ -113,7 +135,9 @@ export function QueueTable({
   return (
     <ScrollBox label="Setup requests" className="rounded-xl border border-stone-200 bg-white" aria-busy={busy}>
       <table className="w-full text-left text-sm">
-        <caption className="sr-only">Setup requests, sorted by {sort}</caption>
+        <caption className="sr-only">
+          Setup requests, sorted by {SORT_WORDS[sort as QueueSort] ?? SORT_WORDS.newest}
+        </caption>
         <thead className="bg-stone-100 text-stone-700">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
@@ -123,7 +147,7 @@ export function QueueTable({
                   <th
                     key={h.id}
                     scope="col"
-                    className="px-3 py-2"
+                    className={cn("px-3 py-2", cellClass(h.column.id))}
                     aria-sort={dir === "asc" ? "ascending" : dir === "desc" ? "descending" : undefined}
                   >
                     {h.column.getCanSort() ? (
@@ -151,7 +175,7 @@ export function QueueTable({
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-t border-stone-100 hover:bg-pine-50">
               {row.getVisibleCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-2 align-top">
+                <td key={cell.id} className={cn("px-3 py-2 align-top", cellClass(cell.column.id))}>
                   {flexRender(cell.column.columnDef.cell, cell.getContext())}
                 </td>
               ))}
