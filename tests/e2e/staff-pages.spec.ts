@@ -88,6 +88,19 @@ async function problems(page: Page, width: number): Promise<string[]> {
   return found;
 }
 
+/** Opens each page in turn; the problems found, by page (empty when every page is clean). */
+async function walk(page: Page, paths: readonly string[], width: number): Promise<Record<string, string[]>> {
+  const report: Record<string, string[]> = {};
+  for (const path of paths) {
+    const response = await page.goto(path);
+    expect(response?.status(), path).toBe(200);
+    await page.waitForLoadState("networkidle");
+    const found = await problems(page, width);
+    if (found.length) report[path] = found;
+  }
+  return report;
+}
+
 for (const viewport of [
   { width: 1440, height: 900 },
   { width: 390, height: 844 },
@@ -98,28 +111,12 @@ for (const viewport of [
     test("staff pages fit, pass axe-core and speak the shop's words", async ({ page }) => {
       test.setTimeout(240_000);
       await signInWithPassword(page, "owner@sagwise.test", "/shop");
-      const report: Record<string, string[]> = {};
-      for (const path of STAFF_PAGES) {
-        const response = await page.goto(path);
-        expect(response?.status(), path).toBe(200);
-        await page.waitForLoadState("networkidle");
-        const found = await problems(page, viewport.width);
-        if (found.length) report[path] = found;
-      }
-      expect(report).toEqual({});
+      expect(await walk(page, STAFF_PAGES, viewport.width)).toEqual({});
     });
 
     test("public pages fit, pass axe-core and speak the rider's words", async ({ page }) => {
       test.setTimeout(120_000);
-      const report: Record<string, string[]> = {};
-      for (const path of PUBLIC_PAGES) {
-        const response = await page.goto(path);
-        expect(response?.status(), path).toBe(200);
-        await page.waitForLoadState("networkidle");
-        const found = await problems(page, viewport.width);
-        if (found.length) report[path] = found;
-      }
-      expect(report).toEqual({});
+      expect(await walk(page, PUBLIC_PAGES, viewport.width)).toEqual({});
     });
   });
 }
