@@ -5,56 +5,11 @@
 // table and stops everything. Prints only; never asserts on time.
 // Needs a production build (`npm run build`); run alone with `npx tsx bench/http.ts`.
 import autocannon from "autocannon";
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
-import net from "node:net";
-import os from "node:os";
-import path from "node:path";
 import { DEMO_REQUESTS, stableUuid } from "../db/seed-data";
+import { BENCH_PASSWORD as PASSWORD, hasProductionBuild, startBenchServer } from "./server";
 
 const CONNECTIONS = 8;
 const SECONDS = Number(process.env.BENCH_HTTP_SECONDS ?? 6);
-const PASSWORD = process.env.DEMO_PASSWORD ?? "sagwise-demo";
-const SECRET = "bench-secret-bench-secret-bench-secret-0123";
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.on("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() =>
-        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
-      );
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess, what: string) {
-  const deadline = Date.now() + 90_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`${what} exited with ${child.exitCode}`);
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // Not listening yet.
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`${what} did not answer at ${url}`);
-}
-
-/** Stops a detached child and its group; resolves once it has exited. */
-function stop(child: ChildProcess): Promise<void> {
-  if (!child.pid || child.exitCode !== null) return Promise.resolve();
-  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
-  try {
-    process.kill(-child.pid, "SIGTERM");
-  } catch {
-    return Promise.resolve();
-  }
-  return exited;
-}
 
 type Measured = { name: string; rps: number; p50: number; p99: number; non2xx: number; errors: number };
 
@@ -70,47 +25,13 @@ async function measure(name: string, options: autocannon.Options): Promise<Measu
   };
 }
 
-if (!existsSync(path.join(".next", "BUILD_ID"))) {
+if (!hasProductionBuild()) {
   console.log("http benchmark: no production build here; run `npm run build` first. Skipped.");
 } else {
-  const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-bench-"));
-  const [appPort, mailPort] = await Promise.all([freePort(), freePort()]);
-  const base = `http://127.0.0.1:${appPort}`;
-  const env: NodeJS.ProcessEnv = {
-    ...process.env,
-    NODE_ENV: "production",
-    PORT: String(appPort),
-    DATA_DIR: dataDir,
-    DATABASE_URL: "",
-    BETTER_AUTH_SECRET: SECRET,
-    BETTER_AUTH_URL: base,
-    RESEND_BASE_URL: `http://127.0.0.1:${mailPort}`,
-    MAIL_FAKE_PORT: String(mailPort),
-    MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
-    // Every submission comes from its own invented client address (X-Forwarded-For below), as riders
-    // do, so the per-client limits of a real shop do not turn the benchmark into a 429 count.
-    TRUST_PROXY_HOPS: "1",
-  };
-  const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "ignore" });
-  if (seeded.status !== 0) throw new Error("Seeding the benchmark database failed");
-  const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true, stdio: "ignore" });
   // BENCH_HTTP_PROFILE=dir writes a V8 CPU profile of the server there (for finding where time goes).
-  const profile = process.env.BENCH_HTTP_PROFILE;
-  const profiling = profile ? ["--cpu-prof", `--cpu-prof-dir=${profile}`] : [];
-  const app = spawn("node", [...profiling, "--import", "tsx", "scripts/server.ts"], {
-    env,
-    detached: true,
-    stdio: "ignore",
-  });
-  const hardStop = setTimeout(() => {
-    console.error("http benchmark: over its time bound, stopping");
-    void stop(app);
-    void stop(mail);
-    process.exit(1);
-  }, 10 * 60_000);
+  const server = await startBenchServer("http benchmark", { profileDir: process.env.BENCH_HTTP_PROFILE });
+  const base = server.base;
   try {
-    await waitFor(`${base}/api/health`, app, "server");
-
     let address = 0;
     const clientAddress = () => {
       address += 1;
@@ -223,8 +144,6 @@ if (!existsSync(path.join(".next", "BUILD_ID"))) {
     }
     console.log(`baseline: mean of the two health runs, ${baseline.toFixed(1)} req/s`);
   } finally {
-    clearTimeout(hardStop);
-    await Promise.all([stop(app), stop(mail)]);
-    rmSync(dataDir, { recursive: true, force: true, maxRetries: 5 });
+    await server.stop();
   }
 }

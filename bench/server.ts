@@ -1,0 +1,113 @@
+// A seeded production server for a benchmark: `scripts/server.ts` (the app as `npm start` runs it)
+// on a loopback port with its own temporary data folder and the mail fake beside it. It needs a
+// production build (`npm run build`); `stop()` ends both processes and removes the folder, and a
+// hard time bound stops them whatever the benchmark does.
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import net from "node:net";
+import os from "node:os";
+import path from "node:path";
+
+export const BENCH_PASSWORD = process.env.DEMO_PASSWORD ?? "sagwise-demo";
+const SECRET = "bench-secret-bench-secret-bench-secret-0123";
+
+export function hasProductionBuild(): boolean {
+  return existsSync(path.join(".next", "BUILD_ID"));
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = net.createServer();
+    server.on("error", reject);
+    server.listen(0, "127.0.0.1", () => {
+      const address = server.address();
+      server.close(() =>
+        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
+      );
+    });
+  });
+}
+
+async function waitFor(url: string, child: ChildProcess, what: string) {
+  const deadline = Date.now() + 90_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`${what} exited with ${child.exitCode}`);
+    try {
+      if ((await fetch(url)).ok) return;
+    } catch {
+      // Not listening yet.
+    }
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  throw new Error(`${what} did not answer at ${url}`);
+}
+
+/** Stops a detached child and its group; resolves once it has exited. */
+function stopChild(child: ChildProcess): Promise<void> {
+  if (!child.pid || child.exitCode !== null) return Promise.resolve();
+  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
+  try {
+    process.kill(-child.pid, "SIGTERM");
+  } catch {
+    return Promise.resolve();
+  }
+  return exited;
+}
+
+export interface BenchServer {
+  base: string;
+  stop(): Promise<void>;
+}
+
+/**
+ * Seeds a fresh data folder and starts the app and the mail fake. `profileDir` writes a V8 CPU
+ * profile of the app there; `timeBoundMs` is when everything is stopped and the process exits.
+ */
+export async function startBenchServer(
+  name: string,
+  { profileDir, timeBoundMs = 10 * 60_000 }: { profileDir?: string; timeBoundMs?: number } = {},
+): Promise<BenchServer> {
+  const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-bench-"));
+  const [appPort, mailPort] = await Promise.all([freePort(), freePort()]);
+  const base = `http://127.0.0.1:${appPort}`;
+  const env: NodeJS.ProcessEnv = {
+    ...process.env,
+    NODE_ENV: "production",
+    PORT: String(appPort),
+    DATA_DIR: dataDir,
+    DATABASE_URL: "",
+    BETTER_AUTH_SECRET: SECRET,
+    BETTER_AUTH_URL: base,
+    RESEND_BASE_URL: `http://127.0.0.1:${mailPort}`,
+    MAIL_FAKE_PORT: String(mailPort),
+    MAIL_FAKE_DIR: path.join(dataDir, "mail-fake"),
+    // Every submission comes from its own invented client address (X-Forwarded-For), as riders do,
+    // so the per-client limits of a real shop do not turn a benchmark into a 429 count.
+    TRUST_PROXY_HOPS: "1",
+  };
+  const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "ignore" });
+  if (seeded.status !== 0) throw new Error("Seeding the benchmark database failed");
+  const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true, stdio: "ignore" });
+  const profiling = profileDir ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : [];
+  const app = spawn("node", [...profiling, "--import", "tsx", "scripts/server.ts"], {
+    env,
+    detached: true,
+    stdio: "ignore",
+  });
+  const stop = async () => {
+    clearTimeout(hardStop);
+    await Promise.all([stopChild(app), stopChild(mail)]);
+    rmSync(dataDir, { recursive: true, force: true, maxRetries: 5 });
+  };
+  const hardStop = setTimeout(() => {
+    console.error(`${name}: over its time bound, stopping`);
+    void stop().finally(() => process.exit(1));
+  }, timeBoundMs);
+  try {
+    await waitFor(`${base}/api/health`, app, "server");
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+  return { base, stop };
+}
