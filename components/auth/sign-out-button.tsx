@@ -1,23 +1,14 @@
-"use client";
-
-import { useRouter } from "next/navigation";
 import { Button } from "@/components/ui/button";
-import { authClient } from "@/lib/auth/client";
+import { signOutAction } from "@/lib/auth/actions";
 
 /** Signs out and goes to `next` (staff: the sign-in page; riders: the landing page). */
-export function SignOutButton({ next = "/sign-in" }: { next?: string }) {
-  const router = useRouter();
+export function SignOutButton({ next = "/sign-in" }: { next?: "/" | "/sign-in" }) {
   return (
-    <Button
-      variant="ghost"
-      className="text-white hover:bg-pine-800"
-      onClick={async () => {
-        await authClient.signOut();
-        router.replace(next);
-        router.refresh();
-      }}
-    >
-      Sign out
-    </Button>
+    <form action={signOutAction}>
+      <input type="hidden" name="next" value={next} />
+      <Button type="submit" variant="ghost" className="text-white hover:bg-pine-800">
+        Sign out
+      </Button>
+    </form>
   );
 }

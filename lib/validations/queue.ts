@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { REQUEST_STATUSES } from "@/lib/requests/status";
 import { text } from "./text";
-import { disciplineSchema } from "@/lib/sizing";
+import { disciplineSchema } from "@/lib/sizing/vocab";
 
 export const QUEUE_SORTS = [
   "newest",

@@ -11,7 +11,7 @@ import {
   ridingStyleSchema,
   skillLevelSchema,
   terrainSchema,
-} from "@/lib/sizing";
+} from "@/lib/sizing/vocab";
 import { emailSchema } from "./auth";
 import { typedNumber } from "./number";
 

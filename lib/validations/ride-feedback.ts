@@ -1,7 +1,7 @@
 // After the first rides: how the bike rides now, per end (the request form's complaint list) and in
 // the rider's words; and the tuner's one-step revision from it.
 import { z } from "zod";
-import { complaintSchema } from "@/lib/sizing";
+import { complaintSchema } from "@/lib/sizing/vocab";
 import { statusTokenSchema } from "./status";
 import { text } from "./text";
 
