@@ -3,7 +3,7 @@
 // The rider's setup request, one step at a time. Every change goes to the draft in localStorage;
 // the request is sent once from the review step and the draft is cleared only after a 201.
 import { useRouter } from "next/navigation";
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { startTransition, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { Providers } from "@/components/providers";
 import { Button } from "@/components/ui/button";
 import { callApi } from "@/lib/api-client";
@@ -59,11 +59,13 @@ export function RequestForm({
     const found = loadDraft();
     const start = found ?? emptyDraft();
     if (prefillId) start.values.bike = { ...start.values.bike, modelId: prefillId, bikeName: prefillName ?? "" };
-    // Reading localStorage can only happen in the browser, after the first render.
-    // eslint-disable-next-line react-hooks/set-state-in-effect
-    setDraft(start);
-    setRestored(Boolean(found && Object.keys(found.values).length));
-    setLostPhotos(found?.photoCount ?? 0);
+    // Reading localStorage can only happen in the browser, after the first render. Mounting the
+    // step is a transition, so React renders it in slices and the page stays responsive meanwhile.
+    startTransition(() => {
+      setDraft(start);
+      setRestored(Boolean(found && Object.keys(found.values).length));
+      setLostPhotos(found?.photoCount ?? 0);
+    });
   }, [prefillId, prefillName]);
 
   // Moving between steps puts the focus on the new step's heading (not on first load).
