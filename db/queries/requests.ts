@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, gte, isNull, like, lt, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, or, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { containsPattern } from "./like";
 import { REQUEST_STATUSES, setupRequests, user, type RequestStatus } from "@/db/schema";
@@ -88,6 +88,16 @@ function queueConditions(query: QueueQuery, callerId?: string): SQL | undefined 
 export async function listQueue(query: QueueQuery, callerId?: string) {
   const db = await getDb();
   const where = queueConditions(query, callerId);
+  const order = QUEUE_ORDER[query.sort];
+  // The page's rows are chosen first (an index walk, even past a deep offset), and only those
+  // 25-odd rows are joined to their tuner: a join before the offset would run for every skipped row.
+  const pageIds = db
+    .select({ id: setupRequests.id })
+    .from(setupRequests)
+    .where(where)
+    .orderBy(...order)
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
   const [items, totals] = await Promise.all([
     db
       .select({
@@ -101,10 +111,8 @@ export async function listQueue(query: QueueQuery, callerId?: string) {
       })
       .from(setupRequests)
       .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
-      .where(where)
-      .orderBy(...QUEUE_ORDER[query.sort])
-      .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize),
+      .where(inArray(setupRequests.id, pageIds))
+      .orderBy(...order),
     db.select({ n: count() }).from(setupRequests).where(where),
   ]);
   return { items, total: Number(totals[0]?.n ?? 0) };

@@ -74,8 +74,15 @@ export const setupRequests = pgTable(
     index("setup_requests_tuner_idx").on(t.assignedTunerId, t.createdAt),
     index("setup_requests_discipline_idx").on(t.discipline, t.createdAt),
     index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt),
+    // Discipline and class together, the queue's usual pair of filters, newest first.
+    index("setup_requests_discipline_class_idx").on(t.discipline, t.bikeClass, t.createdAt),
     index("setup_requests_rider_name_idx").on(sql`lower(${t.riderName})`),
-    index("setup_requests_search_idx").using("gin", sql`${t.searchText} gin_trgm_ops`),
+    // Without a pending list (GIN's fastupdate): new rows go straight into the index, so a search
+    // never scans rows that only VACUUM or autoanalyze would have merged in (PostgreSQL manual, GIN
+    // "fast update technique"; PGlite runs no autovacuum at all).
+    index("setup_requests_search_idx")
+      .using("gin", sql`${t.searchText} gin_trgm_ops`)
+      .with({ fastupdate: false }),
   ],
 );
 
