@@ -3,12 +3,10 @@
 // so the e-mail exists exactly when the change it reports was committed. The worker sends it after
 // the commit and writes the email.sent / email.failed audit event in the actor's name; a failed send
 // never undoes the business step that caused it.
-import { eq } from "drizzle-orm";
 import type { Executor } from "@/db/client";
-import { findEmailWording } from "@/db/queries/email-wording";
-import { getShopName } from "@/db/queries/settings";
+import { findRiderEmailContext } from "@/db/queries/notices";
+import { FALLBACK_SHOP_NAME } from "@/db/queries/settings";
 import { createStatusLink } from "@/db/queries/status-links";
-import { setupRequests } from "@/db/schema";
 import { appBaseUrl } from "@/lib/env";
 import { queueTemplateEmail, type QueuedMail } from "@/lib/mail";
 import { sheetPath, statusPath } from "@/lib/requests/token";
@@ -33,15 +31,7 @@ export async function notifyRider(
   notice: RiderNotice,
   options: NotifyOptions = {},
 ): Promise<QueuedMail> {
-  const [request] = await tx
-    .select({
-      number: setupRequests.number,
-      riderName: setupRequests.riderName,
-      riderEmail: setupRequests.riderEmail,
-      bikeLabel: setupRequests.bikeLabel,
-    })
-    .from(setupRequests)
-    .where(eq(setupRequests.id, requestId));
+  const request = await findRiderEmailContext(tx, requestId, notice.kind);
   if (!request) throw new Error(`notifyRider: no request ${requestId}`);
 
   const token = options.statusToken ?? (await createStatusLink(requestId, tx));
@@ -49,8 +39,8 @@ export async function notifyRider(
   const statusUrl = `${base}${statusPath(token)}`;
   const common = {
     // The shop's own heading and opening paragraph for this e-mail, when the owner wrote some.
-    wording: await findEmailWording(notice.kind, tx),
-    shopName: await getShopName(tx),
+    wording: request.wording,
+    shopName: request.shopName ?? FALLBACK_SHOP_NAME,
     riderName: request.riderName,
     requestNumber: request.number,
     statusUrl,

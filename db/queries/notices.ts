@@ -2,10 +2,11 @@
 // the unseen counts the workspace shows. Data access only; lib/notify-staff.ts decides.
 import { and, count, eq, inArray, isNull } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
-import { setupRequests, shopSettings, staffNotices, user, type StaffNoticeKind } from "@/db/schema";
+import { emailWording, setupRequests, shopSettings, staffNotices, user, type StaffNoticeKind } from "@/db/schema";
 
 /** The request's number and rider, its assigned tuner (when active) and the shop's own address. */
 export async function findNoticeRecipient(tx: Executor, requestId: string) {
+  // One query: the settings row (there is one, id 1) comes along with the request.
   const [row] = await tx
     .select({
       number: setupRequests.number,
@@ -14,13 +15,40 @@ export async function findNoticeRecipient(tx: Executor, requestId: string) {
       tunerEmail: user.email,
       tunerName: user.name,
       tunerBanned: user.banned,
+      shopEmail: shopSettings.email,
+      shopName: shopSettings.name,
     })
     .from(setupRequests)
     .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
+    .leftJoin(shopSettings, eq(shopSettings.id, 1))
+    .where(eq(setupRequests.id, requestId));
+  return row ?? null;
+}
+
+/**
+ * What a rider's e-mail about the request needs, in one query: the request's number, rider and bike,
+ * the shop's name (null before the shop has set one) and the owner's wording for `template` (null
+ * when the owner wrote none).
+ */
+export async function findRiderEmailContext(tx: Executor, requestId: string, template: string) {
+  const [row] = await tx
+    .select({
+      number: setupRequests.number,
+      riderName: setupRequests.riderName,
+      riderEmail: setupRequests.riderEmail,
+      bikeLabel: setupRequests.bikeLabel,
+      shopName: shopSettings.name,
+      wordingHeading: emailWording.heading,
+      wordingIntro: emailWording.intro,
+      hasWording: emailWording.template,
+    })
+    .from(setupRequests)
+    .leftJoin(shopSettings, eq(shopSettings.id, 1))
+    .leftJoin(emailWording, eq(emailWording.template, template))
     .where(eq(setupRequests.id, requestId));
   if (!row) return null;
-  const [shop] = await tx.select({ email: shopSettings.email, name: shopSettings.name }).from(shopSettings).limit(1);
-  return { ...row, shopEmail: shop?.email ?? null, shopName: shop?.name ?? null };
+  const { wordingHeading, wordingIntro, hasWording, ...request } = row;
+  return { ...request, wording: hasWording === null ? null : { heading: wordingHeading, intro: wordingIntro } };
 }
 
 export async function insertStaffNotice(tx: Executor, values: typeof staffNotices.$inferInsert) {

@@ -8,9 +8,12 @@ export async function getShopSettings(executor?: Executor) {
   return rows[0] ?? null;
 }
 
+/** Stands for the shop's name before the shop has set one. */
+export const FALLBACK_SHOP_NAME = "Your suspension shop";
+
 /** The shop's name for e-mails and pages; a neutral word before the shop has set one. */
 export async function getShopName(executor?: Executor): Promise<string> {
-  return (await getShopSettings(executor))?.name ?? "Your suspension shop";
+  return (await getShopSettings(executor))?.name ?? FALLBACK_SHOP_NAME;
 }
 
 export type ShopSettingsValues = Omit<typeof shopSettings.$inferInsert, "id" | "updatedAt">;

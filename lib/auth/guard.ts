@@ -3,6 +3,7 @@
 // requireRole or requireSession with `{ page }` themselves.
 import { headers as nextHeaders } from "next/headers";
 import { forbidden, redirect } from "next/navigation";
+import { cache } from "react";
 import { getAuth } from "./server";
 import { isRole, type Role } from "./roles";
 
@@ -32,13 +33,22 @@ async function requestHeaders(given?: Headers): Promise<Headers> {
   return copy;
 }
 
-/** The signed-in user, or null. Banned (deactivated) users have no session. */
-export async function getSessionUser(given?: Headers): Promise<SessionUser | null> {
+async function lookUpSessionUser(given?: Headers): Promise<SessionUser | null> {
   const auth = await getAuth();
   const session = await auth.api.getSession({ headers: await requestHeaders(given) });
   if (!session) return null;
   const { id, name, email, role } = session.user as typeof session.user & { role?: string };
   return { id, name, email, role: isRole(role) ? role : "rider" };
+}
+
+// A page's layout and the page itself both guard, in the same server render: React's cache() gives
+// them one session lookup per request (and none is shared between requests). Only the page-side
+// call, which reads the request's own headers, is cached; a route handler passes its headers.
+const currentSessionUser = cache(() => lookUpSessionUser());
+
+/** The signed-in user, or null. Banned (deactivated) users have no session. */
+export async function getSessionUser(given?: Headers): Promise<SessionUser | null> {
+  return given ? lookUpSessionUser(given) : currentSessionUser();
 }
 
 interface GuardOptions {

@@ -1,5 +1,6 @@
 // React e-mail element → the html and plain-text parts of one message.
-import { render, toPlainText } from "@react-email/render";
+import { compile } from "html-to-text";
+import { plainTextSelectors, render } from "@react-email/render";
 import type { ReactElement } from "react";
 
 export interface RenderedEmail {
@@ -7,9 +8,13 @@ export interface RenderedEmail {
   text: string;
 }
 
+// react-email's own converter options (what its toPlainText passes to html-to-text), compiled once:
+// compiling them is most of a conversion's cost, and toPlainText compiles them again on every call.
+// It keeps link targets beside their text ("Sign in https://…"), so the plain-text part still
+// carries every link.
+const toPlainText = compile({ wordwrap: false, selectors: plainTextSelectors });
+
 export async function renderEmail(element: ReactElement): Promise<RenderedEmail> {
   const html = await render(element);
-  // Rendered once; react-email's own converter keeps link targets beside their text
-  // ("Sign in https://…"), so the plain-text part still carries every link.
   return { html, text: toPlainText(html).trim() };
 }

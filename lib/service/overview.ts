@@ -88,10 +88,12 @@ export interface ServiceRow {
 
 /** Every approved setup (or one) with its due dates. */
 export async function loadServiceRows(now = new Date(), requestId?: string): Promise<ServiceRow[]> {
-  const config = await loadServiceConfig();
   const subjects = (await listServiceSubjects(requestId)).filter(
     (s): s is ServiceSubject & { approvedAt: Date } => s.approvedAt !== null,
   );
+  // No approved sheet (a request still in review): no clock runs, so the shop's intervals are not read.
+  if (!subjects.length) return [];
+  const config = await loadServiceConfig();
   const ids = subjects.map((s) => s.requestId);
   const [shipped, logs] = await Promise.all([findOrderShipDates(ids), listHourLogs(ids)]);
   return subjects.map((subject) => ({
