@@ -81,6 +81,10 @@ export async function queueMail(
         contentType: a.contentType,
       })) ?? null,
     audit: options.audit ?? null,
+    // Due from this moment by the clock the senders compare with (a JavaScript Date, whole
+    // milliseconds). The database's default now() has microseconds, so a drain in the same
+    // millisecond as the insert found the row "not yet due" and left it for the next poll.
+    nextAttemptAt: new Date(),
   });
   return { status: "queued", outboundEmailId: row.id };
 }
