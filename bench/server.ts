@@ -2,56 +2,17 @@
 // on a loopback port with its own temporary data folder and the mail fake beside it. It needs a
 // production build (`npm run build`); `stop()` ends both processes and removes the folder, and a
 // hard time bound stops them whatever the benchmark does.
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
-import net from "node:net";
 import os from "node:os";
 import path from "node:path";
+import { freePort, stopChild, waitFor } from "../scripts/child-processes";
 
 export const BENCH_PASSWORD = process.env.DEMO_PASSWORD ?? "sagwise-demo";
 const SECRET = "bench-secret-bench-secret-bench-secret-0123";
 
 export function hasProductionBuild(): boolean {
   return existsSync(path.join(".next", "BUILD_ID"));
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.on("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() =>
-        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
-      );
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess, what: string) {
-  const deadline = Date.now() + 90_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`${what} exited with ${child.exitCode}`);
-    try {
-      if ((await fetch(url)).ok) return;
-    } catch {
-      // Not listening yet.
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`${what} did not answer at ${url}`);
-}
-
-/** Stops a detached child and its group; resolves once it has exited. */
-function stopChild(child: ChildProcess): Promise<void> {
-  if (!child.pid || child.exitCode !== null) return Promise.resolve();
-  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
-  try {
-    process.kill(-child.pid, "SIGTERM");
-  } catch {
-    return Promise.resolve();
-  }
-  return exited;
 }
 
 export interface BenchServer {

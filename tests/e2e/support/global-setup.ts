@@ -2,50 +2,12 @@
 // `npm run build`) on free ports with a temporary DATA_DIR. Their URLs reach the tests through the
 // environment (Playwright starts its workers after global setup, with this process's environment).
 // The returned function is Playwright's global teardown: it stops both and removes the data.
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdtempSync, rmSync } from "node:fs";
-import net from "node:net";
 import os from "node:os";
 import path from "node:path";
+import { freePort, stopChild, waitFor } from "../../../scripts/child-processes";
 import { E2E_AUTH_SECRET, E2E_ENV } from "./env";
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.on("error", reject);
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() =>
-        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
-      );
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess, what: string) {
-  const deadline = Date.now() + 90_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`${what} exited with ${child.exitCode}`);
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-    } catch {
-      // Not listening yet.
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error(`${what} did not answer at ${url}`);
-}
-
-function stop(child: ChildProcess) {
-  if (!child.pid || child.exitCode !== null) return;
-  try {
-    // Detached: the negative pid reaches npx and the server it started.
-    process.kill(-child.pid, "SIGTERM");
-  } catch {
-    // Already gone.
-  }
-}
 
 export default async function globalSetup() {
   if (!existsSync(path.join(".next", "BUILD_ID"))) {
@@ -92,10 +54,8 @@ export default async function globalSetup() {
     child.stdout?.on("data", output(name));
     child.stderr?.on("data", (chunk: Buffer) => process.stderr.write(`[${name}] ${chunk}`));
   }
-  const teardown = () => {
-    stop(app);
-    stop(mail);
-    stop(payments);
+  const teardown = async () => {
+    await Promise.all([stopChild(app), stopChild(mail), stopChild(payments)]);
     rmSync(dataDir, { recursive: true, force: true });
   };
   try {
@@ -103,7 +63,7 @@ export default async function globalSetup() {
     await waitFor(`${paymentsUrl}/payments`, payments, "payments fake");
     await waitFor(`${baseUrl}/api/health`, app, "next start");
   } catch (error) {
-    teardown();
+    await teardown();
     throw error;
   }
 
