@@ -18,7 +18,7 @@ test.describe("staff", () => {
     await expect(page).toHaveURL((url) => url.pathname === "/sign-in" && url.searchParams.get("next") === "/shop");
   });
 
-  test("a wrong password is refused with a message, the right one opens the queue", async ({ page }) => {
+  test("a wrong password is refused, the right one opens the queue, signing out closes it", async ({ page }) => {
     await page.goto("/sign-in?next=/shop");
     const staff = page.getByRole("form", { name: "Staff sign-in" });
     await staff.getByLabel("E-mail").fill("tuner@sagwise.test");
@@ -30,6 +30,12 @@ test.describe("staff", () => {
     await staff.getByRole("button", { name: "Sign in" }).click();
     await expect(page).toHaveURL("/shop");
     await expect(page.getByRole("heading", { level: 1 })).toHaveText("Setup requests");
+
+    // Signing out (a form post to a server action) ends the session: the workspace asks to sign in again.
+    await page.getByRole("banner").getByRole("button", { name: "Sign out" }).click();
+    await expect(page).toHaveURL("/sign-in");
+    await page.goto("/shop");
+    await expect(page).toHaveURL((url) => url.pathname === "/sign-in" && url.searchParams.get("next") === "/shop");
   });
 });
 
