@@ -70,7 +70,7 @@ export function TargetPreview({
         </p>
       ) : null}
       {result ? (
-        <ScrollBox label="Preview">
+        <ScrollBox label="Preview for a reference rider">
           <table className="max-w-xl text-left text-sm tabular-nums">
             <caption className="text-left text-stone-600">
               {bike.name}, moderate style, medium jumps, no complaints
