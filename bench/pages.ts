@@ -88,7 +88,7 @@ if (!hasProductionBuild()) {
         chromeFlags: ["--headless=new", "--no-sandbox", "--disable-gpu"],
       });
       try {
-        console.log(`Lighthouse ${"12.2.3"} mobile, median of ${RUNS} runs`);
+        console.log(`Lighthouse 12.2.3 mobile, median of ${RUNS} runs`);
         console.log(
           `${"page".padEnd(12)}${"perf".padStart(6)}${"best pr.".padStart(10)}${"a11y".padStart(6)}${"TBT ms".padStart(8)}  below 100`,
         );
