@@ -140,6 +140,8 @@ export function BikeForm({ initial, id }: { initial: BikeFormValues; id?: string
             <select
               id="bikeClassChoice"
               className="min-h-11 rounded-lg border border-stone-300 bg-white px-3 text-base"
+              aria-invalid={classChoice !== OWN_CLASS && errors.bikeClass ? true : undefined}
+              aria-describedby={classChoice !== OWN_CLASS && errors.bikeClass ? "bikeClass-error" : undefined}
               value={classChoice}
               onChange={(e) => {
                 setClassChoice(e.target.value);
