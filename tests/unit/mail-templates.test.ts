@@ -31,6 +31,19 @@ describe.each(emailTemplateNames)("template %s", (name) => {
     expect(html).not.toMatch(/<img|<link|<script|@import|url\(/i);
   });
 
+  it("is one XHTML 1.0 Transitional document with no hydration comments", async () => {
+    // The doctype is W3C's for XHTML 1.0 Transitional (https://www.w3.org/TR/xhtml1/#dtds), the one
+    // react-email writes. The only comments are Outlook's conditional ones (`<!--[if mso]>…<![endif]-->`,
+    // Microsoft's syntax for its Word-based renderer); React's hydration markers (`<!-- -->`,
+    // `<!--$-->`) mean nothing in a mail.
+    const { html } = await renderTemplate(name, demo as never);
+    expect(html.startsWith('<!DOCTYPE html PUBLIC "-//W3C//DTD XHTML 1.0 Transitional//EN"')).toBe(true);
+    expect(html.match(/<!DOCTYPE/gi)).toHaveLength(1);
+    const comments = html.match(/<!--[\s\S]*?-->/g) ?? [];
+    expect(comments.filter((c) => !c.startsWith("<!--[if mso]>"))).toEqual([]);
+    expect(html.trimEnd().endsWith("</html>")).toBe(true);
+  });
+
   it("escapes the shop's name", async () => {
     const { html, subject } = await renderTemplate(name, { ...demo, shopName: 'Ride <b>"Fast"</b>' } as never);
     expect(html).not.toContain("<b>");
