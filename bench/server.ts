@@ -3,7 +3,7 @@
 // production build (`npm run build`); `stop()` ends both processes and removes the folder, and a
 // hard time bound stops them whatever the benchmark does.
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdtempSync, readFileSync, rmSync } from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { freePort, stopChild, waitFor } from "../scripts/child-processes";
@@ -17,19 +17,49 @@ export function hasProductionBuild(): boolean {
 
 export interface BenchServer {
   base: string;
+  /** The app's inspector port when started with `inspectPort` (see bench/inspector.ts). */
+  inspectPort?: number;
+  /**
+   * CPU seconds the app process has used so far (user + system, from /proc on Linux; null
+   * elsewhere). Per request it drifts far less with the machine's other load than throughput does.
+   */
+  cpuSeconds(): number | null;
   stop(): Promise<void>;
+}
+
+// Clock ticks per second of /proc/<pid>/stat's utime and stime: USER_HZ, 100 on Linux
+// (proc(5): "measured in clock ticks (divide by sysconf(_SC_CLK_TCK))").
+const CLOCK_TICKS = Number(spawnSync("getconf", ["CLK_TCK"], { encoding: "utf8" }).stdout.trim()) || 100;
+
+function cpuSecondsOf(pid: number | undefined): number | null {
+  if (!pid) return null;
+  try {
+    const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+    // Fields after the command name, which is in parentheses and may itself hold spaces.
+    const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+    // proc(5) numbers utime and stime 14 and 15, counting from pid = 1; fields[0] here is field 3.
+    return (Number(fields[11]) + Number(fields[12])) / CLOCK_TICKS;
+  } catch {
+    return null;
+  }
 }
 
 /**
  * Seeds a fresh data folder and starts the app and the mail fake. `profileDir` writes a V8 CPU
- * profile of the app there; `timeBoundMs` is when everything is stopped and the process exits.
+ * profile of the app's whole life there; `inspectPort` opens the app's inspector on that loopback
+ * port instead, for profiles of chosen spans (bench/inspector.ts); `timeBoundMs` is when everything
+ * is stopped and the process exits.
  */
 export async function startBenchServer(
   name: string,
-  { profileDir, timeBoundMs = 10 * 60_000 }: { profileDir?: string; timeBoundMs?: number } = {},
+  {
+    profileDir,
+    inspectPort,
+    timeBoundMs = 10 * 60_000,
+  }: { profileDir?: string; inspectPort?: boolean; timeBoundMs?: number } = {},
 ): Promise<BenchServer> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-bench-"));
-  const [appPort, mailPort] = await Promise.all([freePort(), freePort()]);
+  const [appPort, mailPort, debugPort] = await Promise.all([freePort(), freePort(), freePort()]);
   const base = `http://127.0.0.1:${appPort}`;
   const env: NodeJS.ProcessEnv = {
     ...process.env,
@@ -49,7 +79,10 @@ export async function startBenchServer(
   const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "ignore" });
   if (seeded.status !== 0) throw new Error("Seeding the benchmark database failed");
   const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true, stdio: "ignore" });
-  const profiling = profileDir ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : [];
+  const profiling = [
+    ...(profileDir ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : []),
+    ...(inspectPort ? [`--inspect=127.0.0.1:${debugPort}`] : []),
+  ];
   const app = spawn("node", [...profiling, "--import", "tsx", "scripts/server.ts"], {
     env,
     detached: true,
@@ -70,5 +103,10 @@ export async function startBenchServer(
     await stop();
     throw error;
   }
-  return { base, stop };
+  return {
+    base,
+    inspectPort: inspectPort ? debugPort : undefined,
+    cpuSeconds: () => cpuSecondsOf(app.pid),
+    stop,
+  };
 }
