@@ -6,6 +6,7 @@ import { containsPattern } from "./like";
 import { auditEvents, bikeModels, recommendationVersions, setupRequests, uploads } from "@/db/schema";
 import { createStatusLink } from "./status-links";
 import { specCalibrationFor } from "./calibrations";
+import { shopDataCache, type ShopDataCache } from "./shop-data-cache";
 import { bikeSpecSchema, type BikeSpecInput, type Recommendation, type SizingInput } from "@/lib/sizing";
 
 /** The active catalog (retired models hidden), optionally filtered by a name or class fragment. */
@@ -44,9 +45,14 @@ export interface CatalogBike {
 
 /**
  * A model the rider picked, only if it is still in the active catalog, with the calibration the
- * admin applied to it (if any) in place of whatever the stored spec says.
+ * admin applied to it (if any) in place of whatever the stored spec says. Served from the shop's
+ * cached data (db/queries/shop-data-cache.ts) while the catalog is unchanged.
  */
-export async function findActiveBike(id: string): Promise<CatalogBike | null> {
+export async function findActiveBike(id: string, cache?: ShopDataCache): Promise<CatalogBike | null> {
+  return (cache ?? (await shopDataCache())).get(`active-bike:${id}`, () => readActiveBike(id));
+}
+
+async function readActiveBike(id: string): Promise<CatalogBike | null> {
   const db = await getDb();
   const [row] = await db
     .select({ id: bikeModels.id, name: bikeModels.name, bikeClass: bikeModels.bikeClass, spec: bikeModels.spec })

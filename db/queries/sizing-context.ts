@@ -5,6 +5,7 @@ import { and, asc, eq, gt } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { bikeModels, clickerRules, setupTargets, shopSettings, springStock } from "@/db/schema";
 import { specCalibrationFor } from "./calibrations";
+import { shopDataCache, type ShopDataCache } from "./shop-data-cache";
 import type { ShopSizingContext } from "@/lib/requests/sizing-input";
 import {
   bikeSpecSchema,
@@ -33,11 +34,23 @@ export async function loadBikeSpec(
   };
 }
 
+/**
+ * The shop's side of a sizing for this bike, discipline and skill. Served from the shop's cached
+ * data (db/queries/shop-data-cache.ts) while targets, stock, rules and settings are unchanged.
+ */
 export async function loadShopSizingContext(
   bike: BikeSpecInput,
   discipline: Discipline,
   skill: SkillLevel,
+  cache?: ShopDataCache,
 ): Promise<ShopSizingContext> {
+  const shop = await (cache ?? (await shopDataCache())).get(`sizing:${discipline}:${skill}`, () =>
+    readShopSide(discipline, skill),
+  );
+  return { bike, ...shop };
+}
+
+async function readShopSide(discipline: Discipline, skill: SkillLevel): Promise<Omit<ShopSizingContext, "bike">> {
   const db = await getDb();
   const [targetRows, stock, rules, settings] = await Promise.all([
     db
@@ -54,7 +67,6 @@ export async function loadShopSizingContext(
   ]);
   const shop = settings[0];
   return {
-    bike,
     targets: targetRows[0]?.values ?? null,
     stock: {
       forkRatesNmm: stock.filter((s) => s.end === "fork").map((s) => s.rateNmm),

@@ -115,3 +115,12 @@ export const clickerRules = pgTable(
   },
   (t) => [index("clicker_rules_order_idx").on(t.sortOrder)],
 );
+
+// One row: a random token the database replaces on every write to the shop-wide tables above and
+// bike_calibrations (statement triggers, migration 0006_shop_data_epoch). A process that keeps a copy
+// of those tables reads this one row to know whether its copy is still current, whichever process or
+// script made the change (db/queries/shop-data-cache.ts).
+export const shopDataEpoch = pgTable("shop_data_epoch", {
+  id: smallint("id").primaryKey().default(1),
+  epoch: uuid("epoch").notNull().defaultRandom(),
+});

@@ -4,6 +4,7 @@
 // after the commit: the submit never waits for it). Photos are written (and fsynced) first and
 // removed again if the transaction fails, so a refused or failed request leaves nothing behind.
 import { findActiveBike, findNearestGenericBike, insertSetupRequest, type CatalogBike } from "@/db/queries/intake";
+import { shopDataCache, type ShopDataCache } from "@/db/queries/shop-data-cache";
 import { loadShopSizingContext } from "@/db/queries/sizing-context";
 import { ValidationError } from "@/lib/errors";
 import { kickOutbox } from "@/lib/mail";
@@ -46,9 +47,9 @@ interface ResolvedBike {
   basis?: CatalogBike;
 }
 
-async function resolveBike(bike: RequestAnswers["bike"]): Promise<ResolvedBike> {
+async function resolveBike(bike: RequestAnswers["bike"], cache: ShopDataCache): Promise<ResolvedBike> {
   if (bike.modelId) {
-    const found = await findActiveBike(bike.modelId);
+    const found = await findActiveBike(bike.modelId, cache);
     if (!found)
       throw new ValidationError("Some fields need attention.", {
         "bike.modelId": "That bike is no longer in the shop's list: pick another or choose “not listed”",
@@ -83,8 +84,10 @@ function markNotListed(output: Recommendation, bike: ResolvedBike, answers: Requ
 
 export async function submitSetupRequest(answers: RequestAnswers, photos: IncomingPhoto[]) {
   const checked = await checkPhotos(photos);
-  const bike = await resolveBike(answers.bike);
-  const context = await loadShopSizingContext(bike.spec, answers.riding.discipline, answers.rider.skill);
+  // The catalog, targets, stock and rules as of one check of the shop's data (one small query).
+  const cache = await shopDataCache();
+  const bike = await resolveBike(answers.bike, cache);
+  const context = await loadShopSizingContext(bike.spec, answers.riding.discipline, answers.rider.skill, cache);
   const input = buildSizingInput(answers, context);
   let output: Recommendation;
   try {
