@@ -28,7 +28,8 @@ function withoutTextParsers(options: QueryOptions | undefined): QueryOptions | u
   if (!parsers) return options;
   const oids = Object.keys(parsers).map(Number);
   if (oids.length !== AS_TEXT.length || !oids.every((oid) => AS_TEXT.includes(oid))) return options;
-  const { parsers: _installed, ...rest } = options;
+  const rest = { ...options };
+  delete rest.parsers;
   return rest;
 }
 
