@@ -43,7 +43,8 @@ async function insert(from: number, to: number) {
       });
     await d.insert(setupRequests).values(rows);
   }
-  await d.execute("analyze setup_requests");
+  // As the app keeps an embedded database (db/upkeep.ts): vacuumed, so index-only scans work.
+  await d.execute("vacuum (analyze) setup_requests");
 }
 
 async function measure(): Promise<Record<string, number>> {

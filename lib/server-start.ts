@@ -1,8 +1,9 @@
 // Before the first request: refuse to run in production without BETTER_AUTH_SECRET, open and
 // migrate the database (so a fresh data folder is ready, and a locked one fails at start, loudly),
-// start the e-mail outbox worker, which first sends what an earlier run left queued, and the daily
-// service reminder job.
+// start the e-mail outbox worker, which first sends what an earlier run left queued, the daily
+// service reminder job and, on the embedded database, its vacuum (db/upkeep.ts).
 import { getDatabase } from "@/db/client";
+import { startDatabaseUpkeep } from "@/db/upkeep";
 import { resolveAuthSecret } from "@/lib/auth/secret";
 import { startOutboxWorker } from "@/lib/mail";
 import { startReminderScheduler } from "@/lib/service/reminders";
@@ -17,4 +18,5 @@ export async function prepareServer(): Promise<void> {
   }
   startOutboxWorker();
   startReminderScheduler();
+  startDatabaseUpkeep();
 }
