@@ -3,12 +3,10 @@
 // (the queue's counts) need not visit the table, and refreshes the planner's statistics (PostgreSQL
 // 16 manual, 25.1 "Routine Vacuuming"). PGlite runs no autovacuum: without this job its tables only
 // grow and its plans are made on the row counts of the day the data folder was created. So the
-// app's process runs VACUUM (ANALYZE) on PGlite a little after start and then every few hours.
-// With DATABASE_URL the server's autovacuum does this, and the job does nothing.
+// app's process runs VACUUM (ANALYZE) on PGlite a little after start and then every 6 hours
+// (lib/server-start.ts). With DATABASE_URL the server's autovacuum does this, and the job does nothing.
 import { sql } from "drizzle-orm";
 import { getDatabase } from "./client";
-
-const EVERY_MS = 6 * 60 * 60_000;
 
 /** One pass over every table; true when it ran (PGlite), false for a PostgreSQL server. */
 export async function vacuumEmbeddedDatabase(): Promise<boolean> {
@@ -16,17 +14,4 @@ export async function vacuumEmbeddedDatabase(): Promise<boolean> {
   if (handle.kind !== "pglite") return false;
   await handle.db.execute(sql`vacuum (analyze)`);
   return true;
-}
-
-let timer: NodeJS.Timeout | undefined;
-
-export function startDatabaseUpkeep(firstRunMs = 2 * 60_000): void {
-  if (timer) return;
-  const run = () =>
-    void vacuumEmbeddedDatabase().catch((error: unknown) => {
-      console.error(`[sagwise] database upkeep failed: ${(error as Error).message}`);
-    });
-  setTimeout(run, firstRunMs).unref();
-  timer = setInterval(run, EVERY_MS);
-  timer.unref();
 }

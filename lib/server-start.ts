@@ -3,9 +3,10 @@
 // start the e-mail outbox worker, which first sends what an earlier run left queued, the daily
 // service reminder job and, on the embedded database, its vacuum (db/upkeep.ts).
 import { getDatabase } from "@/db/client";
-import { startDatabaseUpkeep } from "@/db/upkeep";
+import { vacuumEmbeddedDatabase } from "@/db/upkeep";
 import { resolveAuthSecret } from "@/lib/auth/secret";
 import { startOutboxWorker } from "@/lib/mail";
+import { startPeriodic } from "@/lib/periodic";
 import { startReminderScheduler } from "@/lib/service/reminders";
 
 export async function prepareServer(): Promise<void> {
@@ -18,5 +19,10 @@ export async function prepareServer(): Promise<void> {
   }
   startOutboxWorker();
   startReminderScheduler();
-  startDatabaseUpkeep();
+  startPeriodic({
+    name: "database upkeep",
+    run: vacuumEmbeddedDatabase,
+    firstRunMs: 2 * 60_000,
+    everyMs: 6 * 60 * 60_000,
+  });
 }

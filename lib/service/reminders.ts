@@ -12,6 +12,7 @@ import { formatDay } from "@/lib/format";
 import { kickOutbox, queueTemplateEmail } from "@/lib/mail";
 import { statusPath } from "@/lib/requests/token";
 import { loadServiceRows, type ServiceRow } from "./overview";
+import { startPeriodic } from "@/lib/periodic";
 
 /** The new-request form with this bike chosen (/request?bike=<catalog id>); plain form when not listed. */
 export function bookingUrl(bikeModelId: string | null): string {
@@ -77,19 +78,11 @@ export async function queueDueReminders(now = new Date()): Promise<number> {
 }
 
 const DAY_MS = 86_400_000;
-let timer: ReturnType<typeof setInterval> | null = null;
 
 /**
  * Runs the job once a little after the server starts and then every 24 hours, inside the app's own
  * process. Several instances may each run it: the unique reminder rows keep every e-mail single.
  */
 export function startReminderScheduler(firstRunMs = 5 * 60_000): void {
-  if (timer) return;
-  const run = () =>
-    void queueDueReminders().catch((error: unknown) => {
-      console.error(`[sagwise] service reminders failed: ${(error as Error).message}`);
-    });
-  setTimeout(run, firstRunMs).unref();
-  timer = setInterval(run, DAY_MS);
-  timer.unref();
+  startPeriodic({ name: "service reminders", run: queueDueReminders, firstRunMs, everyMs: DAY_MS });
 }
