@@ -47,7 +47,7 @@ if (!hasProductionBuild()) {
   // BENCH_HTTP_PROFILE=dir writes there a V8 CPU profile of the server for each route's measured run
   // (<route>.cpuprofile, for finding where the time goes; sampling slows the server a little).
   const profileDir = process.env.BENCH_HTTP_PROFILE;
-  const server = await startBenchServer("http benchmark", { inspectPort: Boolean(profileDir) });
+  const server = await startBenchServer("http benchmark", { inspect: Boolean(profileDir) });
   let profiler: Profiler | undefined;
   const base = server.base;
   try {

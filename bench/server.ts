@@ -17,7 +17,7 @@ export function hasProductionBuild(): boolean {
 
 export interface BenchServer {
   base: string;
-  /** The app's inspector port when started with `inspectPort` (see bench/inspector.ts). */
+  /** The app's inspector port when started with `inspect` (see bench/inspector.ts). */
   inspectPort?: number;
   /**
    * CPU seconds the app process has used so far (user + system, from /proc on Linux; null
@@ -45,18 +45,13 @@ function cpuSecondsOf(pid: number | undefined): number | null {
 }
 
 /**
- * Seeds a fresh data folder and starts the app and the mail fake. `profileDir` writes a V8 CPU
- * profile of the app's whole life there; `inspectPort` opens the app's inspector on that loopback
- * port instead, for profiles of chosen spans (bench/inspector.ts); `timeBoundMs` is when everything
- * is stopped and the process exits.
+ * Seeds a fresh data folder and starts the app and the mail fake. `inspect` opens the app's
+ * inspector on a free loopback port (`inspectPort`), for CPU profiles of chosen spans
+ * (bench/inspector.ts); `timeBoundMs` is when everything is stopped and the process exits.
  */
 export async function startBenchServer(
   name: string,
-  {
-    profileDir,
-    inspectPort,
-    timeBoundMs = 10 * 60_000,
-  }: { profileDir?: string; inspectPort?: boolean; timeBoundMs?: number } = {},
+  { inspect = false, timeBoundMs = 10 * 60_000 }: { inspect?: boolean; timeBoundMs?: number } = {},
 ): Promise<BenchServer> {
   const dataDir = mkdtempSync(path.join(os.tmpdir(), "sagwise-bench-"));
   const [appPort, mailPort, debugPort] = await Promise.all([freePort(), freePort(), freePort()]);
@@ -79,10 +74,7 @@ export async function startBenchServer(
   const seeded = spawnSync("npx", ["tsx", "scripts/prepare-data.ts", "--seed"], { env, stdio: "ignore" });
   if (seeded.status !== 0) throw new Error("Seeding the benchmark database failed");
   const mail = spawn("npx", ["tsx", "fakes/mail/server.ts"], { env, detached: true, stdio: "ignore" });
-  const profiling = [
-    ...(profileDir ? ["--cpu-prof", `--cpu-prof-dir=${profileDir}`] : []),
-    ...(inspectPort ? [`--inspect=127.0.0.1:${debugPort}`] : []),
-  ];
+  const profiling = inspect ? [`--inspect=127.0.0.1:${debugPort}`] : [];
   const app = spawn("node", [...profiling, "--import", "tsx", "scripts/server.ts"], {
     env,
     detached: true,
@@ -105,7 +97,7 @@ export async function startBenchServer(
   }
   return {
     base,
-    inspectPort: inspectPort ? debugPort : undefined,
+    inspectPort: inspect ? debugPort : undefined,
     cpuSeconds: () => cpuSecondsOf(app.pid),
     stop,
   };
