@@ -2,7 +2,8 @@
 // started with `--inspect=127.0.0.1:PORT` and this client drives V8's Profiler over the inspector
 // protocol (https://chromedevtools.github.io/devtools-protocol/v8/Profiler/), so start-up and
 // warm-up stay out of the profile. The .cpuprofile files open in Chrome DevTools or speedscope.
-import { writeFileSync } from "node:fs";
+import { mkdirSync, writeFileSync } from "node:fs";
+import { dirname } from "node:path";
 import WebSocket from "ws";
 
 export interface Profiler {
@@ -39,6 +40,7 @@ export async function connectProfiler(port: number, intervalUs = 250): Promise<P
     start: () => call("Profiler.start"),
     async stopTo(file) {
       const { profile } = await call<{ profile: unknown }>("Profiler.stop");
+      mkdirSync(dirname(file), { recursive: true });
       writeFileSync(file, JSON.stringify(profile));
     },
     close: () => socket.close(),
