@@ -1,17 +1,15 @@
 import { and, asc, count, desc, eq, gte, inArray, isNull, like, lt, or, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { containsPattern } from "./like";
-import { REQUEST_STATUSES, setupRequests, user, type RequestStatus } from "@/db/schema";
+import { REQUEST_STATUSES, requestStatusCounts, setupRequests, user, type RequestStatus } from "@/db/schema";
 import type { QueueQuery } from "@/lib/validations/queue";
 
+/** Requests per status, from the counts the database keeps as rows change (request_status_counts). */
 export async function countRequestsByStatus(): Promise<Record<RequestStatus, number>> {
   const db = await getDb();
-  const rows = await db
-    .select({ status: setupRequests.status, n: count() })
-    .from(setupRequests)
-    .groupBy(setupRequests.status);
+  const rows = await db.select().from(requestStatusCounts);
   const counts = Object.fromEntries(REQUEST_STATUSES.map((s) => [s, 0])) as Record<RequestStatus, number>;
-  for (const row of rows) counts[row.status] = Number(row.n);
+  for (const row of rows) if (row.status in counts) counts[row.status] = row.n;
   return counts;
 }
 
@@ -82,8 +80,26 @@ function queueConditions(query: QueueQuery, callerId?: string): SQL | undefined 
 }
 
 /**
+ * How many requests match the queue's filters. The whole queue and one status come from the counts
+ * kept by the database (request_status_counts), so a deep queue costs no more to total than a short
+ * one; any other filter counts its matching rows through its index.
+ */
+async function queueTotal(query: QueueQuery, where: SQL | undefined, callerId?: string): Promise<number> {
+  const db = await getDb();
+  if (queueConditions({ ...query, status: undefined }, callerId)) {
+    const [row] = await db.select({ n: count() }).from(setupRequests).where(where);
+    return Number(row?.n ?? 0);
+  }
+  const rows = await db
+    .select({ n: requestStatusCounts.n })
+    .from(requestStatusCounts)
+    .where(query.status ? eq(requestStatusCounts.status, query.status) : undefined);
+  return rows.reduce((sum, row) => sum + row.n, 0);
+}
+
+/**
  * One page of the staff queue with the total matching rows. The tuner's name comes from a join
- * (one query for the page, one for the count: no per-row lookups).
+ * (one query for the page, one for the total: no per-row lookups).
  */
 export async function listQueue(query: QueueQuery, callerId?: string) {
   const db = await getDb();
@@ -98,7 +114,7 @@ export async function listQueue(query: QueueQuery, callerId?: string) {
     .orderBy(...order)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
-  const [items, totals] = await Promise.all([
+  const [items, total] = await Promise.all([
     db
       .select({
         ...summaryColumns,
@@ -113,9 +129,9 @@ export async function listQueue(query: QueueQuery, callerId?: string) {
       .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
       .where(inArray(setupRequests.id, pageIds))
       .orderBy(...order),
-    db.select({ n: count() }).from(setupRequests).where(where),
+    queueTotal(query, where, callerId),
   ]);
-  return { items, total: Number(totals[0]?.n ?? 0) };
+  return { items, total };
 }
 
 export type QueueItem = Awaited<ReturnType<typeof listQueue>>["items"][number];

@@ -2,6 +2,7 @@
 // uploads, sag reports, audit events and outbound e-mails.
 import { sql } from "drizzle-orm";
 import {
+  bigint,
   bigserial,
   doublePrecision,
   index,
@@ -85,6 +86,17 @@ export const setupRequests = pgTable(
       .with({ fastupdate: false }),
   ],
 );
+
+/**
+ * How many requests are in each status, kept by triggers on setup_requests (migration
+ * 0007_request_status_counts) in the writer's own transaction: the queue's totals and its per-status
+ * counts read these five rows instead of counting every request (docs/architecture.md, "What a
+ * request costs").
+ */
+export const requestStatusCounts = pgTable("request_status_counts", {
+  status: text("status").$type<RequestStatus>().primaryKey(),
+  n: bigint("n", { mode: "number" }).notNull().default(0),
+});
 
 /**
  * Private status links. Each e-mail to the rider carries a link with a fresh long random token; only
