@@ -68,15 +68,17 @@ export const setupRequests = pgTable(
   },
   (t) => [
     uniqueIndex("setup_requests_number_idx").on(t.number),
-    // Queue: filter by status, newest first; and the plain newest-first listing.
-    index("setup_requests_status_created_idx").on(t.status, t.createdAt),
-    index("setup_requests_created_idx").on(t.createdAt),
+    // Queue: filter by status, newest first; and the plain newest-first listing. The queue picks a
+    // page's ids before reading its rows (db/queries/requests.ts), and the id as the last column
+    // lets that walk, past a deep offset too, read the index alone (an index-only scan).
+    index("setup_requests_status_created_idx").on(t.status, t.createdAt, t.id),
+    index("setup_requests_created_idx").on(t.createdAt, t.id),
     index("setup_requests_email_idx").on(t.riderEmail),
-    index("setup_requests_tuner_idx").on(t.assignedTunerId, t.createdAt),
-    index("setup_requests_discipline_idx").on(t.discipline, t.createdAt),
-    index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt),
+    index("setup_requests_tuner_idx").on(t.assignedTunerId, t.createdAt, t.id),
+    index("setup_requests_discipline_idx").on(t.discipline, t.createdAt, t.id),
+    index("setup_requests_bike_class_idx").on(t.bikeClass, t.createdAt, t.id),
     // Discipline and class together, the queue's usual pair of filters, newest first.
-    index("setup_requests_discipline_class_idx").on(t.discipline, t.bikeClass, t.createdAt),
+    index("setup_requests_discipline_class_idx").on(t.discipline, t.bikeClass, t.createdAt, t.id),
     index("setup_requests_rider_name_idx").on(sql`lower(${t.riderName})`),
     // Without a pending list (GIN's fastupdate): new rows go straight into the index, so a search
     // never scans rows that only VACUUM or autoanalyze would have merged in (PostgreSQL manual, GIN
