@@ -101,6 +101,8 @@ if (!hasProductionBuild()) {
     const routes: [string, autocannon.Options][] = [
       ["health", { url: `${base}/api/health` }],
       ["queue page", { url: `${base}/shop`, headers: staff }],
+      // What the queue page's list then asks for, with the per-status counts of its header.
+      ["queue list", { url: `${base}/api/requests?counts=1`, headers: staff }],
       ["request detail page", { url: `${base}/shop/requests/${id}`, headers: staff }],
       [
         "rider's submit",
