@@ -1,5 +1,6 @@
-import { asc, eq } from "drizzle-orm";
+import { asc, eq, sql } from "drizzle-orm";
 import { getDb, type AppDb } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { auditEvents } from "@/db/schema";
 
 export type AuditInsert = typeof auditEvents.$inferInsert;
@@ -11,11 +12,15 @@ export async function recordAudit(events: AuditInsert | AuditInsert[], executor?
   if (rows.length) await db.insert(auditEvents).values(rows);
 }
 
-export async function listAuditForRequest(requestId: string) {
-  const db = await getDb();
-  return db
+const requestAudit = prepared("request_audit", (db, name) =>
+  db
     .select()
     .from(auditEvents)
-    .where(eq(auditEvents.requestId, requestId))
-    .orderBy(asc(auditEvents.createdAt), asc(auditEvents.id));
+    .where(eq(auditEvents.requestId, sql.placeholder("id")))
+    .orderBy(asc(auditEvents.createdAt), asc(auditEvents.id))
+    .prepare(name),
+);
+
+export async function listAuditForRequest(requestId: string) {
+  return requestAudit(await getDb()).execute({ id: requestId });
 }

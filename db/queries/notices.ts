@@ -2,6 +2,7 @@
 // the unseen counts the workspace shows. Data access only; lib/notify-staff.ts decides.
 import { and, count, eq, inArray, isNull } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { emailWording, setupRequests, shopSettings, staffNotices, user, type StaffNoticeKind } from "@/db/schema";
 
 /** The request's number and rider, its assigned tuner (when active) and the shop's own address. */
@@ -57,13 +58,18 @@ export async function insertStaffNotice(tx: Executor, values: typeof staffNotice
 }
 
 /** Unseen notices per kind, for the navigation. */
-export async function countUnseenNotices(): Promise<Record<StaffNoticeKind, number> & { total: number }> {
-  const db = await getDb();
-  const rows = await db
+// The workspace's navigation shows it on every staff page.
+const unseenCounts = prepared("unseen_notice_counts", (db, name) =>
+  db
     .select({ kind: staffNotices.kind, n: count() })
     .from(staffNotices)
     .where(isNull(staffNotices.seenAt))
-    .groupBy(staffNotices.kind);
+    .groupBy(staffNotices.kind)
+    .prepare(name),
+);
+
+export async function countUnseenNotices(): Promise<Record<StaffNoticeKind, number> & { total: number }> {
+  const rows = await unseenCounts(await getDb()).execute();
   const out = { "new-request": 0, "rider-answered": 0, "sag-reported": 0, "payment-received": 0, total: 0 };
   for (const r of rows) {
     out[r.kind] = r.n;

@@ -3,6 +3,7 @@
 // PostgreSQL never claim the same row), and recording how each attempt went.
 import { and, asc, eq, inArray, isNull, lt, lte, min, or, sql } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { outboundEmails } from "@/db/schema";
 
 export type OutboundEmail = typeof outboundEmails.$inferSelect;
@@ -11,10 +12,8 @@ export type NewOutboundEmail = Omit<
   "status" | "attempts" | "providerMessageId" | "sentAt"
 >;
 
-/** Every e-mail sent (or tried) about a request, oldest first: the request page shows the trail. */
-export async function listOutboundEmailsForRequest(requestId: string) {
-  const db = await getDb();
-  return db
+const requestEmails = prepared("request_emails", (db, name) =>
+  db
     .select({
       id: outboundEmails.id,
       template: outboundEmails.template,
@@ -27,8 +26,14 @@ export async function listOutboundEmailsForRequest(requestId: string) {
       sentAt: outboundEmails.sentAt,
     })
     .from(outboundEmails)
-    .where(eq(outboundEmails.requestId, requestId))
-    .orderBy(asc(outboundEmails.createdAt), asc(outboundEmails.id));
+    .where(eq(outboundEmails.requestId, sql.placeholder("id")))
+    .orderBy(asc(outboundEmails.createdAt), asc(outboundEmails.id))
+    .prepare(name),
+);
+
+/** Every e-mail sent (or tried) about a request, oldest first: the request page shows the trail. */
+export async function listOutboundEmailsForRequest(requestId: string) {
+  return requestEmails(await getDb()).execute({ id: requestId });
 }
 
 export type OutboundEmailRow = Awaited<ReturnType<typeof listOutboundEmailsForRequest>>[number];

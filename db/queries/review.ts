@@ -1,19 +1,64 @@
-// Everything the request detail page shows, loaded in parallel (one query per kind, no per-row lookups).
-import { and, asc, eq, inArray, or, isNull } from "drizzle-orm";
+// Everything the request detail page shows, loaded in parallel (one query per kind, no per-row
+// lookups), each a prepared query (db/prepared.ts).
+import { and, asc, eq, inArray, or, isNull, sql } from "drizzle-orm";
 import { listOutboundEmailsForRequest } from "@/db/queries/outbound-emails";
 import { getDb } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { bikeModels, requestMessages, sagReports, setupRequests, uploads, user } from "@/db/schema";
 import { STAFF_ROLES } from "@/lib/auth/roles";
 import { listAuditForRequest } from "./audit";
 import { listVersions } from "./versions";
 
-export async function getRequestRow(requestId: string) {
-  const db = await getDb();
-  const [row] = await db
+const requestRow = prepared("request_row", (db, name) =>
+  db
     .select({ request: setupRequests, tunerName: user.name })
     .from(setupRequests)
     .leftJoin(user, eq(user.id, setupRequests.assignedTunerId))
-    .where(eq(setupRequests.id, requestId));
+    .where(eq(setupRequests.id, sql.placeholder("id")))
+    .prepare(name),
+);
+
+const requestMessagesOf = prepared("request_messages", (db, name) =>
+  db
+    .select({
+      id: requestMessages.id,
+      author: requestMessages.author,
+      body: requestMessages.body,
+      createdAt: requestMessages.createdAt,
+      authorName: user.name,
+    })
+    .from(requestMessages)
+    .leftJoin(user, eq(user.id, requestMessages.authorUserId))
+    .where(eq(requestMessages.requestId, sql.placeholder("id")))
+    .orderBy(asc(requestMessages.createdAt))
+    .prepare(name),
+);
+
+const requestPhotos = prepared("request_photos", (db, name) =>
+  db
+    .select({
+      id: uploads.id,
+      originalName: uploads.originalName,
+      contentType: uploads.contentType,
+      sizeBytes: uploads.sizeBytes,
+    })
+    .from(uploads)
+    .where(eq(uploads.requestId, sql.placeholder("id")))
+    .orderBy(asc(uploads.createdAt))
+    .prepare(name),
+);
+
+const requestSagReports = prepared("request_sag_reports", (db, name) =>
+  db
+    .select()
+    .from(sagReports)
+    .where(eq(sagReports.requestId, sql.placeholder("id")))
+    .orderBy(asc(sagReports.createdAt))
+    .prepare(name),
+);
+
+export async function getRequestRow(requestId: string) {
+  const [row] = await requestRow(await getDb()).execute({ id: requestId });
   return row ?? null;
 }
 
@@ -23,29 +68,9 @@ export async function getRequestDetail(requestId: string) {
   const db = await getDb();
   const [versions, messages, photos, sags, emails, audit] = await Promise.all([
     listVersions(requestId),
-    db
-      .select({
-        id: requestMessages.id,
-        author: requestMessages.author,
-        body: requestMessages.body,
-        createdAt: requestMessages.createdAt,
-        authorName: user.name,
-      })
-      .from(requestMessages)
-      .leftJoin(user, eq(user.id, requestMessages.authorUserId))
-      .where(eq(requestMessages.requestId, requestId))
-      .orderBy(asc(requestMessages.createdAt)),
-    db
-      .select({
-        id: uploads.id,
-        originalName: uploads.originalName,
-        contentType: uploads.contentType,
-        sizeBytes: uploads.sizeBytes,
-      })
-      .from(uploads)
-      .where(eq(uploads.requestId, requestId))
-      .orderBy(asc(uploads.createdAt)),
-    db.select().from(sagReports).where(eq(sagReports.requestId, requestId)).orderBy(asc(sagReports.createdAt)),
+    requestMessagesOf(db).execute({ id: requestId }),
+    requestPhotos(db).execute({ id: requestId }),
+    requestSagReports(db).execute({ id: requestId }),
     listOutboundEmailsForRequest(requestId),
     listAuditForRequest(requestId),
   ]);
@@ -63,14 +88,18 @@ export async function getRequestDetail(requestId: string) {
 
 export type RequestDetail = NonNullable<Awaited<ReturnType<typeof getRequestDetail>>>;
 
-/** Active staff who can be assigned a request. */
-export async function listStaffMembers() {
-  const db = await getDb();
-  return db
+const activeStaff = prepared("active_staff", (db, name) =>
+  db
     .select({ id: user.id, name: user.name, role: user.role })
     .from(user)
     .where(and(inArray(user.role, [...STAFF_ROLES]), or(isNull(user.banned), eq(user.banned, false))))
-    .orderBy(asc(user.name));
+    .orderBy(asc(user.name))
+    .prepare(name),
+);
+
+/** Active staff who can be assigned a request. */
+export async function listStaffMembers() {
+  return activeStaff(await getDb()).execute();
 }
 
 /** The staff member with this id, or null if there is none (or the account is deactivated). */

@@ -1,6 +1,7 @@
 // The rider's word on how the bike rides after the first rides, and the tuner's revision from it.
-import { and, desc, eq, isNull } from "drizzle-orm";
+import { and, desc, eq, isNull, sql } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { rideFeedback } from "@/db/schema";
 
 export type RideFeedbackRow = typeof rideFeedback.$inferSelect;
@@ -11,13 +12,17 @@ export async function insertRideFeedback(values: typeof rideFeedback.$inferInser
   return row!;
 }
 
-export async function listRideFeedback(requestId: string): Promise<RideFeedbackRow[]> {
-  const db = await getDb();
-  return db
+const requestFeedback = prepared("request_ride_feedback", (db, name) =>
+  db
     .select()
     .from(rideFeedback)
-    .where(eq(rideFeedback.requestId, requestId))
-    .orderBy(desc(rideFeedback.createdAt));
+    .where(eq(rideFeedback.requestId, sql.placeholder("id")))
+    .orderBy(desc(rideFeedback.createdAt))
+    .prepare(name),
+);
+
+export async function listRideFeedback(requestId: string): Promise<RideFeedbackRow[]> {
+  return requestFeedback(await getDb()).execute({ id: requestId });
 }
 
 export async function findRideFeedback(requestId: string, id: string, executor?: Executor) {

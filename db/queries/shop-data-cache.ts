@@ -7,8 +7,9 @@
 // the next request. Reading the token before the data means a copy can only be newer than its
 // token says, never older; a token is random, so even a restored backup cannot match a copy made
 // from other data.
-import { sql } from "drizzle-orm";
 import { getDatabase, type DatabaseHandle } from "@/db/client";
+import { prepared } from "@/db/prepared";
+import { shopDataEpoch } from "@/db/schema";
 
 /** Cached values by key for one epoch; capped so that lookups of unknown keys cannot grow it. */
 interface EpochCopy {
@@ -30,14 +31,14 @@ export interface ShopDataCache {
   get<T>(key: string, load: () => Promise<T>): Promise<T>;
 }
 
+const currentEpoch = prepared("shop_data_epoch", (db, name) =>
+  db.select({ epoch: shopDataEpoch.epoch }).from(shopDataEpoch).limit(1).prepare(name),
+);
+
 /** Checks the token once; the returned cache serves one request (or one unit of work). */
 export async function shopDataCache(): Promise<ShopDataCache> {
   const handle = await getDatabase();
-  // Both drivers (PGlite, node-postgres) answer a raw statement with `rows`.
-  const result = (await handle.db.execute(sql`select "epoch" from "shop_data_epoch" limit 1`)) as {
-    rows: { epoch: string }[];
-  };
-  const epoch = result.rows[0]?.epoch;
+  const epoch = (await currentEpoch(handle.db).execute())[0]?.epoch;
   // No token row (a database someone emptied by hand): nothing can be trusted, so read every time.
   if (!epoch) return { get: (_key, load) => load() };
   let copy = copies.get(handle);

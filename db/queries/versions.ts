@@ -1,7 +1,8 @@
 // Recommendation versions of a request: the newest is the one a tuner edits; approved ones are frozen.
-import { and, asc, desc, eq, ne } from "drizzle-orm";
+import { and, asc, desc, eq, ne, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { getDb, type AppDb } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { recommendationVersions, user } from "@/db/schema";
 
 type Reader = Pick<AppDb, "select">;
@@ -40,10 +41,8 @@ export async function hasEarlierApproval(requestId: string, version: number, exe
 const creator = alias(user, "creator");
 const approver = alias(user, "approver");
 
-/** Every version, oldest first, with who made and who approved it. */
-export async function listVersions(requestId: string) {
-  const db = await getDb();
-  return db
+const versionList = prepared("request_versions", (db, name) =>
+  db
     .select({
       id: recommendationVersions.id,
       version: recommendationVersions.version,
@@ -63,8 +62,14 @@ export async function listVersions(requestId: string) {
     .from(recommendationVersions)
     .leftJoin(creator, eq(creator.id, recommendationVersions.createdById))
     .leftJoin(approver, eq(approver.id, recommendationVersions.approvedById))
-    .where(eq(recommendationVersions.requestId, requestId))
-    .orderBy(asc(recommendationVersions.version));
+    .where(eq(recommendationVersions.requestId, sql.placeholder("id")))
+    .orderBy(asc(recommendationVersions.version))
+    .prepare(name),
+);
+
+/** Every version, oldest first, with who made and who approved it. */
+export async function listVersions(requestId: string) {
+  return versionList(await getDb()).execute({ id: requestId });
 }
 
 export type VersionListItem = Awaited<ReturnType<typeof listVersions>>[number];
