@@ -64,8 +64,13 @@ describe("request status counts", () => {
     // Moving statuses both ways, one row at a time and many in one statement.
     const submitted = added.filter((r) => r.status === "submitted").map((r) => r.id);
     await db.update(setupRequests).set({ status: "in_review" }).where(eq(setupRequests.id, submitted[0]!));
-    await db.update(setupRequests).set({ status: "declined" }).where(inArray(setupRequests.id, submitted.slice(1, 4)));
-    await db.execute(sql`update setup_requests set status = 'submitted' where status = 'approved' and bike_class = 'count-class'`);
+    await db
+      .update(setupRequests)
+      .set({ status: "declined" })
+      .where(inArray(setupRequests.id, submitted.slice(1, 4)));
+    await db.execute(
+      sql`update setup_requests set status = 'submitted' where status = 'approved' and bike_class = 'count-class'`,
+    );
     // An update that leaves the status as it was, and one of other columns only.
     await db.update(setupRequests).set({ status: "declined" }).where(eq(setupRequests.id, submitted[1]!));
     await db.update(setupRequests).set({ updatedAt: new Date() });
