@@ -108,13 +108,17 @@ export async function findStaffMember(userId: string) {
   return staff.find((s) => s.id === userId) ?? null;
 }
 
-/** Bike classes of the catalog for the queue's filter (requests store the class, not the model). */
-export async function listBikeClassOptions() {
-  const db = await getDb();
-  const rows = await db
+const bikeClassNames = prepared("bike_class_names", (db, name) =>
+  db
     .selectDistinct({ value: bikeModels.bikeClass, label: bikeModels.name })
     .from(bikeModels)
-    .orderBy(asc(bikeModels.name));
+    .orderBy(asc(bikeModels.name))
+    .prepare(name),
+);
+
+/** Bike classes of the catalog for the queue's filter (requests store the class, not the model). */
+export async function listBikeClassOptions() {
+  const rows = await bikeClassNames(await getDb()).execute();
   // One entry per class: the first model's name labels it.
   const seen = new Map<string, string>();
   for (const r of rows) if (!seen.has(r.value)) seen.set(r.value, r.label);

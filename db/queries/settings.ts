@@ -1,10 +1,15 @@
 import { eq } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
+import { prepared } from "@/db/prepared";
 import { shopSettings } from "@/db/schema";
 
+const settingsQuery = (db: Executor) => db.select().from(shopSettings).where(eq(shopSettings.id, 1)).limit(1);
+// Read by the landing page and the request form on every view.
+const settingsRow = prepared("shop_settings", (db, name) => settingsQuery(db).prepare(name));
+
+/** The single settings row (in the caller's transaction when given). */
 export async function getShopSettings(executor?: Executor) {
-  const db = executor ?? (await getDb());
-  const rows = await db.select().from(shopSettings).where(eq(shopSettings.id, 1)).limit(1);
+  const rows = executor ? await settingsQuery(executor) : await settingsRow(await getDb()).execute();
   return rows[0] ?? null;
 }
 
