@@ -57,8 +57,6 @@ export async function insertStaffNotice(tx: Executor, values: typeof staffNotice
   return row!;
 }
 
-/** Unseen notices per kind, for the navigation. */
-// The workspace's navigation shows it on every staff page.
 const unseenCounts = prepared("unseen_notice_counts", (db, name) =>
   db
     .select({ kind: staffNotices.kind, n: count() })
@@ -68,6 +66,7 @@ const unseenCounts = prepared("unseen_notice_counts", (db, name) =>
     .prepare(name),
 );
 
+/** Unseen notices per kind, for the navigation (on every staff page). */
 export async function countUnseenNotices(): Promise<Record<StaffNoticeKind, number> & { total: number }> {
   const rows = await unseenCounts(await getDb()).execute();
   const out = { "new-request": 0, "rider-answered": 0, "sag-reported": 0, "payment-received": 0, total: 0 };
