@@ -1,6 +1,6 @@
 // Upkeep of the embedded database. A PostgreSQL server runs autovacuum, which removes the dead row
 // versions every UPDATE and DELETE leaves behind, marks pages all-visible so that index-only scans
-// (the queue's counts) need not visit the table, and refreshes the planner's statistics (PostgreSQL
+// (the queue's page walk and filtered counts) need not visit the table, and refreshes the planner's statistics (PostgreSQL
 // 16 manual, 25.1 "Routine Vacuuming"). PGlite runs no autovacuum: without this job its tables only
 // grow and its plans are made on the row counts of the day the data folder was created. So the
 // app's process runs VACUUM (ANALYZE) on PGlite a little after start and then every 6 hours
