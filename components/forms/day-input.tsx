@@ -6,6 +6,7 @@
 import { useId, useState } from "react";
 import { formatDay } from "@/lib/format";
 import { parseTypedDay } from "@/lib/validations/typed-day";
+import { dayField, receiveDay, typeDay } from "./day-field";
 
 export function DayInput({
   label,
@@ -20,13 +21,10 @@ export function DayInput({
   className?: string;
 }) {
   const id = useId();
-  const [text, setText] = useState(value ? formatDay(value) : "");
-  const [shownValue, setShownValue] = useState(value);
-  // The value changed from outside (clear filters, back button): show it.
-  if (value !== shownValue) {
-    setShownValue(value);
-    if (value !== parseTypedDay(text)) setText(value ? formatDay(value) : "");
-  }
+  const [field, setField] = useState(() => dayField(value));
+  // The value changed, from outside (clear filters, back button) or as the echo of our own send.
+  if (value !== field.shown) setField(receiveDay(field, value));
+  const text = field.text;
   const parsed = parseTypedDay(text);
   const wrong = text.trim() !== "" && parsed === null;
   return (
@@ -43,11 +41,9 @@ export function DayInput({
         aria-describedby={`${id}-note`}
         className={className}
         onChange={(e) => {
-          const next = e.target.value;
-          setText(next);
-          const day = parseTypedDay(next);
-          if (next.trim() === "") onChange("");
-          else if (day) onChange(day);
+          const typed = typeDay(field, e.target.value);
+          setField(typed.field);
+          if (typed.send !== null) onChange(typed.send);
         }}
       />
       <span id={`${id}-note`} className={wrong ? "text-red-700" : "font-normal text-stone-600"}>
