@@ -104,6 +104,8 @@ if (!hasProductionBuild()) {
       // What the queue page's list then asks for, with the per-status counts of its header.
       ["queue list", { url: `${base}/api/requests?counts=1`, headers: staff }],
       ["request detail page", { url: `${base}/shop/requests/${id}`, headers: staff }],
+      // The same request as the API gives it (what the page's client parts and outside tools read).
+      ["request detail API", { url: `${base}/api/requests/${id}`, headers: staff }],
       [
         "rider's submit",
         {
