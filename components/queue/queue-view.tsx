@@ -3,7 +3,7 @@
 // The staff queue: filters live in the URL (shareable, back button works), data comes from
 // GET /api/requests through TanStack Query and refreshes every 15 s so new requests appear.
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { usePathname, useRouter, useSearchParams } from "next/navigation";
+import { usePathname, useSearchParams } from "next/navigation";
 import { useCallback } from "react";
 import { Button } from "@/components/ui/button";
 import { fetchQueue, filtersFrom, paramsFrom, type QueueFilters } from "./queue-data";
@@ -14,7 +14,6 @@ import { StatusCounts } from "./status-counts";
 export const QUEUE_REFRESH_MS = 15_000;
 
 export function QueueView({ options }: { options: FilterOptions }) {
-  const router = useRouter();
   const pathname = usePathname();
   const searchParams = useSearchParams();
   const filters = filtersFrom(new URLSearchParams(searchParams.toString()));
@@ -26,16 +25,19 @@ export function QueueView({ options }: { options: FilterOptions }) {
     refetchInterval: QUEUE_REFRESH_MS,
   });
 
-  const search = searchParams.toString();
+  // The filters change only the URL: the page's server part does not read them, so the browser's
+  // own history.replaceState (which Next.js's router follows, useSearchParams included) updates
+  // them at once, with no server render of the page before the list's request can start. Built on
+  // the address as it is now, so two changes in quick succession both stay.
   const update = useCallback(
     (patch: Partial<QueueFilters>) => {
-      const current = filtersFrom(new URLSearchParams(search));
+      const current = filtersFrom(new URLSearchParams(window.location.search));
       // Any change other than the page itself starts again at page 1.
       const next = { ...current, ...patch, page: patch.page ?? 1 };
       const qs = paramsFrom(next).toString();
-      router.replace(qs ? `${pathname}?${qs}` : pathname, { scroll: false });
+      window.history.replaceState(null, "", qs ? `${pathname}?${qs}` : pathname);
     },
-    [router, pathname, search],
+    [pathname],
   );
 
   const total = query.data?.total ?? 0;

@@ -136,6 +136,13 @@ test("opening a submitted request changes nothing; Start review is the action", 
 
 test("the queue takes a typed date, finds a request by its number and sorts status both ways", async ({ page }) => {
   await signInWithPassword(page, "tuner@sagwise.test", "/shop");
+  await expect(page.getByText(/of \d+ requests/)).toBeVisible();
+  // A filter lives in the URL only: changing it asks the server for the list, never for the page
+  // again (the page's server part does not read the filters).
+  const pageRequests: string[] = [];
+  page.on("request", (request) => {
+    if (new URL(request.url()).pathname === "/shop") pageRequests.push(request.url());
+  });
   const from = page.getByLabel("Received from");
   // What a US date field turned into 11/25/0006: read as 25 Nov 2026, no 400, the list stays.
   await from.fill("11252026");
@@ -148,6 +155,7 @@ test("the queue takes a typed date, finds a request by its number and sorts stat
   await from.fill("31.02.2026");
   await expect(page.getByText(/Not a date: type it like/)).toBeVisible();
   await from.fill("");
+  expect(pageRequests).toEqual([]);
 
   const search = page.getByLabel(/Search rider, e-mail, bike or number/);
   await search.fill("7");
