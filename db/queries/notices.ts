@@ -1,6 +1,6 @@
 // Staff notices (db/tables/notices.ts): who to tell about a request, the notices themselves, and
 // the unseen counts the workspace shows. Data access only; lib/notify-staff.ts decides.
-import { and, count, eq, inArray, isNull } from "drizzle-orm";
+import { and, count, eq, inArray, isNull, sql } from "drizzle-orm";
 import { getDb, type Executor } from "@/db/client";
 import { prepared } from "@/db/prepared";
 import { emailWording, setupRequests, shopSettings, staffNotices, user, type StaffNoticeKind } from "@/db/schema";
@@ -77,15 +77,21 @@ export async function countUnseenNotices(): Promise<Record<StaffNoticeKind, numb
   return out;
 }
 
+// The page's ids go in as one array parameter (`= any($1)`), so the statement is the same for any
+// number of rows and can be prepared.
+const unseenKindsOf = prepared("unseen_notice_kinds", (db, name) =>
+  db
+    .selectDistinct({ requestId: staffNotices.requestId, kind: staffNotices.kind })
+    .from(staffNotices)
+    .where(and(isNull(staffNotices.seenAt), sql`${staffNotices.requestId} = any(${sql.placeholder("ids")}::uuid[])`))
+    .prepare(name),
+);
+
 /** The kinds of unseen notice on each of `requestIds`, for the marks in the queue. */
 export async function listUnseenNoticeKinds(requestIds: string[]): Promise<Map<string, StaffNoticeKind[]>> {
   const out = new Map<string, StaffNoticeKind[]>();
   if (!requestIds.length) return out;
-  const db = await getDb();
-  const rows = await db
-    .selectDistinct({ requestId: staffNotices.requestId, kind: staffNotices.kind })
-    .from(staffNotices)
-    .where(and(isNull(staffNotices.seenAt), inArray(staffNotices.requestId, requestIds)));
+  const rows = await unseenKindsOf(await getDb()).execute({ ids: requestIds });
   for (const r of rows) out.set(r.requestId, [...(out.get(r.requestId) ?? []), r.kind]);
   return out;
 }
