@@ -63,10 +63,11 @@ export async function getRequestRow(requestId: string) {
 }
 
 export async function getRequestDetail(requestId: string) {
-  const row = await getRequestRow(requestId);
-  if (!row) return null;
   const db = await getDb();
-  const [versions, messages, photos, sags, emails, audit] = await Promise.all([
+  // The row and its lists together (one round trip on a PostgreSQL server, not two); an unknown id
+  // finds no row and empty lists.
+  const [row, versions, messages, photos, sags, emails, audit] = await Promise.all([
+    getRequestRow(requestId),
     listVersions(requestId),
     requestMessagesOf(db).execute({ id: requestId }),
     requestPhotos(db).execute({ id: requestId }),
@@ -74,6 +75,7 @@ export async function getRequestDetail(requestId: string) {
     listOutboundEmailsForRequest(requestId),
     listAuditForRequest(requestId),
   ]);
+  if (!row) return null;
   return {
     ...row.request,
     assignedTunerName: row.tunerName,
