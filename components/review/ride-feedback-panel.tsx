@@ -38,7 +38,7 @@ export function RideFeedbackPanel({ requestId, rows }: { requestId: string; rows
               </p>
               {r.front.length ? <p>Front: {words(r.front)}</p> : null}
               {r.rear.length ? <p>Rear: {words(r.rear)}</p> : null}
-              {r.notes ? <p className="whitespace-pre-line italic">“{r.notes}”</p> : null}
+              {r.notes ? <p className="font-quote whitespace-pre-line italic">“{r.notes}”</p> : null}
               {r.proposal.changes.length ? (
                 <ul className="list-disc pl-5 text-sm">
                   {r.proposal.changes.map((c) => (

@@ -1,5 +1,5 @@
 // The rider's side at phone size (390×844): numbers typed with a decimal comma, one set of sag terms
-// and reading labels, the signed-in rider, the unknown link, the earlier reports, the favicon.
+// and reading labels, the signed-in rider, the unknown link, the earlier reports, the favicon, the fonts.
 import AxeBuilder from "@axe-core/playwright";
 import type { Page } from "@playwright/test";
 import { tinyPng } from "../fixtures/images";
@@ -143,6 +143,18 @@ test.describe("the rider's pages", () => {
     expect(served.status()).toBe(200);
     expect(served.headers()["content-type"]).toContain("image/svg+xml");
   });
+
+  test("the form downloads the upright font only; the italic waits for a page that shows it", async ({ page }) => {
+    const fonts: string[] = [];
+    page.on("request", (r) => {
+      if (r.resourceType() === "font") fonts.push(new URL(r.url()).pathname);
+    });
+    await page.goto("/request");
+    await page.waitForLoadState("networkidle");
+    expect(fonts).toHaveLength(1);
+    expect(fonts[0]).toMatch(/inter_latin_wght_normal/);
+    expect(await page.locator('link[rel="preload"][as="font"]').count()).toBe(1);
+  });
 });
 
 test.describe("the shop's wording of the rider e-mails", () => {
@@ -197,6 +209,11 @@ test.describe("after the first rides", () => {
     await signInWithPassword(shop, "tuner@sagwise.test", `/shop/requests/${id}`);
     const panel = shop.getByRole("region", { name: "After the first rides" });
     await expect(panel).toContainText("Front: Bottoms out");
+    // The rider's own words are quoted in Inter's italic face, fetched for this page only.
+    const quote = panel.getByText("“Still bottoms on the big double.”");
+    await expect(quote).toHaveCSS("font-style", "italic");
+    expect(await quote.evaluate((el) => getComputedStyle(el).fontFamily)).toMatch(/interItalic/);
+    await expect.poll(() => quote.evaluate(() => document.fonts.check('italic 16px "interItalic"'))).toBe(true);
     await panel.getByRole("button", { name: "Send the revised sheet with these changes" }).click();
     await expect(panel).toContainText("Answered with version 2.");
   });
