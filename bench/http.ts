@@ -100,6 +100,9 @@ if (!hasProductionBuild()) {
     let submitted = 0;
     const routes: [string, autocannon.Options][] = [
       ["health", { url: `${base}/api/health` }],
+      // A floor for reading the page ratios below: a page with no data of its own (the sign-in form,
+      // signed out), which costs Next.js's two renders (payload, then HTML) and the proxy's nonce.
+      ["sign-in page", { url: `${base}/sign-in` }],
       ["queue page", { url: `${base}/shop`, headers: staff }],
       // What the queue page's list then asks for, with the per-status counts of its header.
       ["queue list", { url: `${base}/api/requests?counts=1`, headers: staff }],
